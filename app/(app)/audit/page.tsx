@@ -1,0 +1,34 @@
+import type { Metadata } from "next";
+import { listAudit } from "@/db/audit";
+import { requirePage } from "@/lib/auth/session";
+
+export const metadata: Metadata = { title: "Audit log" };
+
+export default async function AuditPage() {
+  const principal = await requirePage("audit.view");
+  const rows = await listAudit(principal.organisationId);
+  return (
+    <div className="flex max-w-4xl flex-col gap-4">
+      <h1 className="text-3xl font-bold">Audit log</h1>
+      <p className="text-lg">The latest 100 changes in your company, newest first.</p>
+      <table className="w-full border-collapse text-left text-base">
+        <thead>
+          <tr className="border-b-2 border-ink">
+            <th className="py-2 pr-3">When (UTC)</th>
+            <th className="py-2 pr-3">Who</th>
+            <th className="py-2 pr-3">What</th>
+          </tr>
+        </thead>
+        <tbody>
+          {rows.map((r) => (
+            <tr key={r.id} className="border-b border-idle">
+              <td className="py-2 pr-3 whitespace-nowrap">{new Date(r.at).toISOString().slice(0, 16).replace("T", " ")}</td>
+              <td className="py-2 pr-3">{r.actorName ?? "system"}</td>
+              <td className="py-2 pr-3">{r.action.replaceAll("_", " ").replace(".", ": ")}</td>
+            </tr>
+          ))}
+        </tbody>
+      </table>
+    </div>
+  );
+}

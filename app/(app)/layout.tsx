@@ -1,0 +1,13 @@
+import { AppShell } from "@/components/shell/app-shell";
+import { getOrganisation } from "@/db/people";
+import { requirePage } from "@/lib/auth/session";
+
+export default async function AppLayout({ children }: { children: React.ReactNode }) {
+  const principal = await requirePage();
+  const organisation = await getOrganisation(principal.organisationId);
+  return (
+    <AppShell principal={principal} organisationName={organisation?.name ?? ""}>
+      {children}
+    </AppShell>
+  );
+}

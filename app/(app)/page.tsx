@@ -1,0 +1,50 @@
+import Link from "next/link";
+import { countInspectionsDue, countItemsByStatus } from "@/db/items";
+import { listOpenInvites } from "@/db/people";
+import { can } from "@/lib/auth/roles";
+import { requirePage } from "@/lib/auth/session";
+
+export default async function TodayPage() {
+  const principal = await requirePage();
+  const [byStatus, due] = await Promise.all([
+    countItemsByStatus(principal.organisationId),
+    countInspectionsDue(principal.organisationId),
+  ]);
+  const invites = can(principal, "people.manage") ? await listOpenInvites(principal.organisationId) : [];
+  const tiles = [
+    { label: "In service", value: byStatus.in_service ?? 0, tone: "border-ok bg-ok-bg text-ok" },
+    { label: "Tagged out", value: byStatus.tagged_out ?? 0, tone: "border-stop bg-stop-bg text-stop" },
+    { label: "Inspection due in 30 days", value: due, tone: "border-caution bg-caution-bg text-caution" },
+    { label: "Retired or lost", value: (byStatus.retired ?? 0) + (byStatus.lost ?? 0), tone: "border-idle bg-idle-bg text-idle" },
+  ];
+  return (
+    <div className="flex max-w-4xl flex-col gap-6">
+      <h1 className="text-3xl font-bold">Good to see you, {principal.name.split(" ")[0]}</h1>
+      <section aria-labelledby="gear-heading" className="flex flex-col gap-3">
+        <h2 id="gear-heading" className="text-xl font-bold">Gear at a glance</h2>
+        <ul className="grid grid-cols-2 gap-3 md:grid-cols-4">
+          {tiles.map((t) => (
+            <li key={t.label} className={`rounded-xl border-2 p-4 ${t.tone}`}>
+              <p className="text-4xl font-bold">{t.value}</p>
+              <p className="text-base font-bold">{t.label}</p>
+            </li>
+          ))}
+        </ul>
+        <Link href="/stock" className="text-lg font-bold underline">Open the stock list</Link>
+      </section>
+      {can(principal, "people.manage") && (
+        <section aria-labelledby="team-heading" className="flex flex-col gap-2">
+          <h2 id="team-heading" className="text-xl font-bold">Team</h2>
+          <p className="text-lg">
+            {invites.length === 0 ? "No invites waiting." : `${invites.length} invite${invites.length === 1 ? "" : "s"} waiting for an answer.`}{" "}
+            <Link href="/people" className="font-bold underline">Manage people</Link>
+          </p>
+        </section>
+      )}
+      <p className="rounded-lg border-2 border-caution bg-caution-bg p-3 text-base text-caution">
+        Before every trip the driver inspects the load and every tiedown. Linkyard&apos;s records and checks
+        support that inspection; they do not replace it. Local rules and licensed practice govern.
+      </p>
+    </div>
+  );
+}

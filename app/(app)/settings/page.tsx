@@ -1,0 +1,41 @@
+import type { Metadata } from "next";
+import { CreateTokenForm, OrganisationForm, RevokeTokenButton } from "@/components/settings/settings-forms";
+import { listApiTokens } from "@/db/api-tokens";
+import { getOrganisation } from "@/db/people";
+import { ROLE_LABELS, type Role } from "@/lib/auth/roles";
+import { requirePage } from "@/lib/auth/session";
+
+export const metadata: Metadata = { title: "Settings" };
+
+export default async function SettingsPage() {
+  const principal = await requirePage("settings.manage");
+  const [organisation, tokens] = await Promise.all([
+    getOrganisation(principal.organisationId),
+    listApiTokens(principal.organisationId),
+  ]);
+  return (
+    <div className="flex max-w-3xl flex-col gap-6">
+      <h1 className="text-3xl font-bold">Settings</h1>
+      <OrganisationForm name={organisation!.name} publicTagView={organisation!.publicTagView} />
+      <section aria-labelledby="tokens-heading" className="flex flex-col gap-3 rounded-xl border-2 border-ink-soft p-4">
+        <h2 id="tokens-heading" className="text-xl font-bold">API tokens</h2>
+        <p className="text-base">
+          For integrations: send <code className="font-mono">Authorization: Bearer &lt;token&gt;</code> to{" "}
+          <code className="font-mono">/api/v1/…</code>. A token acts with the role you choose.
+        </p>
+        <ul className="flex flex-col gap-2">
+          {tokens.map((t) => (
+            <li key={t.id} className="flex flex-wrap items-center justify-between gap-2 rounded-lg border-2 border-idle p-3">
+              <span className="text-lg">
+                <strong>{t.name}</strong> · {ROLE_LABELS[t.role as Role]} ·{" "}
+                {t.lastUsedAt ? `last used ${new Date(t.lastUsedAt).toLocaleDateString("en-CA")}` : "never used"}
+              </span>
+              <RevokeTokenButton tokenId={t.id} name={t.name} />
+            </li>
+          ))}
+        </ul>
+        <CreateTokenForm />
+      </section>
+    </div>
+  );
+}

@@ -1,0 +1,61 @@
+"use server";
+import { cookies, headers } from "next/headers";
+import { redirect } from "next/navigation";
+import { z } from "zod";
+import { publicFormAction } from "@/lib/auth/action";
+import * as accounts from "@/lib/auth/accounts";
+import {
+  acceptInviteSchema,
+  resetPasswordSchema,
+  resetRequestSchema,
+  signInSchema,
+  signUpSchema,
+} from "@/lib/auth/schemas";
+import { currentSessionId, endSession, startSession } from "@/lib/auth/session";
+
+async function setSessionCookie(userId: string) {
+  const cookie = await startSession(userId);
+  (await cookies()).set(cookie.name, cookie.value, cookie.attributes);
+}
+
+async function clientIp() {
+  return (await headers()).get("x-forwarded-for")?.split(",")[0]?.trim() || "local";
+}
+
+export const signInAction = publicFormAction(signInSchema, async (input) => {
+  const userId = await accounts.signIn({ ...input, ip: await clientIp() });
+  await setSessionCookie(userId);
+  redirect("/");
+});
+
+export const signUpAction = publicFormAction(signUpSchema, async (input) => {
+  const userId = await accounts.signUp(input);
+  await setSessionCookie(userId);
+  redirect("/");
+});
+
+export const acceptInviteAction = publicFormAction(acceptInviteSchema, async (input) => {
+  const userId = await accounts.acceptInvite(input);
+  await setSessionCookie(userId);
+  redirect("/");
+});
+
+export const requestResetAction = publicFormAction(resetRequestSchema, async ({ email }) => {
+  await accounts.requestPasswordReset(email);
+  return { ok: true, message: "If that e-mail has an account, a reset link is on its way. It works for 2 hours." };
+});
+
+export const resetPasswordAction = publicFormAction(resetPasswordSchema, async (input) => {
+  const userId = await accounts.resetPassword(input);
+  await setSessionCookie(userId);
+  redirect("/");
+});
+
+export const signOutAction = publicFormAction(z.object({}), async () => {
+  const sessionId = await currentSessionId();
+  if (sessionId) {
+    const blank = await endSession(sessionId);
+    (await cookies()).set(blank.name, blank.value, blank.attributes);
+  }
+  redirect("/sign-in");
+});

@@ -1,0 +1,19 @@
+import type { Metadata, Viewport } from "next";
+import "@fontsource/roboto-condensed/400.css";
+import "@fontsource/roboto-condensed/700.css";
+import "./globals.css";
+
+export const metadata: Metadata = {
+  title: { default: "Linkyard", template: "%s · Linkyard" },
+  description: "Tiedown gear, tags, checks and securement checks for equipment hauling.",
+};
+
+export const viewport: Viewport = { width: "device-width", initialScale: 1, themeColor: "#1d2b3a" };
+
+export default function RootLayout({ children }: { children: React.ReactNode }) {
+  return (
+    <html lang="en">
+      <body className="min-h-dvh">{children}</body>
+    </html>
+  );
+}

@@ -1,0 +1,85 @@
+"use client";
+import Link from "next/link";
+import { useActionState } from "react";
+import {
+  acceptInviteAction,
+  requestResetAction,
+  resetPasswordAction,
+  signInAction,
+  signUpAction,
+} from "@/app/(auth)/actions";
+import { SubmitButton } from "@/components/ui/button";
+import { Field } from "@/components/ui/field";
+import { FormAlert } from "@/components/ui/form-alert";
+import { initialFormState } from "@/lib/forms/state";
+
+export function SignInForm() {
+  const [state, action] = useActionState(signInAction, initialFormState);
+  return (
+    <form action={action} className="flex flex-col gap-2" noValidate>
+      <FormAlert state={state} />
+      <Field label="E-mail" name="email" type="email" autoComplete="email" defaultValue={state.values?.email} error={state.fieldErrors?.email} />
+      <Field label="Password" name="password" type="password" autoComplete="current-password" error={state.fieldErrors?.password} />
+      <SubmitButton pendingLabel="Signing in…">Sign in</SubmitButton>
+      <div className="mt-4 flex flex-col gap-3 text-lg">
+        <Link className="underline" href="/forgot-password">Forgot your password?</Link>
+        <Link className="underline" href="/sign-up">New here? Set up your company</Link>
+      </div>
+    </form>
+  );
+}
+
+export function SignUpForm() {
+  const [state, action] = useActionState(signUpAction, initialFormState);
+  return (
+    <form action={action} className="flex flex-col gap-2" noValidate>
+      <FormAlert state={state} />
+      <Field label="Company name" name="organisationName" autoComplete="organization" defaultValue={state.values?.organisationName} error={state.fieldErrors?.organisationName} />
+      <Field label="Your name" name="name" autoComplete="name" defaultValue={state.values?.name} error={state.fieldErrors?.name} />
+      <Field label="E-mail" name="email" type="email" autoComplete="email" defaultValue={state.values?.email} error={state.fieldErrors?.email} />
+      <Field label="Password" name="password" type="password" autoComplete="new-password" hint="At least 10 characters." error={state.fieldErrors?.password} />
+      <SubmitButton pendingLabel="Setting up…">Create company and sign in</SubmitButton>
+      <Link className="mt-4 text-lg underline" href="/sign-in">Already have an account? Sign in</Link>
+    </form>
+  );
+}
+
+export function ForgotPasswordForm() {
+  const [state, action] = useActionState(requestResetAction, initialFormState);
+  return (
+    <form action={action} className="flex flex-col gap-2" noValidate>
+      <FormAlert state={state} />
+      <Field label="E-mail" name="email" type="email" autoComplete="email" defaultValue={state.values?.email} error={state.fieldErrors?.email} />
+      <SubmitButton pendingLabel="Sending…">Send reset link</SubmitButton>
+      <Link className="mt-4 text-lg underline" href="/sign-in">Back to sign in</Link>
+    </form>
+  );
+}
+
+export function ResetPasswordForm({ token }: { token: string }) {
+  const [state, action] = useActionState(resetPasswordAction, initialFormState);
+  return (
+    <form action={action} className="flex flex-col gap-2" noValidate>
+      <FormAlert state={state} />
+      <input type="hidden" name="token" value={token} />
+      <Field label="New password" name="password" type="password" autoComplete="new-password" hint="At least 10 characters." error={state.fieldErrors?.password} />
+      <SubmitButton pendingLabel="Saving…">Save password and sign in</SubmitButton>
+    </form>
+  );
+}
+
+export function AcceptInviteForm({ token, email }: { token: string; email: string }) {
+  const [state, action] = useActionState(acceptInviteAction, initialFormState);
+  return (
+    <form action={action} className="flex flex-col gap-2" noValidate>
+      <FormAlert state={state} />
+      <p className="text-lg">
+        Your sign-in e-mail: <strong>{email}</strong>
+      </p>
+      <input type="hidden" name="token" value={token} />
+      <Field label="Your name" name="name" autoComplete="name" defaultValue={state.values?.name} error={state.fieldErrors?.name} />
+      <Field label="Choose a password" name="password" type="password" autoComplete="new-password" hint="At least 10 characters." error={state.fieldErrors?.password} />
+      <SubmitButton pendingLabel="Joining…">Join and sign in</SubmitButton>
+    </form>
+  );
+}

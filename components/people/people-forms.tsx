@@ -1,0 +1,75 @@
+"use client";
+import { useActionState } from "react";
+import { inviteAction, updatePersonAction, withdrawInviteAction } from "@/app/(app)/people/actions";
+import { SubmitButton } from "@/components/ui/button";
+import { Field, SelectField } from "@/components/ui/field";
+import { FormAlert } from "@/components/ui/form-alert";
+import { ROLE_LABELS, ROLES, type Role } from "@/lib/auth/roles";
+import { initialFormState } from "@/lib/forms/state";
+
+const roleOptions = ROLES.map((r) => ({ value: r, label: ROLE_LABELS[r] }));
+
+export function InviteForm() {
+  const [state, action] = useActionState(inviteAction, initialFormState);
+  return (
+    <form action={action} className="flex flex-col gap-2 rounded-xl border-2 border-ink-soft p-4" noValidate>
+      <h2 className="text-xl font-bold">Invite someone</h2>
+      <FormAlert state={state} />
+      <Field label="E-mail" name="email" type="email" defaultValue={state.ok ? "" : state.values?.email} error={state.fieldErrors?.email} />
+      <SelectField label="Role" name="role" options={roleOptions} defaultValue={state.values?.role ?? "yard_hand"} error={state.fieldErrors?.role} />
+      <label className="flex min-h-tap items-center gap-3 text-lg">
+        <input type="checkbox" name="designated" className="h-6 w-6" />
+        Designated person (may do periodic inspections and return gear to service)
+      </label>
+      <SubmitButton pendingLabel="Sending…">Send invite</SubmitButton>
+    </form>
+  );
+}
+
+export function PersonRow({
+  person,
+  isSelf,
+}: {
+  person: { id: string; name: string; email: string; role: Role; designated: boolean; disabled: boolean };
+  isSelf: boolean;
+}) {
+  const [state, action] = useActionState(updatePersonAction, initialFormState);
+  return (
+    <li className="rounded-xl border-2 border-ink-soft p-4">
+      <form action={action} className="flex flex-col gap-2" noValidate>
+        <p className="text-xl font-bold">
+          {person.name} {isSelf && <span className="text-base font-normal">(you)</span>}
+          {person.disabled && <span className="ml-2 rounded bg-idle-bg px-2 text-base text-idle">Disabled</span>}
+        </p>
+        <p className="text-base text-ink-soft">{person.email}</p>
+        <input type="hidden" name="userId" value={person.id} />
+        <SelectField label={`Role of ${person.name}`} name="role" id={`role-${person.id}`} options={roleOptions} defaultValue={person.role} error={state.fieldErrors?.role} />
+        <label className="flex min-h-tap items-center gap-3 text-lg">
+          <input type="checkbox" name="designated" defaultChecked={person.designated} className="h-6 w-6" />
+          Designated person
+        </label>
+        {!isSelf && (
+          <label className="flex min-h-tap items-center gap-3 text-lg">
+            <input type="checkbox" name="disabled" defaultChecked={person.disabled} className="h-6 w-6" />
+            Disabled (cannot sign in)
+          </label>
+        )}
+        <FormAlert state={state} />
+        <SubmitButton variant="secondary" pendingLabel="Saving…">Save {person.name}</SubmitButton>
+      </form>
+    </li>
+  );
+}
+
+export function WithdrawInviteButton({ inviteId, email }: { inviteId: string; email: string }) {
+  const [state, action] = useActionState(withdrawInviteAction, initialFormState);
+  return (
+    <form action={action} className="flex flex-col gap-1">
+      <input type="hidden" name="inviteId" value={inviteId} />
+      <SubmitButton variant="secondary" pendingLabel="Withdrawing…" aria-label={`Withdraw the invite to ${email}`}>
+        Withdraw
+      </SubmitButton>
+      <FormAlert state={state} />
+    </form>
+  );
+}

@@ -1,0 +1,63 @@
+"use client";
+import { useActionState } from "react";
+import { createTokenAction, revokeTokenAction, saveOrganisationAction } from "@/app/(app)/settings/actions";
+import { SubmitButton } from "@/components/ui/button";
+import { Field, SelectField } from "@/components/ui/field";
+import { FormAlert } from "@/components/ui/form-alert";
+import { ROLE_LABELS, ROLES } from "@/lib/auth/roles";
+import { initialFormState } from "@/lib/forms/state";
+
+export function OrganisationForm({ name, publicTagView }: { name: string; publicTagView: boolean }) {
+  const [state, action] = useActionState(saveOrganisationAction, initialFormState);
+  return (
+    <form action={action} className="flex flex-col gap-2 rounded-xl border-2 border-ink-soft p-4" noValidate>
+      <h2 className="text-xl font-bold">Company</h2>
+      <FormAlert state={state} />
+      <Field label="Company name" name="name" defaultValue={state.values?.name ?? name} error={state.fieldErrors?.name} />
+      <label className="flex min-h-tap items-start gap-3 text-lg">
+        <input type="checkbox" name="publicTagView" defaultChecked={publicTagView} className="mt-1 h-6 w-6" />
+        <span>
+          Public tag view: someone without an account who scans a tag (a roadside inspector) sees only the
+          kind, grade, size, WLL, status and the date of the last inspection.
+        </span>
+      </label>
+      <SubmitButton pendingLabel="Saving…">Save settings</SubmitButton>
+    </form>
+  );
+}
+
+export function CreateTokenForm() {
+  const [state, action] = useActionState(createTokenAction, initialFormState);
+  return (
+    <form action={action} className="flex flex-col gap-2" noValidate>
+      <FormAlert state={state} />
+      {state.ok && state.values?.secret && (
+        <p className="break-all rounded-lg border-2 border-ink bg-signal/30 p-3 font-mono text-base" data-testid="new-token">
+          {state.values.secret}
+        </p>
+      )}
+      <Field label="Token name" name="name" hint="Who or what uses it, e.g. dispatch spreadsheet." error={state.fieldErrors?.name} />
+      <SelectField
+        label="Acts as"
+        name="role"
+        options={ROLES.map((r) => ({ value: r, label: ROLE_LABELS[r] }))}
+        defaultValue="planner"
+        error={state.fieldErrors?.role}
+      />
+      <SubmitButton pendingLabel="Creating…">Create API token</SubmitButton>
+    </form>
+  );
+}
+
+export function RevokeTokenButton({ tokenId, name }: { tokenId: string; name: string }) {
+  const [state, action] = useActionState(revokeTokenAction, initialFormState);
+  return (
+    <form action={action}>
+      <input type="hidden" name="tokenId" value={tokenId} />
+      <SubmitButton variant="danger" pendingLabel="Revoking…" aria-label={`Revoke token ${name}`}>
+        Revoke
+      </SubmitButton>
+      <FormAlert state={state} />
+    </form>
+  );
+}

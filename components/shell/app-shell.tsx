@@ -1,0 +1,62 @@
+import Link from "next/link";
+import { ROLE_LABELS } from "@/lib/auth/roles";
+import type { Principal } from "@/lib/auth/session";
+import { navFor } from "@/lib/shell/nav";
+import { Logo } from "@/components/ui/logo";
+import { NavLinks } from "./nav-links";
+import { SignOutButton } from "./sign-out-button";
+
+export function AppShell({
+  principal,
+  organisationName,
+  children,
+}: {
+  principal: Principal;
+  organisationName: string;
+  children: React.ReactNode;
+}) {
+  const entries = navFor(principal);
+  return (
+    <div className="min-h-dvh md:grid md:grid-cols-[15rem_1fr]">
+      <header className="sticky top-0 z-10 flex items-center justify-between gap-3 bg-deck px-4 py-2 text-white md:hidden">
+        <Link href="/" className="flex items-center gap-2 text-xl font-bold">
+          <Logo className="h-8 w-8" />
+          Linkyard
+        </Link>
+        <div className="flex items-center gap-2">
+          <span className="text-right text-sm leading-tight">
+            {principal.name}
+            <br />
+            <span className="text-signal">{ROLE_LABELS[principal.role]}</span>
+          </span>
+          <SignOutButton />
+        </div>
+      </header>
+
+      <aside className="hidden bg-deck p-4 text-white md:flex md:flex-col md:gap-6">
+        <Link href="/" className="flex items-center gap-2 text-2xl font-bold">
+          <Logo />
+          Linkyard
+        </Link>
+        <p className="text-base leading-snug">
+          <strong>{organisationName}</strong>
+          <br />
+          {principal.name} · <span className="text-signal">{ROLE_LABELS[principal.role]}</span>
+          {principal.designated && <><br /><span className="text-sm">Designated inspector</span></>}
+        </p>
+        <nav aria-label="Main">
+          <NavLinks entries={entries} variant="side" />
+        </nav>
+        <div className="mt-auto">
+          <SignOutButton />
+        </div>
+      </aside>
+
+      <main className="px-4 pb-24 pt-4 md:px-8 md:pb-8">{children}</main>
+
+      <nav aria-label="Main" className="fixed inset-x-0 bottom-0 z-10 bg-deck md:hidden">
+        <NavLinks entries={entries} variant="bar" />
+      </nav>
+    </div>
+  );
+}

@@ -1,0 +1,179 @@
+import "server-only";
+import { generateIdFromEntropySize } from "lucia";
+import { db } from "@/db";
+import { writeAudit } from "@/db/audit";
+import * as people from "@/db/people";
+import { config } from "@/lib/config";
+import { conflict, fieldError, forbidden, gone, notFound, tooManyRequests, unauthorized } from "@/lib/http/errors";
+import { inviteMail, passwordResetMail } from "@/lib/mail/templates";
+import { sendMail } from "@/lib/mail/send";
+import type { Role } from "./roles";
+import { can } from "./roles";
+import { hashPassword, hashSecret, newSecret, verifyPassword } from "./secrets";
+import type { Principal } from "./session";
+
+// The account flows, shared by the forms (server actions) and the JSON API.
+// Each validates its own business rules and throws AppError with the field at fault.
+
+export const INVITE_DAYS = 7;
+export const RESET_HOURS = 2;
+
+// A fixed hash to verify against when the e-mail is unknown, so both cases take as long.
+let decoyHash: Promise<string> | undefined;
+
+export async function signUp(input: { organisationName: string; name: string; email: string; password: string }) {
+  if (await people.emailTaken(input.email)) {
+    throw conflict("An account with this e-mail already exists. Sign in, or reset the password.", [
+      { path: "email", message: "An account with this e-mail already exists." },
+    ]);
+  }
+  const passwordHash = await hashPassword(input.password);
+  const userId = generateIdFromEntropySize(10);
+  await db.transaction(async (trx) => {
+    const organisationId = await people.createOrganisation(input.organisationName, trx);
+    await people.insertUser({ id: userId, organisationId, email: input.email, name: input.name, role: "owner", passwordHash }, trx);
+    await writeAudit({ organisationId, actorId: userId, action: "organisation.created", entity: "organisation", entityId: organisationId, after: { name: input.organisationName } }, trx);
+  });
+  return userId;
+}
+
+/**
+ * Checks e-mail and password. Refuses after SIGN_IN_MAX_FAILURES failures for the account
+ * (since its last success) or 4x that many from one address within the window.
+ */
+export async function signIn(input: { email: string; password: string; ip: string }): Promise<string> {
+  const since = new Date(Date.now() - config.SIGN_IN_WINDOW_MINUTES * 60_000);
+  const failures = await people.recentFailures(input.email, input.ip, since);
+  if (failures.byEmail >= config.SIGN_IN_MAX_FAILURES || failures.byIp >= config.SIGN_IN_MAX_FAILURES * 4) {
+    throw tooManyRequests(
+      `Too many failed sign-ins. Wait ${config.SIGN_IN_WINDOW_MINUTES} minutes, or reset your password.`,
+    );
+  }
+  const user = await people.findCredentials(input.email);
+  decoyHash ??= hashPassword("linkyard-decoy-password");
+  const ok = await verifyPassword(user?.passwordHash ?? (await decoyHash), input.password);
+  if (!user || !ok || user.disabledAt) {
+    await people.recordSignInAttempt(input.email, input.ip, false);
+    throw unauthorized("That e-mail and password do not match an account.");
+  }
+  await people.recordSignInAttempt(input.email, input.ip, true);
+  return user.id;
+}
+
+export async function invitePerson(actor: Principal, input: { email: string; role: Role; designated: boolean }) {
+  if (!can(actor, "people.manage")) throw forbidden();
+  if (await people.emailTaken(input.email)) {
+    throw conflict("This person already has a Linkyard account.", [
+      { path: "email", message: "This e-mail already has an account." },
+    ]);
+  }
+  const secret = newSecret();
+  const expiresAt = new Date(Date.now() + INVITE_DAYS * 86_400_000);
+  const organisation = await people.getOrganisation(actor.organisationId);
+  const id = await db.transaction(async (trx) => {
+    const inviteId = await people.insertInvite(
+      { organisationId: actor.organisationId, email: input.email, role: input.role, designated: input.designated, tokenHash: hashSecret(secret), invitedBy: actor.userId, expiresAt },
+      trx,
+    );
+    await writeAudit({ organisationId: actor.organisationId, actorId: actor.userId, action: "person.invited", entity: "invite", entityId: inviteId, after: input }, trx);
+    return inviteId;
+  });
+  await sendMail(
+    inviteMail({
+      to: input.email,
+      organisationName: organisation!.name,
+      inviterName: actor.name,
+      role: input.role,
+      link: `${config.APP_URL}/invite/${secret}`,
+      expiresAt,
+    }),
+  );
+  return { id, expiresAt };
+}
+
+/** What the invite page shows before the person accepts. */
+export async function describeInvite(token: string) {
+  const invite = await people.findInviteByTokenHash(hashSecret(token));
+  return invite ? { ...invite, usable: inviteProblem(invite) === null } : null;
+}
+
+function inviteProblem(invite: { acceptedAt: Date | null; revokedAt: Date | null; expiresAt: Date }): string | null {
+  if (invite.acceptedAt) return "This invite has already been used. Sign in instead.";
+  if (invite.revokedAt) return "This invite was withdrawn. Ask your owner for a new one.";
+  if (invite.expiresAt.getTime() < Date.now()) return "This invite has expired. Ask your owner for a new one.";
+  return null;
+}
+
+export async function acceptInvite(input: { token: string; name: string; password: string }): Promise<string> {
+  const passwordHash = await hashPassword(input.password);
+  return db.transaction(async (trx) => {
+    const invite = await trx("invites").where({ token_hash: hashSecret(input.token) }).forUpdate().first();
+    if (!invite) throw notFound("This invite link is not valid. Ask your owner for a new one.");
+    const problem = inviteProblem({ acceptedAt: invite.accepted_at, revokedAt: invite.revoked_at, expiresAt: invite.expires_at });
+    if (problem) throw gone(problem);
+    if (await people.emailTaken(invite.email, trx)) throw conflict("This e-mail already has an account. Sign in instead.");
+    const userId = generateIdFromEntropySize(10);
+    await people.insertUser(
+      { id: userId, organisationId: invite.organisation_id, email: invite.email, name: input.name, role: invite.role, designated: invite.designated, passwordHash },
+      trx,
+    );
+    await people.markInviteAccepted(invite.id, trx);
+    await writeAudit({ organisationId: invite.organisation_id, actorId: userId, action: "person.joined", entity: "user", entityId: userId, after: { email: invite.email, role: invite.role } }, trx);
+    return userId;
+  });
+}
+
+export async function withdrawInvite(actor: Principal, inviteId: string) {
+  if (!can(actor, "people.manage")) throw forbidden();
+  await db.transaction(async (trx) => {
+    const changed = await people.revokeInvite(actor.organisationId, inviteId, trx);
+    if (!changed) throw notFound("No open invite with that id.");
+    await writeAudit({ organisationId: actor.organisationId, actorId: actor.userId, action: "invite.withdrawn", entity: "invite", entityId: inviteId }, trx);
+  });
+}
+
+/** Always answers the same way, so the form does not reveal which e-mails have accounts. */
+export async function requestPasswordReset(email: string): Promise<void> {
+  const userId = await people.findUserIdByEmail(email);
+  if (!userId) return;
+  const secret = newSecret();
+  const expiresAt = new Date(Date.now() + RESET_HOURS * 3_600_000);
+  await people.insertPasswordReset(userId, hashSecret(secret), expiresAt);
+  await sendMail(passwordResetMail({ to: email, link: `${config.APP_URL}/reset-password/${secret}`, expiresAt }));
+}
+
+export async function resetPassword(input: { token: string; password: string }): Promise<string> {
+  const passwordHash = await hashPassword(input.password);
+  return db.transaction(async (trx) => {
+    const reset = await people.findPasswordReset(hashSecret(input.token), trx);
+    if (!reset) throw notFound("This reset link is not valid. Ask for a new one.");
+    if (reset.usedAt) throw gone("This reset link has already been used. Ask for a new one.");
+    if (reset.expiresAt.getTime() < Date.now()) throw gone("This reset link has expired. Ask for a new one.");
+    await people.setPassword(reset.userId, passwordHash, trx);
+    await people.markPasswordResetUsed(reset.id, trx);
+    await people.deleteSessionsOf(reset.userId, trx); // sign out everywhere else
+    const user = await trx("users").where({ id: reset.userId }).first("organisation_id");
+    await writeAudit({ organisationId: user.organisation_id, actorId: reset.userId, action: "person.password_reset", entity: "user", entityId: reset.userId }, trx);
+    return reset.userId as string;
+  });
+}
+
+export async function updatePerson(
+  actor: Principal,
+  userId: string,
+  patch: { role?: Role; designated?: boolean; disabled?: boolean },
+) {
+  if (!can(actor, "people.manage")) throw forbidden();
+  await db.transaction(async (trx) => {
+    const before = await people.getPerson(actor.organisationId, userId, trx);
+    if (!before) throw notFound("No such person in your organisation.");
+    const losesOwner = before.role === "owner" && !before.disabled && ((patch.role && patch.role !== "owner") || patch.disabled);
+    if (losesOwner && (await people.countActiveOwners(actor.organisationId, trx)) <= 1) {
+      throw fieldError("role", "The organisation needs at least one active owner.");
+    }
+    await people.updatePerson(actor.organisationId, userId, patch, trx);
+    if (patch.disabled) await people.deleteSessionsOf(userId, trx);
+    const after = await people.getPerson(actor.organisationId, userId, trx);
+    await writeAudit({ organisationId: actor.organisationId, actorId: actor.userId, action: "person.updated", entity: "user", entityId: userId, before, after }, trx);
+  });
+}

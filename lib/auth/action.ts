@@ -1,0 +1,70 @@
+import "server-only";
+import { unstable_rethrow } from "next/navigation";
+import type { ZodType } from "zod";
+import { AppError, zodIssues } from "@/lib/http/errors";
+import type { FormState } from "@/lib/forms/state";
+import { can, type Permission } from "./roles";
+import { getPrincipal, type Principal } from "./session";
+
+const SECRET_FIELDS = /password|token/i;
+
+function echo(formData: FormData): Record<string, string> {
+  const values: Record<string, string> = {};
+  for (const [key, value] of formData.entries()) {
+    if (typeof value === "string" && !SECRET_FIELDS.test(key) && !key.startsWith("$")) values[key] = value;
+  }
+  return values;
+}
+
+function toState(error: AppError, values: Record<string, string>): FormState {
+  const fieldErrors: Record<string, string> = {};
+  for (const issue of error.issues) fieldErrors[issue.path] ??= issue.message;
+  return { ok: false, message: error.message, fieldErrors, values };
+}
+
+/**
+ * Wraps a server action: session, permission, zod parse of the form, then the body.
+ * Next checks the Origin header of every server action (its CSRF defence).
+ */
+export function formAction<T>(
+  permission: Permission,
+  schema: ZodType<T>,
+  body: (input: T, principal: Principal) => Promise<FormState | void>,
+) {
+  return run<T>(permission, schema, (input, principal) => body(input, principal!));
+}
+
+/** A form anyone may submit (sign-in, sign-up, password reset). */
+export function publicFormAction<T>(
+  schema: ZodType<T>,
+  body: (input: T, principal: Principal | null) => Promise<FormState | void>,
+) {
+  return run<T>(null, schema, body);
+}
+
+function run<T>(
+  permission: Permission | null,
+  schema: ZodType<T>,
+  body: (input: T, principal: Principal | null) => Promise<FormState | void>,
+) {
+  return async (_previous: FormState, formData: FormData): Promise<FormState> => {
+    const values = echo(formData);
+    try {
+      const principal = await getPrincipal();
+      if (permission) {
+        if (!principal) return { ok: false, message: "Your session has ended. Sign in again.", values };
+        if (!can(principal, permission)) return { ok: false, message: "Your role does not allow this.", values };
+      }
+      const parsed = schema.safeParse(Object.fromEntries(formData.entries()));
+      if (!parsed.success) {
+        return toState(new AppError(400, "Some fields need fixing.", zodIssues(parsed.error)), values);
+      }
+      return (await body(parsed.data, principal)) ?? { ok: true };
+    } catch (error) {
+      unstable_rethrow(error); // let redirect() and notFound() through
+      if (error instanceof AppError) return toState(error, values);
+      console.error(error);
+      return { ok: false, message: "Something went wrong on our side. Try again.", values };
+    }
+  };
+}

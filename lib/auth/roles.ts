@@ -1,0 +1,58 @@
+// Who may do what. Pure data and one function, so the matrix is readable in one place
+// and tested on its own (tests/unit/auth/roles.test.ts).
+
+export const ROLES = ["owner", "planner", "yard_hand"] as const;
+export type Role = (typeof ROLES)[number];
+
+export const ROLE_LABELS: Record<Role, string> = {
+  owner: "Owner",
+  planner: "Planner",
+  yard_hand: "Yard hand",
+};
+
+/** Everything a signed-in person can ask to do. */
+export type Permission =
+  | "people.manage" // invite, change roles, designate inspectors
+  | "settings.manage" // organisation settings, API tokens
+  | "stock.view" // stock list, item pages, scanning
+  | "stock.edit" // add, edit, move items
+  | "stock.import" // CSV import
+  | "stock.retire"
+  | "items.check" // pre-use check, report damage (tag-out)
+  | "items.inspect" // periodic inspection, return to service: owner or designated person
+  | "fleet.manage" // machines, trailers, kits
+  | "fleet.view"
+  | "securement.check" // rated-limit lookup and scratch securement check
+  | "reports.view"
+  | "audit.view";
+
+const GRANTS: Record<Role, readonly Permission[]> = {
+  owner: [
+    "people.manage", "settings.manage", "stock.view", "stock.edit", "stock.import", "stock.retire",
+    "items.check", "items.inspect", "fleet.manage", "fleet.view", "securement.check",
+    "reports.view", "audit.view",
+  ],
+  planner: ["stock.view", "stock.edit", "items.check", "fleet.manage", "fleet.view", "securement.check", "reports.view"],
+  yard_hand: ["stock.view", "items.check", "fleet.view", "securement.check"],
+};
+
+/** Permissions that a designated person gets whatever the role (periodic inspection). */
+const DESIGNATED_GRANTS: readonly Permission[] = ["items.inspect"];
+
+export interface Actor {
+  role: Role;
+  designated: boolean;
+}
+
+/**
+ * Whether an actor holds a permission.
+ * @example can({ role: "yard_hand", designated: true }, "items.inspect") // true
+ */
+export function can(actor: Actor, permission: Permission): boolean {
+  if (GRANTS[actor.role].includes(permission)) return true;
+  return actor.designated && DESIGNATED_GRANTS.includes(permission);
+}
+
+export function isRole(value: unknown): value is Role {
+  return typeof value === "string" && (ROLES as readonly string[]).includes(value);
+}

@@ -1,0 +1,62 @@
+import { z } from "zod";
+import { ROLES } from "./roles";
+
+// Shared by forms (server actions) and the JSON API, so both refuse the same input.
+export const emailField = z
+  .string({ error: "Enter an e-mail address." })
+  .trim()
+  .toLowerCase()
+  .min(1, "Enter an e-mail address.")
+  .pipe(z.email("Enter a valid e-mail address, like name@example.com."));
+
+export const passwordField = z
+  .string({ error: "Enter a password." })
+  .min(10, "Use at least 10 characters for the password.")
+  .max(200, "Use at most 200 characters for the password.");
+
+export const nameField = z
+  .string({ error: "Enter a name." })
+  .trim()
+  .min(1, "Enter a name.")
+  .max(100, "Keep the name under 100 characters.");
+
+export const roleField = z.enum(ROLES, { error: "Choose a role: owner, planner or yard hand." });
+
+/** Checkboxes arrive as "on" from forms and as booleans from JSON. */
+export const flagField = z
+  .union([z.boolean(), z.literal("on"), z.literal("true"), z.literal("false"), z.literal("")])
+  .optional()
+  .transform((v) => v === true || v === "on" || v === "true");
+
+export const signInSchema = z.object({
+  email: emailField,
+  password: z.string({ error: "Enter your password." }).min(1, "Enter your password."),
+});
+
+export const signUpSchema = z.object({
+  organisationName: nameField,
+  name: nameField,
+  email: emailField,
+  password: passwordField,
+});
+
+export const inviteSchema = z.object({ email: emailField, role: roleField, designated: flagField });
+
+export const acceptInviteSchema = z.object({
+  token: z.string().min(1, "This invite link is incomplete."),
+  name: nameField,
+  password: passwordField,
+});
+
+export const resetRequestSchema = z.object({ email: emailField });
+
+export const resetPasswordSchema = z.object({
+  token: z.string().min(1, "This reset link is incomplete."),
+  password: passwordField,
+});
+
+export const memberUpdateSchema = z.object({
+  role: roleField.optional(),
+  designated: z.boolean().optional(),
+  disabled: z.boolean().optional(),
+});

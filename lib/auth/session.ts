@@ -1,0 +1,96 @@
+import "server-only";
+import { cache } from "react";
+import { cookies } from "next/headers";
+import { forbidden, redirect } from "next/navigation";
+import { db } from "@/db";
+import { lucia } from "./lucia";
+import { can, type Permission, type Role } from "./roles";
+import { hashSecret } from "./secrets";
+
+/** Who is asking, as every route and action sees it. */
+export interface Principal {
+  userId: string;
+  organisationId: string;
+  role: Role;
+  designated: boolean;
+  name: string;
+  email: string;
+  via: "session" | "token";
+}
+
+async function principalFromSessionId(sessionId: string | undefined): Promise<Principal | null> {
+  if (!sessionId) return null;
+  // validateSession also extends a session that is past half its life (sliding expiry);
+  // the cookie itself lasts, so nothing needs re-setting here.
+  const { session, user } = await lucia.validateSession(sessionId);
+  if (!session || !user || user.disabledAt) return null;
+  return {
+    userId: user.id,
+    organisationId: user.organisationId,
+    role: user.role,
+    designated: user.designated,
+    name: user.name,
+    email: user.email,
+    via: "session",
+  };
+}
+
+/** The signed-in person of this request (cookie), or null. Cached per request. */
+export const getPrincipal = cache(async (): Promise<Principal | null> => {
+  const jar = await cookies();
+  return principalFromSessionId(jar.get(lucia.sessionCookieName)?.value);
+});
+
+/** For pages: send a stranger to sign-in, and answer 403 to the wrong role. */
+export async function requirePage(permission?: Permission): Promise<Principal> {
+  const principal = await getPrincipal();
+  if (!principal) redirect("/sign-in");
+  if (permission && !can(principal, permission)) forbidden();
+  return principal;
+}
+
+/** For route handlers: a bearer API token, else the session cookie. */
+export async function principalFromRequest(request: Request): Promise<Principal | null> {
+  const header = request.headers.get("authorization");
+  if (header?.toLowerCase().startsWith("bearer ")) {
+    return principalFromApiToken(header.slice(7).trim());
+  }
+  const cookie = request.headers.get("cookie") ?? "";
+  return principalFromSessionId(lucia.readSessionCookie(cookie) ?? undefined);
+}
+
+async function principalFromApiToken(secret: string): Promise<Principal | null> {
+  if (!secret) return null;
+  const row = await db("api_tokens as t")
+    .join("users as u", "u.id", "t.created_by")
+    .where("t.token_hash", hashSecret(secret))
+    .whereNull("t.revoked_at")
+    .whereNull("u.disabled_at")
+    .first("t.id", "t.organisation_id", "t.role", "u.id as user_id", "u.name", "u.email");
+  if (!row) return null;
+  await db("api_tokens").where({ id: row.id }).update({ last_used_at: db.fn.now() });
+  return {
+    userId: row.user_id,
+    organisationId: row.organisation_id,
+    role: row.role,
+    designated: false,
+    name: `${row.name} (API token)`,
+    email: row.email,
+    via: "token",
+  };
+}
+
+/** Starts a session and returns the cookie to set. */
+export async function startSession(userId: string) {
+  const session = await lucia.createSession(userId, {});
+  return lucia.createSessionCookie(session.id);
+}
+
+export async function endSession(sessionId: string) {
+  await lucia.invalidateSession(sessionId);
+  return lucia.createBlankSessionCookie();
+}
+
+export async function currentSessionId(): Promise<string | undefined> {
+  return (await cookies()).get(lucia.sessionCookieName)?.value;
+}

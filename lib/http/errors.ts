@@ -1,0 +1,35 @@
+// One error type for every refusal the app makes on purpose. Route handlers turn it into
+// a JSON body with its status; server actions turn it into a message on the form.
+
+export interface FieldIssue {
+  path: string;
+  message: string;
+}
+
+export class AppError extends Error {
+  constructor(
+    readonly status: 400 | 401 | 403 | 404 | 409 | 410 | 413 | 415 | 422 | 429,
+    message: string,
+    readonly issues: FieldIssue[] = [],
+  ) {
+    super(message);
+    this.name = "AppError";
+  }
+}
+
+export const badRequest = (message: string, issues: FieldIssue[] = []) => new AppError(400, message, issues);
+export const fieldError = (path: string, message: string) => new AppError(400, message, [{ path, message }]);
+export const unauthorized = (message = "Sign in first.") => new AppError(401, message);
+export const forbidden = (message = "Your role does not allow this.") => new AppError(403, message);
+export const notFound = (message = "Not found.") => new AppError(404, message);
+export const conflict = (message: string, issues: FieldIssue[] = []) => new AppError(409, message, issues);
+export const gone = (message: string) => new AppError(410, message);
+export const tooManyRequests = (message: string) => new AppError(429, message);
+
+/** zod issues as `{ path: "tiedowns.0.wll", message }`, the shape every 400 uses. */
+export function zodIssues(error: { issues: ReadonlyArray<{ path: ReadonlyArray<PropertyKey>; message: string }> }): FieldIssue[] {
+  return error.issues.map((issue) => ({
+    path: issue.path.map(String).join("."),
+    message: issue.message,
+  }));
+}

@@ -1,0 +1,51 @@
+// Plain-text first: yard phones and shop PCs read these. Pure functions, tested in
+// tests/unit/mail/templates.test.ts.
+import { ROLE_LABELS, type Role } from "@/lib/auth/roles";
+
+export interface MailMessage {
+  to: string;
+  subject: string;
+  text: string;
+}
+
+/**
+ * @example inviteMail({ to: "a@b.example", organisationName: "Acme", inviterName: "Ann", role: "planner", link, expiresAt })
+ */
+export function inviteMail(p: {
+  to: string;
+  organisationName: string;
+  inviterName: string;
+  role: Role;
+  link: string;
+  expiresAt: Date;
+}): MailMessage {
+  return {
+    to: p.to,
+    subject: `${p.inviterName} invited you to ${p.organisationName} on Linkyard`,
+    text: [
+      `${p.inviterName} invited you to join ${p.organisationName} on Linkyard as ${ROLE_LABELS[p.role].toLowerCase()}.`,
+      "",
+      `Accept the invite and choose your password here:`,
+      p.link,
+      "",
+      `The link works once and expires on ${p.expiresAt.toUTCString()}.`,
+      "If you did not expect this e-mail, ignore it.",
+    ].join("\n"),
+  };
+}
+
+export function passwordResetMail(p: { to: string; link: string; expiresAt: Date }): MailMessage {
+  return {
+    to: p.to,
+    subject: "Reset your Linkyard password",
+    text: [
+      "Someone asked to reset the password of this Linkyard account.",
+      "",
+      "Choose a new password here:",
+      p.link,
+      "",
+      `The link works once and expires on ${p.expiresAt.toUTCString()}.`,
+      "If it was not you, ignore this e-mail: your password stays as it is.",
+    ].join("\n"),
+  };
+}

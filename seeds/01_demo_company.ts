@@ -1,0 +1,101 @@
+import type { Knex } from "knex";
+import { hash } from "@node-rs/argon2";
+import { newTagCode } from "../lib/tags/code";
+
+// The demo scenario: an invented groundworks outfit with one person per role, two yards
+// and a realistic spread of tiedown gear. Names, places and addresses are made up.
+// Demo password (documented in the README, demo only): yard-demo-2026
+
+export const DEMO_PASSWORD = "yard-demo-2026";
+export const DEMO_DOMAIN = "corvid-hollow.example";
+
+type Item = {
+  kind: string;
+  grade?: number;
+  size?: string;
+  lengthFt?: number;
+  markedWllLb?: number | null;
+  serialPrefix: string;
+  count: number;
+  details?: Record<string, unknown>;
+  costCents: number;
+};
+
+// Marked WLLs below are invented manufacturer markings in line with the 49 CFR 393.108
+// defaults for the same grade and size; binders and straps carry their own markings.
+const STOCK: Item[] = [
+  { kind: "chain", grade: 70, size: "3/8", lengthFt: 20, markedWllLb: 6600, serialPrefix: "CH7-38", count: 12, details: { ends: "grab hook both ends" }, costCents: 11900 },
+  { kind: "chain", grade: 70, size: "5/16", lengthFt: 20, markedWllLb: 4700, serialPrefix: "CH7-516", count: 8, details: { ends: "grab hook both ends" }, costCents: 8900 },
+  { kind: "chain", grade: 80, size: "1/2", lengthFt: 16, markedWllLb: 12000, serialPrefix: "CH8-12", count: 4, details: { ends: "clevis grab hook both ends" }, costCents: 24500 },
+  { kind: "chain", grade: 30, size: "3/8", lengthFt: 14, markedWllLb: null, serialPrefix: "CH3-38", count: 2, details: { ends: "slip hook both ends", note: "old proof coil, no grade mark" }, costCents: 3500 },
+  { kind: "binder", size: "3/8", markedWllLb: 5400, serialPrefix: "BR-516-38", count: 10, details: { mechanism: "ratchet", chainSizeRange: ["5/16", "3/8"] }, costCents: 6900 },
+  { kind: "binder", size: "1/2", markedWllLb: 9200, serialPrefix: "BR-38-12", count: 4, details: { mechanism: "ratchet", chainSizeRange: ["3/8", "1/2"] }, costCents: 9400 },
+  { kind: "binder", size: "3/8", markedWllLb: 5400, serialPrefix: "BL-516-38", count: 4, details: { mechanism: "lever", chainSizeRange: ["5/16", "3/8"] }, costCents: 4200 },
+  { kind: "web-strap", size: "2", lengthFt: 27, markedWllLb: 3333, serialPrefix: "WS-2", count: 8, details: { widthIn: "2", ends: "flat hooks" }, costCents: 2900 },
+  { kind: "web-strap", size: "4", lengthFt: 30, markedWllLb: 5400, serialPrefix: "WS-4", count: 6, details: { widthIn: "4", ends: "wire hooks" }, costCents: 4900 },
+  { kind: "hook", grade: 70, size: "3/8", markedWllLb: 6600, serialPrefix: "HK7-38", count: 6, details: { style: "clevis grab hook" }, costCents: 1400 },
+  { kind: "shackle", size: "5/8", markedWllLb: 6500, serialPrefix: "SH-58", count: 4, details: { style: "screw pin anchor shackle" }, costCents: 1900 },
+];
+
+function addDays(days: number): string {
+  const d = new Date();
+  d.setUTCDate(d.getUTCDate() + days);
+  return d.toISOString().slice(0, 10);
+}
+
+export async function seed(knex: Knex): Promise<void> {
+  if (await knex("organisations").first("id")) return; // never overwrite real data
+
+  const passwordHash = await hash(DEMO_PASSWORD);
+  await knex.transaction(async (trx) => {
+    const [org] = await trx("organisations").insert({ name: "Corvid Hollow Groundworks" }).returning("id");
+    const organisationId: string = org.id;
+    const people = [
+      { id: "demo-owner-olive", name: "Olive Marchetti", email: `olive@${DEMO_DOMAIN}`, role: "owner", designated: true },
+      { id: "demo-planner-pete", name: "Pete Anand", email: `pete@${DEMO_DOMAIN}`, role: "planner", designated: false },
+      { id: "demo-yard-yara", name: "Yara Lindqvist", email: `yara@${DEMO_DOMAIN}`, role: "yard_hand", designated: false },
+    ];
+    await trx("users").insert(people.map((p) => ({ ...p, organisation_id: organisationId, password_hash: passwordHash })));
+
+    const yards = await trx("yards")
+      .insert([
+        { organisation_id: organisationId, name: "Home yard", address: "7 Quarry Spur Road" },
+        { organisation_id: organisationId, name: "North lot", address: "Behind the gravel pit, Route 9" },
+      ])
+      .returning(["id", "name"]);
+
+    const rows: Record<string, unknown>[] = [];
+    let n = 0;
+    for (const item of STOCK) {
+      for (let i = 1; i <= item.count; i++, n++) {
+        // A few items in other states, so every screen has something to show.
+        const status = n === 3 ? "tagged_out" : n === 17 ? "tagged_out" : n === 40 ? "retired" : n === 55 ? "lost" : "in_service";
+        rows.push({
+          organisation_id: organisationId,
+          tag_code: newTagCode(),
+          kind: item.kind,
+          grade: item.grade ?? null,
+          size: item.size ?? null,
+          length_mm: item.lengthFt ? Math.round(item.lengthFt * 304.8) : null,
+          marked_wll_lb: item.markedWllLb ?? null,
+          serial: `${item.serialPrefix}-${String(i).padStart(3, "0")}`,
+          status,
+          yard_id: yards[n % 3 === 0 ? 1 : 0].id,
+          in_service_on: addDays(-400 + (n * 7) % 360),
+          cost_cents: item.costCents,
+          next_inspection_due: addDays(((n * 11) % 120) - 10),
+          details: JSON.stringify(item.details ?? {}),
+        });
+      }
+    }
+    await trx("items").insert(rows);
+    await trx("audit_log").insert({
+      organisation_id: organisationId,
+      actor_id: null,
+      action: "demo.loaded",
+      entity: "organisation",
+      entity_id: organisationId,
+      after: JSON.stringify({ items: rows.length }),
+    });
+  });
+}
