@@ -103,7 +103,7 @@ mail_running() { curl -fsS "http://127.0.0.1:$MAIL_WEB_PORT/api/email" >/dev/nul
 start_mail() {
   if mail_running; then return; fi
   say "starting the local mail fake (SMTP 127.0.0.1:$SMTP_PORT, inbox http://127.0.0.1:$MAIL_WEB_PORT)"
-  (cd "$ROOT" && nohup node_modules/.bin/maildev --ip 127.0.0.1 --smtp "$SMTP_PORT" \
+  (cd "$ROOT"; nohup node_modules/.bin/maildev --ip 127.0.0.1 --smtp "$SMTP_PORT" \
      --web "$MAIL_WEB_PORT" --web-ip 127.0.0.1 >"$DATA/maildev.log" 2>&1 & echo $! >"$DATA/maildev.pid")
   for _ in $(seq 1 50); do mail_running && return; sleep 0.2; done
   say "the mail fake did not start; see $DATA/maildev.log"; exit 1
@@ -113,4 +113,21 @@ knex_cli() { (cd "$ROOT" && node --import tsx node_modules/knex/bin/cli.js "$@")
 
 stop_pid_file() { # $1 = pid file
   if [ -f "$1" ]; then kill "$(cat "$1")" 2>/dev/null || true; rm -f "$1"; fi
+}
+
+ensure_chromium() {
+  ensure_apt_package /usr/bin/chromium chromium
+}
+
+# Rebuild only when a source file is newer than the last build.
+build_if_stale() {
+  if [ ! -f "$ROOT/.next/BUILD_ID" ] || [ -n "$(cd "$ROOT" && find app components lib db public tailwind.config.ts next.config.mjs postcss.config.mjs package-lock.json -newer .next/BUILD_ID -type f -print -quit)" ]; then
+    say "building the app"
+    (cd "$ROOT" && node_modules/.bin/next build >"$DATA/build.log" 2>&1) || { tail -60 "$DATA/build.log"; exit 1; }
+  fi
+}
+
+wait_for_http() { # $1 = url, $2 = log file to show on failure
+  for _ in $(seq 1 120); do curl -fsS "$1" >/dev/null 2>&1 && return; sleep 0.5; done
+  say "no answer from $1"; tail -40 "$2"; exit 1
 }

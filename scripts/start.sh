@@ -20,11 +20,7 @@ if [ "$(cd "$ROOT" && node --import tsx scripts/db-is-empty.ts)" = "empty" ]; th
   knex_cli seed:run >/dev/null
 fi
 
-# Rebuild only when a source file is newer than the last build.
-if [ ! -f "$ROOT/.next/BUILD_ID" ] || [ -n "$(cd "$ROOT" && find app components lib db public tailwind.config.ts next.config.mjs package-lock.json -newer .next/BUILD_ID -type f -print -quit)" ]; then
-  say "building"
-  (cd "$ROOT" && node_modules/.bin/next build >"$DATA/build.log" 2>&1) || { tail -40 "$DATA/build.log"; exit 1; }
-fi
+build_if_stale
 
 cat <<MSG
 

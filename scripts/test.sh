@@ -1,0 +1,39 @@
+#!/usr/bin/env bash
+# npm test: its own set-up (PostgreSQL, a separate test database rebuilt from empty, the
+# mail fake, Chromium, a production build served on its own port), then every test.
+source "$(dirname "$0")/lib.sh"
+TEST_PORT="${LINKYARD_TEST_PORT:-3100}"
+
+ensure_node_modules
+ensure_chromium
+start_postgres
+ensure_database linkyard_test
+start_mail
+
+export DATABASE_URL="$(database_url linkyard_test)"
+export SMTP_URL="smtp://127.0.0.1:$SMTP_PORT"
+export APP_URL="http://127.0.0.1:$TEST_PORT"
+export LINKYARD_BASE_URL="$APP_URL"
+export MAIL_API="http://127.0.0.1:$MAIL_WEB_PORT"
+
+# Down to empty and up again: proves every migration's rollback as well as its forward run.
+say "resetting the test database"
+knex_cli migrate:latest >/dev/null
+knex_cli migrate:rollback --all >/dev/null
+knex_cli migrate:latest >/dev/null
+knex_cli seed:run >/dev/null
+
+build_if_stale
+
+say "serving the build on $APP_URL for the tests"
+stop_pid_file "$DATA/test-app.pid"
+(cd "$ROOT"; nohup node_modules/.bin/next start -H 127.0.0.1 -p "$TEST_PORT" >"$DATA/test-app.log" 2>&1 & echo $! >"$DATA/test-app.pid")
+trap 'stop_pid_file "$DATA/test-app.pid"' EXIT
+wait_for_http "$APP_URL/api/health" "$DATA/test-app.log"
+
+cd "$ROOT"
+status=0
+node_modules/.bin/vitest run --reporter=default --reporter=json --outputFile.json="$DATA/vitest.json" "$@" || status=$?
+# A plain closing line that any CI can read.
+node -e 'const r=require(process.argv[1]);console.log(`Tests: ${r.numPassedTests} passed, ${r.numFailedTests} failed, ${r.numPendingTests+r.numTodoTests} skipped`)' "$DATA/vitest.json" || true
+exit $status

@@ -1,0 +1,233 @@
+import { readdirSync, readFileSync, statSync } from "node:fs";
+import path from "node:path";
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { addMember, BASE_URL, Client, newOrganisation } from "../support/http";
+import { testDb } from "../support/db";
+
+// Every route handler, page and server action, walked with every role, with no session and
+// with a person of another organisation. The tables below are the expected access, written
+// out literally; a route, page or action missing from them fails the coverage tests.
+
+type Role = "owner" | "planner" | "yard_hand";
+type Access = "public" | Role[];
+const ALL: Role[] = ["owner", "planner", "yard_hand"];
+const OWNER: Role[] = ["owner"];
+
+const API: Record<string, Access> = {
+  "GET /api/health": "public",
+  "POST /api/v1/sessions": "public",
+  "DELETE /api/v1/sessions": "public",
+  "POST /api/v1/signups": "public",
+  "GET /api/v1/me": ALL,
+  "GET /api/v1/people": OWNER,
+  "PATCH /api/v1/people/[id]": OWNER,
+  "GET /api/v1/invites": OWNER,
+  "POST /api/v1/invites": OWNER,
+  "DELETE /api/v1/invites/[id]": OWNER,
+  "POST /api/v1/invites/accept": "public",
+  "POST /api/v1/password-resets": "public",
+  "POST /api/v1/password-resets/confirm": "public",
+};
+
+const PAGES: Record<string, Access> = {
+  "/": ALL,
+  "/stock": ALL,
+  "/people": OWNER,
+  "/settings": OWNER,
+  "/audit": OWNER,
+};
+
+const ACTIONS: Record<string, Access> = {
+  "app/(auth)/actions.ts#signInAction": "public",
+  "app/(auth)/actions.ts#signUpAction": "public",
+  "app/(auth)/actions.ts#acceptInviteAction": "public",
+  "app/(auth)/actions.ts#requestResetAction": "public",
+  "app/(auth)/actions.ts#resetPasswordAction": "public",
+  "app/(auth)/actions.ts#signOutAction": "public",
+  "app/(app)/people/actions.ts#inviteAction": OWNER,
+  "app/(app)/people/actions.ts#updatePersonAction": OWNER,
+  "app/(app)/people/actions.ts#withdrawInviteAction": OWNER,
+  "app/(app)/settings/actions.ts#saveOrganisationAction": OWNER,
+  "app/(app)/settings/actions.ts#createTokenAction": OWNER,
+  "app/(app)/settings/actions.ts#revokeTokenAction": OWNER,
+};
+
+const ROOT = path.resolve(__dirname, "../..");
+
+function walk(dir: string, file: string): string[] {
+  return readdirSync(dir).flatMap((name) => {
+    const full = path.join(dir, name);
+    if (statSync(full).isDirectory()) return walk(full, file);
+    return name === file ? [full] : [];
+  });
+}
+
+function discoveredApi(): string[] {
+  return walk(path.join(ROOT, "app/api"), "route.ts").flatMap((file) => {
+    const url = "/" + path.relative(path.join(ROOT, "app"), path.dirname(file)).split(path.sep).join("/");
+    const source = readFileSync(file, "utf8");
+    return [...source.matchAll(/export (?:const|async function) (GET|POST|PUT|PATCH|DELETE)\b/g)].map((m) => `${m[1]} ${url}`);
+  });
+}
+
+function discoveredPages(): string[] {
+  return walk(path.join(ROOT, "app/(app)"), "page.tsx").map((file) => {
+    const rel = path.relative(path.join(ROOT, "app/(app)"), path.dirname(file)).split(path.sep).join("/");
+    return "/" + rel;
+  }).map((p) => (p === "/" ? "/" : p.replace(/\/$/, "")));
+}
+
+interface ActionRef {
+  id: string;
+  page: string; // a page that imports the action, where React posts it
+}
+
+function discoveredActions(): Map<string, ActionRef> {
+  const manifest = JSON.parse(readFileSync(path.join(ROOT, ".next/server/server-reference-manifest.json"), "utf8"));
+  const out = new Map<string, ActionRef>();
+  for (const [id, entry] of Object.entries<{ filename: string; exportedName: string; workers: Record<string, unknown> }>(manifest.node)) {
+    const worker = Object.keys(entry.workers)[0]; // e.g. "app/(app)/people/page"
+    const page = "/" + worker.replace(/^app\//, "").replace(/\([^)]*\)\/?/g, "").replace(/\/?page$/, "");
+    out.set(`${entry.filename}#${entry.exportedName}`, { id, page });
+  }
+  return out;
+}
+
+/** Calls a server action the way React does: the form's fields, behind its previous state. */
+async function callAction(client: Client, action: ActionRef, fields: Record<string, string> = {}) {
+  const form = new FormData();
+  for (const [k, v] of Object.entries(fields)) form.append(`_1_${k}`, v);
+  form.append("0", JSON.stringify([{}, "$K1"])); // the root goes last, as React sends it
+  const res = await client.request("POST", action.page, form, { "next-action": action.id });
+  return res.text;
+}
+
+const fill = (p: string) => p.replace("[id]", "00000000-0000-4000-8000-000000000000");
+
+let clients: Record<Role | "anonymous", Client>;
+let outsider: Client;
+let victim: { organisationId: string; plannerId: string; inviteId: string };
+
+beforeAll(async () => {
+  const org = await newOrganisation("Matrix Co");
+  const planner = await addMember(org.owner, "planner");
+  const hand = await addMember(org.owner, "yard_hand");
+  clients = { owner: org.owner, planner: planner.client, yard_hand: hand.client, anonymous: new Client() };
+  const other = await newOrganisation("Other Co");
+  outsider = other.owner;
+  const pending = await org.owner.post("/api/v1/invites", { email: `pending-${Date.now()}@linkyard-test.example`, role: "planner" });
+  victim = { organisationId: org.organisationId, plannerId: planner.userId, inviteId: pending.json.id };
+}, 60_000);
+
+afterAll(() => testDb.destroy());
+
+describe("coverage", () => {
+  it("every route handler has a row", () => {
+    expect(discoveredApi().sort()).toEqual(Object.keys(API).sort());
+  });
+  it("every signed-in page has a row", () => {
+    expect(discoveredPages().sort()).toEqual(Object.keys(PAGES).sort());
+  });
+  it("every server action has a row", () => {
+    expect([...discoveredActions().keys()].sort()).toEqual(Object.keys(ACTIONS).sort());
+  });
+});
+
+describe("route handlers", () => {
+  for (const [key, access] of Object.entries(API)) {
+    if (access === "public") continue;
+    const [method, pattern] = key.split(" ");
+    it(`${key}: 401 without a session`, async () => {
+      const res = await clients.anonymous.request(method, fill(pattern), method === "GET" ? undefined : {});
+      expect(res.status).toBe(401);
+      expect(res.json.error).toBe("Sign in first.");
+    });
+    for (const role of ALL) {
+      const allowed = access.includes(role);
+      it(`${key}: ${role} is ${allowed ? "let through" : "refused with 403"}`, async () => {
+        const res = await clients[role].request(method, fill(pattern), method === "GET" ? undefined : {});
+        if (allowed) expect([401, 403]).not.toContain(res.status);
+        else {
+          expect(res.status).toBe(403);
+          expect(res.json.error).toBe("Your role does not allow this.");
+        }
+      });
+    }
+  }
+});
+
+describe("pages", () => {
+  for (const [page, access] of Object.entries(PAGES)) {
+    it(`${page}: sends a stranger to sign-in`, async () => {
+      const res = await fetch(BASE_URL + page, { redirect: "manual" });
+      expect(res.status).toBe(307);
+      expect(res.headers.get("location")).toMatch(/\/sign-in$/);
+    });
+    for (const role of ALL) {
+      const allowed = access === "public" || access.includes(role);
+      it(`${page}: ${role} gets ${allowed ? 200 : 403}`, async () => {
+        const res = await clients[role].get(page);
+        expect(res.status).toBe(allowed ? 200 : 403);
+      });
+    }
+  }
+});
+
+describe("server actions", () => {
+  for (const [key, access] of Object.entries(ACTIONS)) {
+    if (access === "public") continue;
+    it(`${key}: refuses without a session`, async () => {
+      const id = discoveredActions().get(key)!;
+      expect(await callAction(clients.anonymous, id)).toContain("Your session has ended. Sign in again.");
+    });
+    for (const role of ALL) {
+      const allowed = access.includes(role);
+      it(`${key}: ${role} is ${allowed ? "let through" : "refused"}`, async () => {
+        const id = discoveredActions().get(key)!;
+        const text = await callAction(clients[role], id);
+        if (allowed) {
+          expect(text).not.toContain("Your role does not allow this.");
+          expect(text).not.toContain("Your session has ended.");
+          expect(text).toContain("Some fields need fixing."); // empty form: refused on input, not on role
+        } else expect(text).toContain("Your role does not allow this.");
+      });
+    }
+  }
+});
+
+describe("another organisation", () => {
+  it("cannot see or change this organisation's people", async () => {
+    const list = await outsider.get("/api/v1/people");
+    expect(list.json.data.map((p: { id: string }) => p.id)).not.toContain(victim.plannerId);
+    const patch = await outsider.patch(`/api/v1/people/${victim.plannerId}`, { role: "owner" });
+    expect(patch.status).toBe(404);
+    const row = await testDb("users").where({ id: victim.plannerId }).first("role");
+    expect(row.role).toBe("planner");
+  });
+
+  it("cannot withdraw this organisation's invite", async () => {
+    const res = await outsider.delete(`/api/v1/invites/${victim.inviteId}`);
+    expect(res.status).toBe(404);
+    const row = await testDb("invites").where({ id: victim.inviteId }).first("revoked_at");
+    expect(row.revoked_at).toBeNull();
+    const list = await outsider.get("/api/v1/invites");
+    expect(list.json.data.map((i: { id: string }) => i.id)).not.toContain(victim.inviteId);
+  });
+
+  it("cannot change this organisation's people through the form action either", async () => {
+    const id = discoveredActions().get("app/(app)/people/actions.ts#updatePersonAction")!;
+    const text = await callAction(outsider, id, { userId: victim.plannerId, role: "owner" });
+    expect(text).toContain("No such person in your organisation.");
+    const row = await testDb("users").where({ id: victim.plannerId }).first("role");
+    expect(row.role).toBe("planner");
+  });
+});
+
+describe("last owner", () => {
+  it("cannot be demoted", async () => {
+    const org = await newOrganisation();
+    const res = await org.owner.patch(`/api/v1/people/${org.userId}`, { role: "planner" });
+    expect(res.status).toBe(400);
+    expect(res.json.issues).toEqual([{ path: "role", message: "The organisation needs at least one active owner." }]);
+  });
+});

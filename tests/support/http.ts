@@ -1,0 +1,97 @@
+// A small HTTP client for integration tests: keeps a cookie like a browser, sends an
+// Origin header on mutations like a browser, and reads the mail fake's inbox.
+
+export const BASE_URL = process.env.LINKYARD_BASE_URL ?? "http://127.0.0.1:3100";
+export const MAIL_API = process.env.MAIL_API ?? "http://127.0.0.1:54380";
+
+export class Client {
+  cookie = "";
+  constructor(readonly bearer?: string) {}
+
+  async request(method: string, path: string, body?: unknown, headers: Record<string, string> = {}) {
+    const h: Record<string, string> = { ...headers };
+    if (this.cookie) h.cookie = this.cookie;
+    if (this.bearer) h.authorization = `Bearer ${this.bearer}`;
+    if (method !== "GET" && method !== "HEAD" && !("origin" in h)) h.origin = BASE_URL;
+    let payload: BodyInit | undefined;
+    if (body instanceof FormData || typeof body === "string") payload = body;
+    else if (body !== undefined) {
+      payload = JSON.stringify(body);
+      h["content-type"] = "application/json";
+    }
+    const res = await fetch(BASE_URL + path, { method, headers: h, body: payload, redirect: "manual" });
+    const set = res.headers.get("set-cookie");
+    if (set?.startsWith("linkyard_session=")) {
+      const value = set.split(";")[0];
+      this.cookie = value === "linkyard_session=" ? "" : value;
+    }
+    const text = await res.text();
+    let json: any = undefined;
+    try {
+      json = text ? JSON.parse(text) : undefined;
+    } catch {
+      /* not JSON */
+    }
+    return { status: res.status, json, text, headers: res.headers };
+  }
+
+  get = (path: string, headers?: Record<string, string>) => this.request("GET", path, undefined, headers);
+  post = (path: string, body?: unknown, headers?: Record<string, string>) => this.request("POST", path, body, headers);
+  patch = (path: string, body?: unknown) => this.request("PATCH", path, body);
+  delete = (path: string) => this.request("DELETE", path);
+}
+
+let counter = 0;
+export function uniqueEmail(prefix = "t"): string {
+  return `${prefix}-${Date.now().toString(36)}-${(counter++).toString(36)}-${Math.random().toString(36).slice(2, 6)}@linkyard-test.example`;
+}
+
+export const TEST_PASSWORD = "correct-horse-battery";
+
+/** A new organisation with its owner signed in. */
+export async function newOrganisation(name = "Test Outfit") {
+  const owner = new Client();
+  const email = uniqueEmail("owner");
+  const res = await owner.post("/api/v1/signups", { organisationName: name, name: "Owner Person", email, password: TEST_PASSWORD });
+  if (res.status !== 201) throw new Error(`sign-up failed: ${res.status} ${res.text}`);
+  const me = await owner.get("/api/v1/me");
+  return { owner, email, organisationId: me.json.organisation.id as string, userId: me.json.id as string };
+}
+
+interface MailItem {
+  to: { address: string }[];
+  subject: string;
+  text: string;
+}
+
+/** Waits for the newest e-mail to an address in the mail fake, and returns it. */
+export async function latestMailTo(address: string, timeoutMs = 5000): Promise<MailItem> {
+  const until = Date.now() + timeoutMs;
+  while (Date.now() < until) {
+    const res = await fetch(`${MAIL_API}/api/email`);
+    const mails = (await res.json()) as MailItem[];
+    const mine = mails.filter((m) => m.to.some((t) => t.address.toLowerCase() === address.toLowerCase()));
+    if (mine.length) return mine[mine.length - 1];
+    await new Promise((r) => setTimeout(r, 100));
+  }
+  throw new Error(`no e-mail to ${address}`);
+}
+
+export function linkIn(text: string, path: string): string {
+  const match = text.match(new RegExp(`https?://[^\\s]+${path}/([A-Za-z0-9_-]+)`));
+  if (!match) throw new Error(`no ${path} link in: ${text}`);
+  return match[1];
+}
+
+/** Invites a person with a role and has them accept; returns their signed-in client. */
+export async function addMember(owner: Client, role: "owner" | "planner" | "yard_hand", designated = false) {
+  const email = uniqueEmail(role);
+  const invite = await owner.post("/api/v1/invites", { email, role, designated });
+  if (invite.status !== 201) throw new Error(`invite failed: ${invite.status} ${invite.text}`);
+  const mail = await latestMailTo(email);
+  const token = linkIn(mail.text, "/invite");
+  const member = new Client();
+  const res = await member.post("/api/v1/invites/accept", { token, name: `${role} person`, password: TEST_PASSWORD });
+  if (res.status !== 201) throw new Error(`accept failed: ${res.status} ${res.text}`);
+  return { client: member, email, userId: res.json.userId as string };
+}
