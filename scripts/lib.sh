@@ -59,7 +59,7 @@ choose_pgdata() {
   fi
 }
 
-as_pg() { if is_root; then runuser -u postgres -- "$@"; else "$@"; fi; }
+as_pg() { if is_root; then (cd / && runuser -u postgres -- "$@"); else "$@"; fi; }
 
 pg_running() { as_pg "$PG_BIN/pg_ctl" -D "$PGDATA" status >/dev/null 2>&1; }
 
