@@ -1,6 +1,216 @@
+import type { Knex } from "knex";
 import { db } from "./index";
 
-// Stock queries. Always scoped to one organisation.
+// Stock queries. Every function takes the organisation id and filters on it, except the
+// tag lookup, which finds the one item a printed code names.
+
+export interface ItemSummary {
+  id: string;
+  tagCode: string;
+  kind: string;
+  grade: number | null;
+  gradeMarked: boolean;
+  size: string | null;
+  lengthMm: number | null;
+  markedWllLb: number | null;
+  wllLb: number | null;
+  wllSource: string | null;
+  serial: string | null;
+  status: string;
+  yardId: string | null;
+  yardName: string | null;
+  nextInspectionDue: string | null;
+  lastCheckedAt: Date | null;
+  lastInspectedOn: string | null;
+  details: Record<string, unknown>;
+}
+
+const SUMMARY_COLUMNS = [
+  "i.id", "i.tag_code as tagCode", "i.kind", "i.grade", "i.grade_marked as gradeMarked", "i.size",
+  "i.length_mm as lengthMm", "i.marked_wll_lb as markedWllLb", "i.wll_lb as wllLb", "i.wll_source as wllSource",
+  "i.serial", "i.status", "i.yard_id as yardId", "y.name as yardName",
+  db.raw("to_char(i.next_inspection_due, 'YYYY-MM-DD') as \"nextInspectionDue\""),
+  "i.last_checked_at as lastCheckedAt",
+  db.raw("to_char(i.last_inspected_on, 'YYYY-MM-DD') as \"lastInspectedOn\""),
+  "i.details",
+];
+
+function base(trx: Knex = db) {
+  return trx("items as i").leftJoin("yards as y", "y.id", "i.yard_id");
+}
+
+export interface ItemFilters {
+  kind?: string;
+  status?: string;
+  yardId?: string;
+  due?: "overdue" | "30d";
+  q?: string;
+}
+
+export const SORTABLE = {
+  tagCode: "i.tag_code",
+  kind: "i.kind",
+  grade: "i.grade",
+  size: "i.size",
+  wllLb: "i.wll_lb",
+  status: "i.status",
+  yardName: "y.name",
+  nextInspectionDue: "i.next_inspection_due",
+  serial: "i.serial",
+} as const;
+export type SortKey = keyof typeof SORTABLE;
+
+function applyFilters(query: Knex.QueryBuilder, organisationId: string, f: ItemFilters) {
+  query.where("i.organisation_id", organisationId);
+  if (f.kind) query.where("i.kind", f.kind);
+  if (f.status) query.where("i.status", f.status);
+  if (f.yardId) query.where("i.yard_id", f.yardId);
+  if (f.due === "overdue") query.where("i.next_inspection_due", "<", db.raw("current_date"));
+  if (f.due === "30d") query.where("i.next_inspection_due", "<=", db.raw("current_date + 30"));
+  if (f.q) {
+    const q = f.q.trim().toUpperCase();
+    const compact = q.replace(/[\s-]/g, "");
+    query.where((w) => {
+      w.where("i.tag_code", "like", `${compact.slice(0, 4)}${compact.length > 4 ? "-" + compact.slice(4) : ""}%`)
+        .orWhereRaw("upper(i.serial) like ?", [`${q}%`]);
+    });
+  }
+  return query;
+}
+
+/** One page of the stock list, with the page count for the table's pager. */
+export async function listItems(
+  organisationId: string,
+  options: ItemFilters & { page: number; perPage: number; sort: SortKey; order: "asc" | "desc" },
+): Promise<{ data: ItemSummary[]; pageCount: number; total: number }> {
+  const counted = await applyFilters(base().count<{ count: string }[]>("i.id as count"), organisationId, options);
+  const total = Number(counted[0]?.count ?? 0);
+  const data = await applyFilters(base().select(SUMMARY_COLUMNS), organisationId, options)
+    .orderByRaw(`${SORTABLE[options.sort]} ${options.order} nulls last, i.tag_code asc`)
+    .limit(options.perPage)
+    .offset((options.page - 1) * options.perPage);
+  return { data, pageCount: Math.max(1, Math.ceil(total / options.perPage)), total };
+}
+
+export async function getItem(organisationId: string, id: string, trx: Knex = db): Promise<ItemSummary | undefined> {
+  return base(trx).where({ "i.organisation_id": organisationId, "i.id": id }).first(SUMMARY_COLUMNS);
+}
+
+export async function getItemsByIds(organisationId: string, ids: string[]): Promise<ItemSummary[]> {
+  return base().where("i.organisation_id", organisationId).whereIn("i.id", ids).orderBy("i.tag_code").select(SUMMARY_COLUMNS);
+}
+
+/** By printed tag code, in any organisation (callers check the organisation). */
+export async function findItemByTag(tagCode: string): Promise<(ItemSummary & { organisationId: string }) | undefined> {
+  return base().where("i.tag_code", tagCode).first([...SUMMARY_COLUMNS, "i.organisation_id as organisationId"]);
+}
+
+export async function tagCodeExists(tagCode: string, trx: Knex = db): Promise<boolean> {
+  return Boolean(await trx("items").where({ tag_code: tagCode }).first("id"));
+}
+
+export async function serialTaken(organisationId: string, serial: string, exceptId?: string, trx: Knex = db): Promise<boolean> {
+  const q = trx("items").where({ organisation_id: organisationId, serial });
+  if (exceptId) q.whereNot("id", exceptId);
+  return Boolean(await q.first("id"));
+}
+
+export type ItemRow = Record<string, unknown>;
+
+export async function insertItem(row: ItemRow, trx: Knex): Promise<string> {
+  const [r] = await trx("items").insert(row).returning("id");
+  return r.id;
+}
+
+export async function updateItem(organisationId: string, id: string, patch: ItemRow, trx: Knex): Promise<void> {
+  await trx("items").where({ organisation_id: organisationId, id }).update({ ...patch, updated_at: trx.fn.now() });
+}
+
+/** Locks an item row for a state change (check, tag-out, inspection) inside a transaction. */
+export async function lockItem(organisationId: string, id: string, trx: Knex) {
+  return trx("items").where({ organisation_id: organisationId, id }).forUpdate().first("id", "kind", "status", "size", "tag_code as tagCode");
+}
+
+// Service history
+
+export interface ItemEventInput {
+  organisationId: string;
+  itemId: string;
+  type: string;
+  outcome?: string | null;
+  checklist?: unknown;
+  measurements?: unknown;
+  note?: string | null;
+  changes?: unknown;
+  correctsEventId?: number | null;
+  actorId: string | null;
+}
+
+export async function insertEvent(e: ItemEventInput, trx: Knex): Promise<number> {
+  const [row] = await trx("item_events")
+    .insert({
+      organisation_id: e.organisationId,
+      item_id: e.itemId,
+      type: e.type,
+      outcome: e.outcome ?? null,
+      checklist: e.checklist === undefined ? null : JSON.stringify(e.checklist),
+      measurements: e.measurements === undefined ? null : JSON.stringify(e.measurements),
+      note: e.note ?? null,
+      changes: e.changes === undefined ? null : JSON.stringify(e.changes),
+      corrects_event_id: e.correctsEventId ?? null,
+      actor_id: e.actorId,
+    })
+    .returning("id");
+  return Number(row.id);
+}
+
+export async function listEvents(organisationId: string, itemId: string) {
+  const events = await db("item_events as e")
+    .leftJoin("users as u", "u.id", "e.actor_id")
+    .where({ "e.organisation_id": organisationId, "e.item_id": itemId })
+    .orderBy("e.id", "desc")
+    .select(
+      "e.id", "e.type", "e.outcome", "e.checklist", "e.measurements", "e.note", "e.changes",
+      "e.corrects_event_id as correctsEventId", "e.at", "u.name as actorName",
+    );
+  const files = await db("attachments")
+    .where({ organisation_id: organisationId, item_id: itemId })
+    .select("id", "event_id as eventId", "purpose", "content_type as contentType", "size_bytes as sizeBytes", "original_name as originalName");
+  return events.map((e) => ({ ...e, id: Number(e.id), attachments: files.filter((f) => Number(f.eventId) === Number(e.id)) }));
+}
+
+export async function insertAttachment(
+  a: { organisationId: string; itemId: string; eventId: number | null; purpose: string; storageKey: string; contentType: string; sizeBytes: number; originalName: string; createdBy: string },
+  trx: Knex,
+) {
+  await trx("attachments").insert({
+    organisation_id: a.organisationId,
+    item_id: a.itemId,
+    event_id: a.eventId,
+    purpose: a.purpose,
+    storage_key: a.storageKey,
+    content_type: a.contentType,
+    size_bytes: a.sizeBytes,
+    original_name: a.originalName,
+    created_by: a.createdBy,
+  });
+}
+
+export async function getAttachment(organisationId: string, id: string) {
+  return db("attachments").where({ organisation_id: organisationId, id }).first("storage_key as storageKey", "content_type as contentType", "original_name as originalName");
+}
+
+// Yards
+
+export async function listYards(organisationId: string) {
+  return db("yards").where({ organisation_id: organisationId }).orderBy("name").select("id", "name");
+}
+
+export async function yardBelongs(organisationId: string, yardId: string, trx: Knex = db) {
+  return Boolean(await trx("yards").where({ organisation_id: organisationId, id: yardId }).first("id"));
+}
+
+// Dashboard counts
 
 export async function countItemsByStatus(organisationId: string) {
   const rows = await db("items")
@@ -20,14 +230,17 @@ export async function countInspectionsDue(organisationId: string, within = 30) {
   return Number(row?.count ?? 0);
 }
 
-export async function listItemsBrief(organisationId: string, limit = 200) {
-  return db("items as i")
-    .leftJoin("yards as y", "y.id", "i.yard_id")
-    .where("i.organisation_id", organisationId)
-    .orderBy(["i.kind", "i.tag_code"])
-    .limit(limit)
-    .select(
-      "i.id", "i.tag_code as tagCode", "i.kind", "i.grade", "i.size", "i.marked_wll_lb as markedWllLb",
-      "i.status", "i.serial", "y.name as yardName", "i.next_inspection_due as nextInspectionDue",
-    );
+export async function ownersOf(organisationId: string): Promise<{ email: string; name: string }[]> {
+  return db("users").where({ organisation_id: organisationId, role: "owner" }).whereNull("disabled_at").select("email", "name");
+}
+
+// Public tag view rate limiting
+
+export async function recordTagLookup(ip: string, found: boolean) {
+  await db("tag_lookups").insert({ ip, found });
+}
+
+export async function recentTagMisses(ip: string, since: Date): Promise<number> {
+  const row = await db("tag_lookups").where({ ip, found: false }).where("at", ">", since).count<{ count: string }>("id as count").first();
+  return Number(row?.count ?? 0);
 }

@@ -1,5 +1,7 @@
 import type { Knex } from "knex";
 import { hash } from "@node-rs/argon2";
+import { itemRating } from "../lib/stock/rating";
+import type { ItemKind } from "../lib/stock/labels";
 import { newTagCode } from "../lib/tags/code";
 
 // The demo scenario: an invented groundworks outfit with one person per role, two yards
@@ -19,6 +21,7 @@ type Item = {
   count: number;
   details?: Record<string, unknown>;
   costCents: number;
+  gradeMarked?: boolean;
 };
 
 // Marked WLLs below are invented manufacturer markings in line with the 49 CFR 393.108
@@ -27,7 +30,7 @@ const STOCK: Item[] = [
   { kind: "chain", grade: 70, size: "3/8", lengthFt: 20, markedWllLb: 6600, serialPrefix: "CH7-38", count: 12, details: { ends: "grab hook both ends" }, costCents: 11900 },
   { kind: "chain", grade: 70, size: "5/16", lengthFt: 20, markedWllLb: 4700, serialPrefix: "CH7-516", count: 8, details: { ends: "grab hook both ends" }, costCents: 8900 },
   { kind: "chain", grade: 80, size: "1/2", lengthFt: 16, markedWllLb: 12000, serialPrefix: "CH8-12", count: 4, details: { ends: "clevis grab hook both ends" }, costCents: 24500 },
-  { kind: "chain", grade: 30, size: "3/8", lengthFt: 14, markedWllLb: null, serialPrefix: "CH3-38", count: 2, details: { ends: "slip hook both ends", note: "old proof coil, no grade mark" }, costCents: 3500 },
+  { kind: "chain", grade: 30, size: "3/8", lengthFt: 14, markedWllLb: null, gradeMarked: false, serialPrefix: "CH3-38", count: 2, details: { ends: "slip hook both ends", note: "old proof coil, no grade mark" }, costCents: 3500 },
   { kind: "binder", size: "3/8", markedWllLb: 5400, serialPrefix: "BR-516-38", count: 10, details: { mechanism: "ratchet", chainSizeRange: ["5/16", "3/8"] }, costCents: 6900 },
   { kind: "binder", size: "1/2", markedWllLb: 9200, serialPrefix: "BR-38-12", count: 4, details: { mechanism: "ratchet", chainSizeRange: ["3/8", "1/2"] }, costCents: 9400 },
   { kind: "binder", size: "3/8", markedWllLb: 5400, serialPrefix: "BL-516-38", count: 4, details: { mechanism: "lever", chainSizeRange: ["5/16", "3/8"] }, costCents: 4200 },
@@ -70,8 +73,19 @@ export async function seed(knex: Knex): Promise<void> {
       for (let i = 1; i <= item.count; i++, n++) {
         // A few items in other states, so every screen has something to show.
         const status = n === 3 ? "tagged_out" : n === 17 ? "tagged_out" : n === 40 ? "retired" : n === 55 ? "lost" : "in_service";
+        const rating = itemRating({
+          kind: item.kind as ItemKind,
+          grade: item.grade ?? null,
+          gradeMarked: item.gradeMarked ?? true,
+          size: item.size ?? null,
+          markedWllLb: item.markedWllLb ?? null,
+          details: item.details as { chainSizeRange?: [string, string] },
+        });
         rows.push({
           organisation_id: organisationId,
+          grade_marked: item.gradeMarked ?? true,
+          wll_lb: rating.wllLb,
+          wll_source: rating.source,
           tag_code: newTagCode(),
           kind: item.kind,
           grade: item.grade ?? null,
@@ -88,7 +102,28 @@ export async function seed(knex: Knex): Promise<void> {
         });
       }
     }
-    await trx("items").insert(rows);
+    const inserted: { id: string; status: string; kind: string }[] = await trx("items").insert(rows).returning(["id", "status", "kind"]);
+    // A believable history: every item was put in service, most were checked this week,
+    // and the tagged-out ones failed a pre-use check.
+    const events: Record<string, unknown>[] = [];
+    inserted.forEach((item, i) => {
+      const at = (daysAgo: number, hour = 7) => new Date(Date.now() - daysAgo * 86_400_000 - hour * 3_600_000).toISOString();
+      events.push({ organisation_id: organisationId, item_id: item.id, type: "created", actor_id: "demo-owner-olive", at: at(300), note: "Put in service" });
+      if (item.status === "tagged_out") {
+        events.push({ organisation_id: organisationId, item_id: item.id, type: "check", outcome: "fail", actor_id: "demo-yard-yara", at: at(2), note: item.kind === "chain" ? "Hook at one end opened up after the last haul" : "Handle bent", checklist: JSON.stringify([]) });
+        events.push({ organisation_id: organisationId, item_id: item.id, type: "tag_out", actor_id: "demo-yard-yara", at: at(2), note: "Tagged out after a failed pre-use check" });
+      } else if (item.status === "retired") {
+        events.push({ organisation_id: organisationId, item_id: item.id, type: "retired", actor_id: "demo-owner-olive", at: at(40), note: "Links stretched past the limit at the yearly inspection" });
+      } else if (item.status === "lost") {
+        events.push({ organisation_id: organisationId, item_id: item.id, type: "lost", actor_id: "demo-planner-pete", at: at(20), note: "Not back from the Millbrook culvert job" });
+      } else if (i % 3 !== 2) {
+        events.push({ organisation_id: organisationId, item_id: item.id, type: "check", outcome: "pass", actor_id: "demo-yard-yara", at: at(i % 5) });
+      }
+    });
+    await trx("item_events").insert(events);
+    await trx.raw(`update items i set last_checked_at = e.at from
+      (select item_id, max(at) as at from item_events where type = 'check' group by item_id) e
+      where e.item_id = i.id and i.organisation_id = ?`, [organisationId]);
     await trx("audit_log").insert({
       organisation_id: organisationId,
       actor_id: null,

@@ -1,6 +1,6 @@
 import type { Metadata } from "next";
 import { StatusBadge } from "@/components/ui/status-badge";
-import { listItemsBrief } from "@/db/items";
+import { listItems } from "@/db/items";
 import { requirePage } from "@/lib/auth/session";
 import { KIND_LABELS, type ItemKind, type ItemStatus } from "@/lib/stock/labels";
 
@@ -15,7 +15,7 @@ function describe(i: { kind: string; grade: number | null; size: string | null }
 
 export default async function StockPage() {
   const principal = await requirePage("stock.view");
-  const items = await listItemsBrief(principal.organisationId);
+  const { data: items } = await listItems(principal.organisationId, { page: 1, perPage: 200, sort: "kind", order: "asc" });
   return (
     <div className="flex max-w-5xl flex-col gap-4">
       <h1 className="text-3xl font-bold">Stock</h1>
@@ -27,7 +27,7 @@ export default async function StockPage() {
               <span className="font-mono text-xl font-bold tracking-wider">{i.tagCode}</span>
               <span className="text-lg">{describe(i)}</span>
               <span className="text-base text-ink-soft">
-                {i.markedWllLb ? `Marked WLL ${i.markedWllLb.toLocaleString("en-US")} lb` : "No WLL marking"}
+                {i.wllLb ? `WLL ${i.wllLb.toLocaleString("en-US")} lb` : "Cannot be rated"}
                 {i.yardName ? ` · ${i.yardName}` : ""}
               </span>
             </span>

@@ -1,0 +1,134 @@
+import { z } from "zod";
+import { parseGrade, tryParseSize } from "@/lib/securement";
+import { ITEM_KINDS, type ItemKind } from "./labels";
+import { itemRating } from "./rating";
+
+// One schema for an item, used by the add/edit forms, the JSON API and (later) the CSV
+// import, so all three refuse the same input with the same words.
+
+const blank = (v: unknown) => (v === "" || v === null ? undefined : v);
+
+const sizeValue = (what: string) =>
+  z.union([z.string(), z.number()], { error: `Enter the ${what}.` }).transform((v, ctx) => {
+    const parsed = tryParseSize(v);
+    if (!parsed) {
+      ctx.addIssue({ code: "custom", message: `Write the ${what} as the trade does: 3/8, 3/8 in, 10 mm or 0.375.` });
+      return z.NEVER;
+    }
+    return parsed.label;
+  });
+
+const sizeText = (what: string) => z.preprocess(blank, sizeValue(what).optional());
+
+const weight = z.object({
+  value: z.coerce.number({ error: "Enter the WLL as a number." }).positive("The WLL must be more than 0.").max(200_000, "That WLL is beyond any tiedown part; check the figure."),
+  unit: z.enum(["lb", "kg"], { error: "The WLL unit is lb or kg." }),
+});
+
+const length = z.object({
+  value: z.coerce.number({ error: "Enter the length as a number." }).positive("The length must be more than 0.").max(200, "That length is too long for a tiedown; check the figure."),
+  unit: z.enum(["ft", "m", "in", "mm"], { error: "The length unit is ft, m, in or mm." }),
+});
+
+const MM_PER = { ft: 304.8, m: 1000, in: 25.4, mm: 1 } as const;
+const KG_PER_LB = 0.45359237; // exact, by the 1959 international agreement
+
+export const itemInputSchema = z
+  .object({
+    kind: z.enum(ITEM_KINDS, { error: "Choose what kind of item this is." }),
+    marking: z.enum(["wll", "grade", "none"], { error: "Say what is marked on the item: its WLL, its grade only, or nothing." }),
+    markedWll: z.preprocess(blank, weight.optional()),
+    grade: z.preprocess(
+      blank,
+      z
+        .union([z.string(), z.number()])
+        .transform((v, ctx) => {
+          const g = parseGrade(v);
+          if (g === undefined || ![30, 43, 70, 80, 100].includes(g)) {
+            ctx.addIssue({ code: "custom", message: "Grade is one of 30, 43, 70, 80 or 100 (as stamped: 3, 4, 7, 8, 10 are read too)." });
+            return z.NEVER;
+          }
+          return g;
+        })
+        .optional(),
+    ),
+    size: sizeText("size"),
+    chainSizeRange: z.preprocess(blank, z.tuple([sizeValue("smallest chain size"), sizeValue("largest chain size")]).optional()),
+    mechanism: z.preprocess(blank, z.enum(["ratchet", "lever"], { error: "A binder is ratchet or lever." }).optional()),
+    length: z.preprocess(blank, length.optional()),
+    ends: z.preprocess(blank, z.string().trim().max(120, "Keep the end fittings under 120 characters.").optional()),
+    serial: z.preprocess(blank, z.string().trim().max(80, "Keep the serial or lot under 80 characters.").optional()),
+    yardId: z.preprocess(blank, z.uuid("Choose a yard from the list.").optional()),
+    inServiceOn: z.preprocess(blank, z.iso.date("Enter the date as YYYY-MM-DD.").optional()),
+    costCents: z.preprocess(blank, z.coerce.number().int("Cost is in whole cents.").min(0, "Cost cannot be negative.").max(100_000_000).optional()),
+  })
+  .superRefine((v, ctx) => {
+    const needs = (path: string, message: string) => ctx.addIssue({ code: "custom", path: [path], message });
+    if (v.marking === "wll" && !v.markedWll) needs("markedWll", "Enter the WLL marked on the item.");
+    if (v.marking !== "wll" && v.markedWll) needs("marking", "A WLL was entered: set the marking to 'WLL marked'.");
+    if (["chain", "hook"].includes(v.kind) && v.marking === "grade" && !v.grade) needs("grade", "Enter the grade stamped on the item.");
+    if (["chain", "web-strap", "wire-rope", "hook", "shackle"].includes(v.kind) && !v.size) {
+      needs("size", v.kind === "web-strap" ? "Enter the webbing width, e.g. 2 or 4 (inches)." : "Enter the size, e.g. 3/8 or 10 mm.");
+    }
+    if (v.kind === "binder" && !v.chainSizeRange) needs("chainSizeRange", "Enter the chain sizes the binder takes, e.g. 5/16 to 3/8.");
+    if (v.kind === "binder" && !v.mechanism) needs("mechanism", "Choose ratchet or lever.");
+    if (ctx.issues?.length) return;
+    // The rated-limit engine decides whether the item can be rated at all (49 CFR 393.108).
+    const rating = itemRating(toRatable(v));
+    if (rating.wllLb === null) {
+      const field = v.marking === "wll" ? "markedWll" : ["binder", "shackle", "rated-item", "hook"].includes(v.kind) ? "marking" : "size";
+      needs(field, rating.warnings[0] ?? "This item cannot be rated: enter its marked WLL.");
+    }
+  });
+
+export type ItemInput = z.output<typeof itemInputSchema>;
+
+/** The fields the rated-limit engine reads. */
+export function toRatable(v: Pick<ItemInput, "kind" | "marking" | "markedWll" | "grade" | "size" | "chainSizeRange">) {
+  return {
+    kind: v.kind as ItemKind,
+    grade: v.marking === "none" ? null : (v.grade ?? null),
+    gradeMarked: v.marking !== "none",
+    size: v.size ?? null,
+    markedWllLb: v.markedWll ? toWholeLb(v.markedWll) : null,
+    details: { chainSizeRange: v.chainSizeRange ?? null },
+  };
+}
+
+/** Pounds as stored (whole pounds). A kilogram marking is converted with the exact factor. */
+export function toWholeLb(w: { value: number; unit: "lb" | "kg" }): number {
+  return Math.round(w.unit === "lb" ? w.value : w.value / KG_PER_LB);
+}
+
+export function toMillimetres(l: { value: number; unit: keyof typeof MM_PER }): number {
+  return Math.round(l.value * MM_PER[l.unit]);
+}
+
+/** Flat form fields (FormData) to the nested shape the schema reads. */
+export function itemFormToInput(form: Record<string, unknown>) {
+  const get = (k: string) => (typeof form[k] === "string" ? (form[k] as string) : undefined);
+  const pair = <T extends string>(value?: string, unit?: T) => (value ? { value, unit } : undefined);
+  return {
+    kind: get("kind"),
+    marking: get("marking"),
+    markedWll: pair(get("markedWllValue"), get("markedWllUnit")),
+    grade: get("grade"),
+    size: get("size"),
+    chainSizeRange: get("rangeMin") || get("rangeMax") ? [get("rangeMin") ?? "", get("rangeMax") ?? ""] : undefined,
+    mechanism: get("mechanism"),
+    length: pair(get("lengthValue"), get("lengthUnit")),
+    ends: get("ends"),
+    serial: get("serial"),
+    yardId: get("yardId"),
+    inServiceOn: get("inServiceOn"),
+    costCents: get("cost") ? Math.round(Number(get("cost")) * 100) : undefined,
+  };
+}
+
+export const itemFormSchema = z.preprocess((v) => itemFormToInput(v as Record<string, unknown>), itemInputSchema);
+
+/** Where an item lives and how its state changes. */
+export const moveSchema = z.object({
+  itemIds: z.array(z.uuid()).min(1, "Choose at least one item.").max(500, "Move at most 500 items at once."),
+  yardId: z.uuid("Choose a yard."),
+});
