@@ -1,8 +1,9 @@
 import Link from "next/link";
 import { ROLE_LABELS } from "@/lib/auth/roles";
 import type { Principal } from "@/lib/auth/session";
-import { navFor } from "@/lib/shell/nav";
+import { barFor, navFor } from "@/lib/shell/nav";
 import { Logo } from "@/components/ui/logo";
+import { QueryProvider } from "@/components/providers/query-provider";
 import { NavLinks } from "./nav-links";
 import { SignOutButton } from "./sign-out-button";
 
@@ -52,10 +53,12 @@ export function AppShell({
         </div>
       </aside>
 
-      <main className="px-4 pb-24 pt-4 md:px-8 md:pb-8">{children}</main>
+      <main className="px-4 pb-24 pt-4 md:px-8 md:pb-8">
+        <QueryProvider>{children}</QueryProvider>
+      </main>
 
       <nav aria-label="Main" className="fixed inset-x-0 bottom-0 z-10 bg-deck md:hidden">
-        <NavLinks entries={entries} variant="bar" />
+        <NavLinks entries={barFor(principal)} variant="bar" />
       </nav>
     </div>
   );

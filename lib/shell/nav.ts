@@ -1,15 +1,22 @@
 import { can, type Actor, type Permission } from "@/lib/auth/roles";
 
+export type NavIconName = "home" | "scan" | "stock" | "check" | "ratings" | "people" | "settings" | "audit" | "more";
+
 export interface NavEntry {
   href: string;
   label: string;
-  icon: "home" | "stock" | "people" | "settings" | "audit";
+  icon: NavIconName;
   permission?: Permission;
+  /** Shown in the phone's bottom bar; the rest sit behind "More". */
+  primary?: boolean;
 }
 
 const ENTRIES: readonly NavEntry[] = [
-  { href: "/", label: "Today", icon: "home" },
-  { href: "/stock", label: "Stock", icon: "stock", permission: "stock.view" },
+  { href: "/", label: "Today", icon: "home", primary: true },
+  { href: "/scan", label: "Scan", icon: "scan", permission: "stock.view", primary: true },
+  { href: "/stock", label: "Stock", icon: "stock", permission: "stock.view", primary: true },
+  { href: "/check", label: "Load check", icon: "check", permission: "securement.check", primary: true },
+  { href: "/ratings", label: "WLL lookup", icon: "ratings", permission: "securement.check" },
   { href: "/people", label: "People", icon: "people", permission: "people.manage" },
   { href: "/audit", label: "Audit log", icon: "audit", permission: "audit.view" },
   { href: "/settings", label: "Settings", icon: "settings", permission: "settings.manage" },
@@ -17,8 +24,15 @@ const ENTRIES: readonly NavEntry[] = [
 
 /**
  * The navigation a role sees: only what it may open.
- * @example navFor({ role: "yard_hand", designated: false }).map((e) => e.href) // ["/", "/stock"]
+ * @example navFor({ role: "yard_hand", designated: false }).map((e) => e.href) // ["/", "/scan", "/stock", "/check", "/ratings"]
  */
 export function navFor(actor: Actor): NavEntry[] {
   return ENTRIES.filter((e) => !e.permission || can(actor, e.permission));
+}
+
+/** The phone's bottom bar: the primary entries and a "More" page for the rest. */
+export function barFor(actor: Actor): NavEntry[] {
+  const all = navFor(actor);
+  const primary = all.filter((e) => e.primary);
+  return primary.length < all.length ? [...primary, { href: "/more", label: "More", icon: "more" }] : primary;
 }

@@ -35,6 +35,7 @@ const PAGES: Record<string, Access> = {
   "/people": OWNER,
   "/settings": OWNER,
   "/audit": OWNER,
+  "/more": ALL,
 };
 
 const ACTIONS: Record<string, Access> = {

@@ -1,16 +1,28 @@
 import { describe, expect, it } from "vitest";
-import { navFor } from "@/lib/shell/nav";
+import { barFor, navFor } from "@/lib/shell/nav";
 
 describe("navFor", () => {
   it("shows a yard hand only what a yard hand may open", () => {
-    expect(navFor({ role: "yard_hand", designated: false }).map((e) => e.href)).toEqual(["/", "/stock"]);
+    expect(navFor({ role: "yard_hand", designated: false }).map((e) => e.href)).toEqual(["/", "/scan", "/stock", "/check", "/ratings"]);
   });
   it("shows an owner the people, audit and settings pages", () => {
-    expect(navFor({ role: "owner", designated: false }).map((e) => e.href)).toEqual(["/", "/stock", "/people", "/audit", "/settings"]);
+    expect(navFor({ role: "owner", designated: false }).map((e) => e.href)).toEqual([
+      "/", "/scan", "/stock", "/check", "/ratings", "/people", "/audit", "/settings",
+    ]);
   });
   it("keeps people and settings from a planner", () => {
     const hrefs = navFor({ role: "planner", designated: true }).map((e) => e.href);
     expect(hrefs).not.toContain("/people");
     expect(hrefs).not.toContain("/settings");
+  });
+});
+
+describe("barFor", () => {
+  it("fits the phone's bottom bar: at most five entries, the rest behind More", () => {
+    for (const role of ["owner", "planner", "yard_hand"] as const) {
+      const bar = barFor({ role, designated: false });
+      expect(bar.length).toBeLessThanOrEqual(5);
+      expect(bar.at(-1)!.href).toBe("/more");
+    }
   });
 });

@@ -1,0 +1,27 @@
+import type { Metadata } from "next";
+import Link from "next/link";
+import { NavIcon } from "@/components/shell/nav-icon";
+import { requirePage } from "@/lib/auth/session";
+import { navFor } from "@/lib/shell/nav";
+
+export const metadata: Metadata = { title: "More" };
+
+/** On phones, everything that does not fit the bottom bar. */
+export default async function MorePage() {
+  const principal = await requirePage();
+  return (
+    <div className="flex max-w-md flex-col gap-4">
+      <h1 className="text-3xl font-bold">More</h1>
+      <ul className="flex flex-col gap-2">
+        {navFor(principal).map((e) => (
+          <li key={e.href}>
+            <Link href={e.href} className="flex min-h-16 items-center gap-3 rounded-xl border-2 border-ink px-4 text-xl font-bold">
+              <NavIcon icon={e.icon} />
+              {e.label}
+            </Link>
+          </li>
+        ))}
+      </ul>
+    </div>
+  );
+}
