@@ -54,9 +54,9 @@ describe("sign-in", () => {
 
 describe("the shell of each role", () => {
   const cases = [
-    { who: "olive", role: "Owner", nav: ["Today", "Stock", "People", "Audit log", "Settings"] },
-    { who: "pete", role: "Planner", nav: ["Today", "Stock"] },
-    { who: "yara", role: "Yard hand", nav: ["Today", "Stock"] },
+    { who: "olive", role: "Owner", nav: ["Today", "Scan", "Stock", "Load check", "More"], more: ["People", "Audit log", "Settings"] },
+    { who: "pete", role: "Planner", nav: ["Today", "Scan", "Stock", "Load check", "More"], more: ["WLL lookup"] },
+    { who: "yara", role: "Yard hand", nav: ["Today", "Scan", "Stock", "Load check", "More"], more: ["WLL lookup"] },
   ];
   for (const c of cases) {
     it(`shows ${c.role.toLowerCase()} only what the role may open, on a phone`, async () => {
@@ -70,6 +70,11 @@ describe("the shell of each role", () => {
       const box = await bar.getByRole("link").first().boundingBox();
       expect(box!.height).toBeGreaterThanOrEqual(48);
       await page.screenshot({ path: `${SCREENSHOT_DIR}/shell-${c.who}-phone.png`, fullPage: true });
+      await bar.getByRole("link", { name: "More" }).click();
+      await page.waitForURL(`${BASE_URL}/more`);
+      const more = (await page.locator("main").getByRole("link").allTextContents()).map((t) => t.trim());
+      for (const label of c.more) expect(more).toContain(label);
+      if (c.who !== "olive") expect(more).not.toContain("People");
       await signOut(page);
       await page.close();
     });
