@@ -23,6 +23,8 @@ export interface ItemSummary {
   lastCheckedAt: Date | null;
   lastInspectedOn: string | null;
   details: Record<string, unknown>;
+  inServiceOn: string | null;
+  costCents: number | null;
 }
 
 const SUMMARY_COLUMNS = [
@@ -33,6 +35,8 @@ const SUMMARY_COLUMNS = [
   "i.last_checked_at as lastCheckedAt",
   db.raw("to_char(i.last_inspected_on, 'YYYY-MM-DD') as \"lastInspectedOn\""),
   "i.details",
+  db.raw("to_char(i.in_service_on, 'YYYY-MM-DD') as \"inServiceOn\""),
+  "i.cost_cents as costCents",
 ];
 
 function base(trx: Knex = db) {

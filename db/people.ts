@@ -30,6 +30,10 @@ export async function getOrganisation(id: string) {
   return db("organisations").where({ id }).first("id", "name", "public_tag_view as publicTagView");
 }
 
+export async function getOrganisationSettings(id: string) {
+  return db("organisations").where({ id }).first("inspection_interval_days as inspectionIntervalDays");
+}
+
 export async function updateOrganisation(id: string, patch: { name?: string; publicTagView?: boolean }, trx: Knex = db) {
   await trx("organisations").where({ id }).update({
     ...(patch.name !== undefined && { name: patch.name }),

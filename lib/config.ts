@@ -7,6 +7,12 @@ const schema = z.object({
   SMTP_URL: z.string().default("smtp://127.0.0.1:54325"),
   MAIL_FROM: z.string().default("Linkyard <no-reply@linkyard.invalid>"),
   APP_URL: z.string().url().default("http://127.0.0.1:3000"),
+  // Object storage for photos and certificates: any S3-compatible service.
+  S3_ENDPOINT: z.string().default("http://127.0.0.1:54370"),
+  S3_REGION: z.string().default("us-east-1"),
+  S3_BUCKET: z.string().default("linkyard-files"),
+  S3_ACCESS_KEY_ID: z.string().default("S3RVER"),
+  S3_SECRET_ACCESS_KEY: z.string().default("S3RVER"),
   /** Failed sign-ins allowed per account or address in SIGN_IN_WINDOW_MINUTES. */
   SIGN_IN_MAX_FAILURES: z.coerce.number().int().positive().default(5),
   SIGN_IN_WINDOW_MINUTES: z.coerce.number().int().positive().default(15),

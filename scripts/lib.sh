@@ -7,6 +7,8 @@ DATA="$ROOT/.data"
 PG_PORT="${LINKYARD_PG_PORT:-54329}"
 SMTP_PORT="${LINKYARD_SMTP_PORT:-54325}"
 MAIL_WEB_PORT="${LINKYARD_MAIL_WEB_PORT:-54380}"
+S3_PORT="${LINKYARD_S3_PORT:-54370}"
+S3_BUCKET="linkyard-files"
 PG_USER_PASSWORD="linkyard"
 export NEXT_TELEMETRY_DISABLED=1
 mkdir -p "$DATA"
@@ -107,6 +109,26 @@ start_mail() {
      --web "$MAIL_WEB_PORT" --web-ip 127.0.0.1 >"$DATA/maildev.log" 2>&1 & echo $! >"$DATA/maildev.pid")
   for _ in $(seq 1 50); do mail_running && return; sleep 0.2; done
   say "the mail fake did not start; see $DATA/maildev.log"; exit 1
+}
+
+s3_running() { curl -s -o /dev/null "http://127.0.0.1:$S3_PORT/" 2>/dev/null; }
+
+# A local S3-compatible fake for photos and certificates; the app talks to it through the
+# AWS SDK exactly as it would to a hosted bucket.
+start_s3() {
+  if s3_running; then return; fi
+  say "starting the local file-storage fake (S3 API on 127.0.0.1:$S3_PORT)"
+  mkdir -p "$DATA/s3"
+  (cd "$ROOT"; nohup node_modules/.bin/s3rver -d "$DATA/s3" -a 127.0.0.1 -p "$S3_PORT" --silent \
+     --configure-bucket "$S3_BUCKET" >"$DATA/s3rver.log" 2>&1 & echo $! >"$DATA/s3rver.pid")
+  for _ in $(seq 1 50); do s3_running && return; sleep 0.2; done
+  say "the file-storage fake did not start; see $DATA/s3rver.log"; exit 1
+}
+
+export_service_env() {
+  export SMTP_URL="${SMTP_URL:-smtp://127.0.0.1:$SMTP_PORT}"
+  export S3_ENDPOINT="${S3_ENDPOINT:-http://127.0.0.1:$S3_PORT}"
+  export S3_BUCKET="${S3_BUCKET}"
 }
 
 knex_cli() { (cd "$ROOT" && node --import tsx node_modules/knex/bin/cli.js "$@"); }

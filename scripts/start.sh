@@ -8,9 +8,10 @@ ensure_node_modules
 start_postgres
 ensure_database linkyard
 start_mail
+start_s3
 
 export DATABASE_URL="${DATABASE_URL:-$(database_url linkyard)}"
-export SMTP_URL="${SMTP_URL:-smtp://127.0.0.1:$SMTP_PORT}"
+export_service_env
 export APP_URL="${APP_URL:-http://127.0.0.1:$PORT}"
 
 say "applying migrations"

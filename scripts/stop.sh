@@ -4,6 +4,7 @@ source "$(dirname "$0")/lib.sh"
 stop_pid_file "$DATA/app.pid"
 stop_pid_file "$DATA/test-app.pid"
 stop_pid_file "$DATA/maildev.pid"
+stop_pid_file "$DATA/s3rver.pid"
 find_pg_bin; choose_pgdata
 if pg_running; then as_pg "$PG_BIN/pg_ctl" -D "$PGDATA" -w stop -m fast >/dev/null; say "PostgreSQL stopped"; fi
 say "stopped"

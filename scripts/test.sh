@@ -9,9 +9,10 @@ ensure_chromium
 start_postgres
 ensure_database linkyard_test
 start_mail
+start_s3
 
 export DATABASE_URL="$(database_url linkyard_test)"
-export SMTP_URL="smtp://127.0.0.1:$SMTP_PORT"
+export_service_env
 export APP_URL="http://127.0.0.1:$TEST_PORT"
 export LINKYARD_BASE_URL="$APP_URL"
 export MAIL_API="http://127.0.0.1:$MAIL_WEB_PORT"

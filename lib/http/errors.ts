@@ -1,3 +1,5 @@
+import { isUuid } from "./ids";
+
 // One error type for every refusal the app makes on purpose. Route handlers turn it into
 // a JSON body with its status; server actions turn it into a message on the form.
 
@@ -32,4 +34,10 @@ export function zodIssues(error: { issues: ReadonlyArray<{ path: ReadonlyArray<P
     path: issue.path.map(String).join("."),
     message: issue.message,
   }));
+}
+
+/** A route's id parameter; anything that is not a UUID is simply not found. */
+export function uuidParam(value: string | undefined, what = "item"): string {
+  if (!isUuid(value)) throw notFound(`No such ${what}.`);
+  return value;
 }

@@ -49,3 +49,26 @@ export function passwordResetMail(p: { to: string; link: string; expiresAt: Date
     ].join("\n"),
   };
 }
+
+export function damageReportMail(p: {
+  to: string;
+  reporterName: string;
+  itemDescription: string;
+  tagCode: string;
+  defects: string[];
+  note: string | null;
+  link: string;
+}): MailMessage {
+  return {
+    to: p.to,
+    subject: `Tagged out: ${p.itemDescription} (${p.tagCode})`,
+    text: [
+      `${p.reporterName} tagged out ${p.itemDescription}, tag ${p.tagCode}, after a pre-use check.`,
+      "",
+      ...(p.defects.length ? ["Defects found:", ...p.defects.map((d) => `- ${d}`), ""] : []),
+      ...(p.note ? [`Note: ${p.note}`, ""] : []),
+      "It stays out of use until an owner or designated person inspects it and returns it to service or retires it:",
+      p.link,
+    ].join("\n"),
+  };
+}

@@ -12,6 +12,7 @@ type Role = "owner" | "planner" | "yard_hand";
 type Access = "public" | Role[];
 const ALL: Role[] = ["owner", "planner", "yard_hand"];
 const OWNER: Role[] = ["owner"];
+const EDITORS: Role[] = ["owner", "planner"];
 
 const API: Record<string, Access> = {
   "GET /api/health": "public",
@@ -27,6 +28,18 @@ const API: Record<string, Access> = {
   "POST /api/v1/invites/accept": "public",
   "POST /api/v1/password-resets": "public",
   "POST /api/v1/password-resets/confirm": "public",
+  "GET /api/v1/items": ALL,
+  "POST /api/v1/items": EDITORS,
+  "GET /api/v1/items/[id]": ALL,
+  "PUT /api/v1/items/[id]": EDITORS,
+  "GET /api/v1/items/[id]/events": ALL,
+  "POST /api/v1/items/[id]/events": ALL, // the service checks the role per event type
+  "PUT /api/v1/items/[id]/events/[eventId]": ALL, // answers 405: history is append-only
+  "PATCH /api/v1/items/[id]/events/[eventId]": ALL,
+  "DELETE /api/v1/items/[id]/events/[eventId]": ALL,
+  "POST /api/v1/items/move": EDITORS,
+  "GET /api/v1/yards": ALL,
+  "GET /api/v1/attachments/[id]": ALL,
 };
 
 const PAGES: Record<string, Access> = {
@@ -36,6 +49,11 @@ const PAGES: Record<string, Access> = {
   "/settings": OWNER,
   "/audit": OWNER,
   "/more": ALL,
+  "/stock/new": EDITORS,
+  "/items/[id]": ALL,
+  "/items/[id]/check": ALL,
+  "/items/[id]/inspect": OWNER, // or a designated person of any role
+  "/items/[id]/edit": EDITORS,
 };
 
 const ACTIONS: Record<string, Access> = {
@@ -51,6 +69,10 @@ const ACTIONS: Record<string, Access> = {
   "app/(app)/settings/actions.ts#saveOrganisationAction": OWNER,
   "app/(app)/settings/actions.ts#createTokenAction": OWNER,
   "app/(app)/settings/actions.ts#revokeTokenAction": OWNER,
+  "app/(app)/stock/actions.ts#createItemAction": EDITORS,
+  "app/(app)/stock/actions.ts#editItemAction": EDITORS,
+  "app/(app)/items/[id]/actions.ts#itemEventAction": ALL,
+  "app/(app)/items/[id]/actions.ts#certificateAction": EDITORS,
 };
 
 const ROOT = path.resolve(__dirname, "../..");
@@ -99,15 +121,18 @@ async function callAction(client: Client, action: ActionRef, fields: Record<stri
   const form = new FormData();
   for (const [k, v] of Object.entries(fields)) form.append(`_1_${k}`, v);
   form.append("0", JSON.stringify([{}, "$K1"])); // the root goes last, as React sends it
-  const res = await client.request("POST", action.page, form, { "next-action": action.id });
+  const res = await client.request("POST", fillPage(action.page), form, { "next-action": action.id });
   return res.text;
 }
 
-const fill = (p: string) => p.replace("[id]", "00000000-0000-4000-8000-000000000000");
+const fill = (p: string) => p.replace("[id]", "00000000-0000-4000-8000-000000000000").replace("[eventId]", "1");
+/** Pages and action targets need a real item of the walking organisation. */
+const fillPage = (p: string) => p.replace("[id]", ownItemId);
 
 let clients: Record<Role | "anonymous", Client>;
 let outsider: Client;
 let victim: { organisationId: string; plannerId: string; inviteId: string };
+let ownItemId: string;
 
 beforeAll(async () => {
   const org = await newOrganisation("Matrix Co");
@@ -118,6 +143,9 @@ beforeAll(async () => {
   outsider = other.owner;
   const pending = await org.owner.post("/api/v1/invites", { email: `pending-${Date.now()}@linkyard-test.example`, role: "planner" });
   victim = { organisationId: org.organisationId, plannerId: planner.userId, inviteId: pending.json.id };
+  const item = await org.owner.post("/api/v1/items", { kind: "chain", marking: "grade", grade: 70, size: "3/8" });
+  if (item.status !== 201) throw new Error(`item: ${item.status} ${item.text}`);
+  ownItemId = item.json.id;
 }, 60_000);
 
 afterAll(() => testDb.destroy());
@@ -160,14 +188,14 @@ describe("route handlers", () => {
 describe("pages", () => {
   for (const [page, access] of Object.entries(PAGES)) {
     it(`${page}: sends a stranger to sign-in`, async () => {
-      const res = await fetch(BASE_URL + page, { redirect: "manual" });
+      const res = await fetch(BASE_URL + fillPage(page), { redirect: "manual" });
       expect(res.status).toBe(307);
       expect(res.headers.get("location")).toMatch(/\/sign-in$/);
     });
     for (const role of ALL) {
       const allowed = access === "public" || access.includes(role);
       it(`${page}: ${role} gets ${allowed ? 200 : 403}`, async () => {
-        const res = await clients[role].get(page);
+        const res = await clients[role].get(fillPage(page));
         expect(res.status).toBe(allowed ? 200 : 403);
       });
     }
@@ -221,6 +249,20 @@ describe("another organisation", () => {
     expect(text).toContain("No such person in your organisation.");
     const row = await testDb("users").where({ id: victim.plannerId }).first("role");
     expect(row.role).toBe("planner");
+  });
+});
+
+describe("another organisation's stock", () => {
+  it("is not found, whatever the route, and stays unchanged", async () => {
+    const before = await testDb("items").where({ id: ownItemId }).first("status", "serial");
+    expect((await outsider.get(`/api/v1/items/${ownItemId}`)).status).toBe(404);
+    expect((await outsider.get(`/api/v1/items/${ownItemId}/events`)).status).toBe(404);
+    expect((await outsider.request("PUT", `/api/v1/items/${ownItemId}`, { kind: "chain", marking: "grade", grade: 70, size: "3/8", serial: "X" })).status).toBe(404);
+    expect((await outsider.post(`/api/v1/items/${ownItemId}/events`, { type: "tag_out", note: "mine now" })).status).toBe(404);
+    expect((await outsider.get(`/items/${ownItemId}`)).status).toBe(404);
+    const list = await outsider.get("/api/v1/items?perPage=100");
+    expect(list.json.data.map((i: { id: string }) => i.id)).not.toContain(ownItemId);
+    expect(await testDb("items").where({ id: ownItemId }).first("status", "serial")).toEqual(before);
   });
 });
 

@@ -1,0 +1,79 @@
+"use server";
+import { revalidatePath } from "next/cache";
+import { z } from "zod";
+import { formAction } from "@/lib/auth/action";
+import { itemEventSchema } from "@/lib/stock/api-schemas";
+import { recordItemEvent } from "@/lib/stock/events";
+import { attachCertificate } from "@/lib/stock/service";
+import { uuidParam } from "@/lib/http/errors";
+
+// Form fields → the API's event body, so forms and API share one schema and one service.
+function answersFrom(form: Record<string, unknown>) {
+  return Object.entries(form)
+    .filter(([k]) => k.startsWith("defect_"))
+    .map(([k, v]) => ({ id: k.slice("defect_".length), defect: v === "yes" }));
+}
+
+function measurementsFrom(form: Record<string, unknown>) {
+  const out: Record<string, number> = {};
+  for (const [k, v] of Object.entries(form)) {
+    if (!k.startsWith("m_") || typeof v !== "string" || v.trim() === "") continue;
+    const unitMm = form[`unit_${k.slice(2)}`] === "mm";
+    const n = Number(v.replace(",", "."));
+    out[k.slice(2)] = Number.isFinite(n) ? (unitMm ? n / 25.4 : n) : Number.NaN;
+  }
+  return out;
+}
+
+const file = z.instanceof(File).optional();
+
+const eventForm = z.preprocess(
+  (raw) => {
+    const form = raw as Record<string, unknown>;
+    const type = form.type;
+    const base = { type, note: form.note || undefined, reason: form.reason, eventId: form.eventId ? Number(form.eventId) : undefined };
+    if (type === "check") return { body: { ...base, answers: answersFrom(form) }, itemId: form.itemId, photo: form.photo };
+    if (type === "inspection") {
+      return {
+        body: { ...base, answers: answersFrom(form), measurements: measurementsFrom(form), verdict: form.verdict },
+        itemId: form.itemId,
+        certificate: form.certificate,
+      };
+    }
+    return { body: base, itemId: form.itemId, photo: form.photo };
+  },
+  z.object({ body: itemEventSchema, itemId: z.string(), photo: file, certificate: file }),
+);
+
+const DONE: Record<string, string> = {
+  tag_out: "Tagged out. The owners have been e-mailed.",
+  inspection: "Inspection recorded.",
+  return_to_service: "Returned to service.",
+  retired: "Retired. It stays in the records.",
+  lost: "Marked lost.",
+  found: "Marked found. It stays tagged out until someone inspects it.",
+  correction: "Correction recorded. The original entry stays in the history.",
+};
+
+export const itemEventAction = formAction("items.check", eventForm, async ({ body, itemId, photo, certificate }, principal) => {
+  const id = uuidParam(itemId);
+  const result = await recordItemEvent(principal, id, body, { photo, certificate });
+  revalidatePath(`/items/${id}`);
+  if (body.type === "check" && result && "outcome" in result) {
+    return result.outcome === "pass"
+      ? { ok: true, message: "Check recorded: no defects found. Keep an eye on it during the trip." }
+      : { ok: true, message: "Check failed: the item is tagged out and the owners have been e-mailed. Do not use it." };
+  }
+  return { ok: true, message: DONE[body.type] ?? "Recorded." };
+});
+
+export const certificateAction = formAction(
+  "stock.edit",
+  z.object({ itemId: z.string(), certificate: z.instanceof(File, { error: "Choose a file." }) }),
+  async ({ itemId, certificate }, principal) => {
+    const id = uuidParam(itemId);
+    await attachCertificate(principal, id, certificate);
+    revalidatePath(`/items/${id}`);
+    return { ok: true, message: "Document stored with the item." };
+  },
+);

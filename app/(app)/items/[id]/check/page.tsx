@@ -1,0 +1,33 @@
+import type { Metadata } from "next";
+import Link from "next/link";
+import { notFound } from "next/navigation";
+import { PreUseCheckForm } from "@/components/items/item-forms";
+import { UsabilityBanner } from "@/components/items/usability-banner";
+import { getItem } from "@/db/items";
+import { requirePage } from "@/lib/auth/session";
+import { isUuid } from "@/lib/http/ids";
+import { PRE_USE_CHECKLISTS } from "@/lib/stock/checklists";
+import type { ItemKind, ItemStatus } from "@/lib/stock/labels";
+import { describeItem } from "@/lib/stock/summary";
+
+export const metadata: Metadata = { title: "Pre-use check" };
+
+export default async function PreUseCheckPage({ params }: { params: Promise<{ id: string }> }) {
+  const principal = await requirePage("items.check");
+  const { id } = await params;
+  if (!isUuid(id)) notFound();
+  const item = await getItem(principal.organisationId, id);
+  if (!item) notFound();
+  return (
+    <div className="flex max-w-xl flex-col gap-4">
+      <Link href={`/items/${id}`} className="text-lg underline">← {item.tagCode}</Link>
+      <h1 className="text-3xl font-bold">Pre-use check</h1>
+      <p className="text-xl">{describeItem(item)} · <span className="font-mono font-bold">{item.tagCode}</span></p>
+      {item.status === "in_service" ? (
+        <PreUseCheckForm itemId={id} points={PRE_USE_CHECKLISTS[item.kind as ItemKind]} />
+      ) : (
+        <UsabilityBanner status={item.status as ItemStatus} nextInspectionDue={item.nextInspectionDue} />
+      )}
+    </div>
+  );
+}

@@ -1,0 +1,21 @@
+import { getItem, listEvents } from "@/db/items";
+import { notFound, uuidParam } from "@/lib/http/errors";
+import { route } from "@/lib/http/route";
+import { itemEventSchema } from "@/lib/stock/api-schemas";
+import { recordItemEvent } from "@/lib/stock/events";
+import { toItemSummary } from "@/lib/stock/summary";
+
+/** The item's service history, newest first. */
+export const GET = route("stock.view", {}, async ({ principal, params }) => {
+  const id = uuidParam(params.id);
+  if (!(await getItem(principal.organisationId, id))) throw notFound("No such item.");
+  return { data: await listEvents(principal.organisationId, id) };
+});
+
+/** Records a check, tag-out, inspection or status change; the service checks the role per type. */
+export const POST = route("items.check", { body: itemEventSchema }, async ({ principal, params, body }) => {
+  const id = uuidParam(params.id);
+  const result = await recordItemEvent(principal, id, body);
+  const item = await getItem(principal.organisationId, id);
+  return Response.json({ result: result ?? null, item: item ? toItemSummary(item) : null }, { status: 201 });
+});

@@ -1,0 +1,17 @@
+import { getItem, listItems } from "@/db/items";
+import { route } from "@/lib/http/route";
+import { itemListQuerySchema } from "@/lib/stock/api-schemas";
+import { itemInputSchema } from "@/lib/stock/schemas";
+import { createItem } from "@/lib/stock/service";
+import { toItemSummary } from "@/lib/stock/summary";
+
+/** A page of stock: filters kind, status, yardId, due (overdue | 30d), q (tag code or serial). */
+export const GET = route("stock.view", { query: itemListQuerySchema }, async ({ principal, query }) => {
+  const page = await listItems(principal.organisationId, query);
+  return { data: page.data.map(toItemSummary), pageCount: page.pageCount, total: page.total };
+});
+
+export const POST = route("stock.edit", { body: itemInputSchema }, async ({ principal, body }) => {
+  const id = await createItem(principal, body);
+  return Response.json(toItemSummary((await getItem(principal.organisationId, id))!), { status: 201 });
+});

@@ -1,0 +1,49 @@
+import { z } from "zod";
+import { ITEM_KINDS, ITEM_STATUSES } from "./labels";
+
+// Query and body shapes of the stock API, shared by the route handlers and the table.
+
+const blank = (v: unknown) => (v === "" ? undefined : v);
+
+export const SORT_KEYS = ["tagCode", "kind", "grade", "size", "wllLb", "status", "yardName", "nextInspectionDue", "serial"] as const;
+
+export const itemListQuerySchema = z.object({
+  page: z.coerce.number().int().min(1, "page starts at 1").default(1),
+  perPage: z.coerce.number().int().min(1).max(100, "perPage is at most 100").default(25),
+  sort: z.preprocess(blank, z.enum(SORT_KEYS).default("tagCode")),
+  order: z.preprocess(blank, z.enum(["asc", "desc"]).default("asc")),
+  kind: z.preprocess(blank, z.enum(ITEM_KINDS).optional()),
+  status: z.preprocess(blank, z.enum(ITEM_STATUSES).optional()),
+  yardId: z.preprocess(blank, z.uuid("yardId is not a yard id").optional()),
+  due: z.preprocess(blank, z.enum(["overdue", "30d"]).optional()),
+  q: z.preprocess(blank, z.string().trim().max(60).optional()),
+});
+export type ItemListQuery = z.output<typeof itemListQuerySchema>;
+
+const answers = z
+  .array(z.object({ id: z.string().min(1), defect: z.boolean({ error: "defect is true or false" }) }), { error: "answers lists every checklist point" })
+  .min(1, "Answer the checklist.");
+const note = z.string().trim().max(2000, "Keep the note under 2,000 characters.");
+const reason = z.string().trim().min(3, "Give the reason in a few words.").max(2000, "Keep the reason under 2,000 characters.");
+
+export const itemEventSchema = z.discriminatedUnion(
+  "type",
+  [
+    z.object({ type: z.literal("check"), answers, note: note.optional() }),
+    z.object({ type: z.literal("tag_out"), note: note.min(3, "Say what is wrong.") }),
+    z.object({
+      type: z.literal("inspection"),
+      answers,
+      measurements: z.record(z.string(), z.number({ error: "Measurements are numbers." }).min(0, "Measurements cannot be negative.")).default({}),
+      verdict: z.enum(["in_service", "repair", "retire"], { error: "The verdict is in_service, repair or retire." }),
+      note: note.optional(),
+    }),
+    z.object({ type: z.literal("return_to_service"), reason }),
+    z.object({ type: z.literal("retired"), reason }),
+    z.object({ type: z.literal("lost"), reason }),
+    z.object({ type: z.literal("found"), reason }),
+    z.object({ type: z.literal("correction"), eventId: z.number().int().positive(), note: note.min(3, "Say what was wrong.") }),
+  ],
+  { error: "type is one of check, tag_out, inspection, return_to_service, retired, lost, found, correction." },
+);
+export type ItemEventBody = z.output<typeof itemEventSchema>;

@@ -1,0 +1,324 @@
+import "server-only";
+import type { Knex } from "knex";
+import { db } from "@/db";
+import { writeAudit } from "@/db/audit";
+import * as items from "@/db/items";
+import { getOrganisationSettings } from "@/db/people";
+import type { Principal } from "@/lib/auth/session";
+import { can, type Permission } from "@/lib/auth/roles";
+import { config } from "@/lib/config";
+import { AppError, badRequest, conflict, fieldError, forbidden, notFound } from "@/lib/http/errors";
+import { sendMail } from "@/lib/mail/send";
+import { damageReportMail } from "@/lib/mail/templates";
+import { removeStored, storeUpload, type StoredFile } from "@/lib/storage/files";
+import type { FilePurpose } from "@/lib/storage/file-type";
+import { newTagCode } from "@/lib/tags/code";
+import { preUseOutcome, type CheckAnswer } from "./checklists";
+import { evaluateMeasurements, verdictProblem, type InspectionVerdict } from "./inspection";
+import { intervalsWithDefaults, nextDue } from "./intervals";
+import type { ItemKind, ItemStatus } from "./labels";
+import { itemRating } from "./rating";
+import { toMillimetres, toRatable, type ItemInput } from "./schemas";
+import { nextStatus, type StatusChange } from "./status";
+import { describeItem } from "./summary";
+
+// Everything that changes stock goes through here: permission, organisation, business rule,
+// then one transaction that writes the item, its history event and an audit row.
+
+function require(actor: Principal, permission: Permission) {
+  if (!can(actor, permission)) throw forbidden();
+}
+
+const today = () => new Date().toISOString().slice(0, 10);
+
+function toRow(input: ItemInput) {
+  const ratable = toRatable(input);
+  const rating = itemRating(ratable);
+  return {
+    kind: input.kind,
+    grade: ratable.grade,
+    grade_marked: ratable.gradeMarked,
+    size: input.size ?? (input.kind === "binder" ? (input.chainSizeRange?.[1] ?? null) : null),
+    length_mm: input.length ? toMillimetres(input.length) : null,
+    marked_wll_lb: ratable.markedWllLb,
+    serial: input.serial ?? null,
+    yard_id: input.yardId ?? null,
+    in_service_on: input.inServiceOn ?? null,
+    cost_cents: input.costCents ?? null,
+    details: JSON.stringify({
+      ...(input.mechanism && { mechanism: input.mechanism }),
+      ...(input.chainSizeRange && { chainSizeRange: input.chainSizeRange }),
+      ...(input.ends && { ends: input.ends }),
+    }),
+    wll_lb: rating.wllLb,
+    wll_source: rating.source,
+  };
+}
+
+async function checkReferences(actor: Principal, input: ItemInput, exceptId: string | undefined, trx: Knex) {
+  if (input.yardId && !(await items.yardBelongs(actor.organisationId, input.yardId, trx))) {
+    throw fieldError("yardId", "Choose a yard from the list.");
+  }
+  if (input.serial && (await items.serialTaken(actor.organisationId, input.serial, exceptId, trx))) {
+    throw conflict("Another item already has this serial or lot.", [{ path: "serial", message: "Another item already has this serial or lot." }]);
+  }
+}
+
+/** A tag code no item has yet (codes are random; a clash is rare but checked). */
+export async function freshTagCode(trx: Knex = db): Promise<string> {
+  for (let i = 0; i < 5; i++) {
+    const code = newTagCode();
+    if (!(await items.tagCodeExists(code, trx))) return code;
+  }
+  throw new Error("could not draw a free tag code");
+}
+
+export async function createItem(actor: Principal, input: ItemInput): Promise<string> {
+  require(actor, "stock.edit");
+  const intervals = intervalsWithDefaults((await getOrganisationSettings(actor.organisationId))?.inspectionIntervalDays);
+  return db.transaction(async (trx) => {
+    await checkReferences(actor, input, undefined, trx);
+    const row = toRow(input);
+    const id = await items.insertItem(
+      {
+        ...row,
+        organisation_id: actor.organisationId,
+        tag_code: await freshTagCode(trx),
+        status: "in_service",
+        next_inspection_due: nextDue(input.inServiceOn ?? today(), intervals[input.kind]),
+      },
+      trx,
+    );
+    await items.insertEvent({ organisationId: actor.organisationId, itemId: id, type: "created", actorId: actor.userId, note: "Added to stock" }, trx);
+    await writeAudit({ organisationId: actor.organisationId, actorId: actor.userId, action: "item.created", entity: "item", entityId: id, after: row }, trx);
+    return id;
+  });
+}
+
+export async function editItem(actor: Principal, id: string, input: ItemInput): Promise<void> {
+  require(actor, "stock.edit");
+  await db.transaction(async (trx) => {
+    const before = await items.getItem(actor.organisationId, id, trx);
+    if (!before) throw notFound("No such item in your stock.");
+    if (before.kind !== input.kind) throw fieldError("kind", "The kind of an item cannot change; add a new item instead.");
+    await checkReferences(actor, input, id, trx);
+    const row = toRow(input);
+    await items.updateItem(actor.organisationId, id, row, trx);
+    const after = await items.getItem(actor.organisationId, id, trx);
+    const changes = diff(before as unknown as Record<string, unknown>, after as unknown as Record<string, unknown>);
+    if (Object.keys(changes).length === 0) return;
+    await items.insertEvent({ organisationId: actor.organisationId, itemId: id, type: "edited", actorId: actor.userId, changes }, trx);
+    await writeAudit({ organisationId: actor.organisationId, actorId: actor.userId, action: "item.updated", entity: "item", entityId: id, before, after }, trx);
+  });
+}
+
+const TRACKED = ["grade", "gradeMarked", "size", "lengthMm", "markedWllLb", "wllLb", "serial", "yardName", "details"] as const;
+
+function diff(before: Record<string, unknown>, after: Record<string, unknown> | undefined) {
+  const out: Record<string, [unknown, unknown]> = {};
+  for (const key of TRACKED) {
+    if (JSON.stringify(before[key]) !== JSON.stringify(after?.[key])) out[key] = [before[key], after?.[key]];
+  }
+  return out;
+}
+
+export async function moveItems(actor: Principal, itemIds: string[], yardId: string): Promise<number> {
+  require(actor, "stock.edit");
+  return db.transaction(async (trx) => {
+    if (!(await items.yardBelongs(actor.organisationId, yardId, trx))) throw fieldError("yardId", "Choose a yard from the list.");
+    const yard = await trx("yards").where({ id: yardId }).first("name");
+    let moved = 0;
+    for (const id of itemIds) {
+      const before = await items.getItem(actor.organisationId, id, trx);
+      if (!before || before.yardId === yardId) continue;
+      await items.updateItem(actor.organisationId, id, { yard_id: yardId }, trx);
+      await items.insertEvent({ organisationId: actor.organisationId, itemId: id, type: "moved", actorId: actor.userId, changes: { yardName: [before.yardName, yard.name] } }, trx);
+      moved++;
+    }
+    await writeAudit({ organisationId: actor.organisationId, actorId: actor.userId, action: "items.moved", entity: "yard", entityId: yardId, after: { itemIds, moved } }, trx);
+    return moved;
+  });
+}
+
+/**
+ * Stores an optional file, then runs the database work; when that fails, the stored file is
+ * removed again, so a failure leaves neither a record nor an orphaned file.
+ */
+async function withUpload<T>(
+  actor: Principal,
+  file: File | null | undefined,
+  purpose: FilePurpose,
+  field: string,
+  work: (stored: StoredFile | null) => Promise<T>,
+): Promise<T> {
+  const stored = file && file.size > 0 ? await storeUpload(actor.organisationId, purpose, file, field) : null;
+  try {
+    return await work(stored);
+  } catch (error) {
+    if (stored) await removeStored(stored.storageKey).catch(() => undefined);
+    throw error;
+  }
+}
+
+async function changeStatus(trx: Knex, actor: Principal, id: string, change: StatusChange) {
+  const item = await items.lockItem(actor.organisationId, id, trx);
+  if (!item) throw notFound("No such item in your stock.");
+  const next = nextStatus(item.status as ItemStatus, change);
+  if ("error" in next) throw new AppError(409, next.error);
+  return { item, status: next.status };
+}
+
+export interface PreUseCheckInput {
+  answers: CheckAnswer[];
+  note?: string;
+  photo?: File | null;
+}
+
+/**
+ * The yard hand's pre-use check. A pass is recorded; any defect records the failed check,
+ * tags the item out at once and e-mails the owners.
+ */
+export async function recordPreUseCheck(actor: Principal, id: string, input: PreUseCheckInput) {
+  require(actor, "items.check");
+  const current = await items.getItem(actor.organisationId, id);
+  if (!current) throw notFound("No such item in your stock.");
+  const outcome = preUseOutcome(current.kind as ItemKind, input.answers);
+  if ("error" in outcome) throw badRequest(outcome.error, [{ path: "answers", message: outcome.error }]);
+  if (outcome.outcome === "fail" && !input.note?.trim() && !(input.photo && input.photo.size > 0)) {
+    throw fieldError("note", "Say what is wrong, or add a photo, so the owner can judge the damage.");
+  }
+  const result = await withUpload(actor, input.photo, "damage-photo", "photo", (stored) =>
+    db.transaction(async (trx) => {
+      const { status } = await changeStatus(trx, actor, id, outcome.outcome === "pass" ? "check_pass" : "check_fail");
+      const eventId = await items.insertEvent(
+        { organisationId: actor.organisationId, itemId: id, type: "check", outcome: outcome.outcome, checklist: outcome.checklist, note: input.note?.trim() || null, actorId: actor.userId },
+        trx,
+      );
+      if (outcome.outcome === "fail") {
+        await items.insertEvent({ organisationId: actor.organisationId, itemId: id, type: "tag_out", actorId: actor.userId, note: "Tagged out by a failed pre-use check" }, trx);
+      }
+      if (stored) await items.insertAttachment({ organisationId: actor.organisationId, itemId: id, eventId, purpose: "damage-photo", ...stored, createdBy: actor.userId }, trx);
+      await items.updateItem(actor.organisationId, id, { status, last_checked_at: trx.fn.now() }, trx);
+      await writeAudit({ organisationId: actor.organisationId, actorId: actor.userId, action: `item.check_${outcome.outcome}`, entity: "item", entityId: id, after: { status } }, trx);
+      return { outcome: outcome.outcome, status, defects: outcome.defects };
+    }),
+  );
+  if (result.outcome === "fail") await notifyOwners(actor, current, result.defects, input.note ?? null);
+  return result;
+}
+
+/** Report damage outside a check: tags the item out at once. */
+export async function tagOut(actor: Principal, id: string, input: { note: string; photo?: File | null }) {
+  require(actor, "items.check");
+  const current = await items.getItem(actor.organisationId, id);
+  if (!current) throw notFound("No such item in your stock.");
+  await withUpload(actor, input.photo, "damage-photo", "photo", (stored) =>
+    db.transaction(async (trx) => {
+      const { status } = await changeStatus(trx, actor, id, "tag_out");
+      const eventId = await items.insertEvent({ organisationId: actor.organisationId, itemId: id, type: "tag_out", note: input.note, actorId: actor.userId }, trx);
+      if (stored) await items.insertAttachment({ organisationId: actor.organisationId, itemId: id, eventId, purpose: "damage-photo", ...stored, createdBy: actor.userId }, trx);
+      await items.updateItem(actor.organisationId, id, { status }, trx);
+      await writeAudit({ organisationId: actor.organisationId, actorId: actor.userId, action: "item.tagged_out", entity: "item", entityId: id, after: { status, note: input.note } }, trx);
+    }),
+  );
+  await notifyOwners(actor, current, [], input.note);
+}
+
+async function notifyOwners(actor: Principal, item: items.ItemSummary, defects: string[], note: string | null) {
+  const owners = await items.ownersOf(actor.organisationId);
+  await Promise.all(
+    owners.map((o) =>
+      sendMail(
+        damageReportMail({ to: o.email, reporterName: actor.name, itemDescription: describeItem(item), tagCode: item.tagCode, defects, note, link: `${config.APP_URL}/items/${item.id}` }),
+      ).catch((error) => console.error("damage e-mail failed", error)),
+    ),
+  );
+}
+
+export interface InspectionInput {
+  answers: CheckAnswer[];
+  measurements: Record<string, number | undefined>;
+  verdict: InspectionVerdict;
+  note?: string;
+  certificate?: File | null;
+}
+
+/** Periodic inspection by an owner or designated person. */
+export async function recordInspection(actor: Principal, id: string, input: InspectionInput) {
+  require(actor, "items.inspect");
+  const current = await items.getItem(actor.organisationId, id);
+  if (!current) throw notFound("No such item in your stock.");
+  const kind = current.kind as ItemKind;
+  const outcome = preUseOutcome(kind, input.answers);
+  if ("error" in outcome) throw badRequest(outcome.error, [{ path: "answers", message: outcome.error }]);
+  const measured = evaluateMeasurements(kind, current.size, input.measurements);
+  const problem = verdictProblem(input.verdict, outcome.defects.length, measured);
+  if (problem) throw fieldError("verdict", problem);
+  const intervals = intervalsWithDefaults((await getOrganisationSettings(actor.organisationId))?.inspectionIntervalDays);
+  const change: StatusChange = input.verdict === "in_service" ? "inspect_in_service" : input.verdict === "repair" ? "inspect_repair" : "inspect_retire";
+  return withUpload(actor, input.certificate, "certificate", "certificate", (stored) =>
+    db.transaction(async (trx) => {
+      const { status } = await changeStatus(trx, actor, id, change);
+      const eventId = await items.insertEvent(
+        { organisationId: actor.organisationId, itemId: id, type: "inspection", outcome: input.verdict, checklist: outcome.checklist, measurements: measured, note: input.note?.trim() || null, actorId: actor.userId },
+        trx,
+      );
+      if (stored) await items.insertAttachment({ organisationId: actor.organisationId, itemId: id, eventId, purpose: "certificate", ...stored, createdBy: actor.userId }, trx);
+      await items.updateItem(
+        actor.organisationId,
+        id,
+        { status, last_inspected_on: today(), next_inspection_due: input.verdict === "retire" ? null : nextDue(today(), intervals[kind]) },
+        trx,
+      );
+      await writeAudit({ organisationId: actor.organisationId, actorId: actor.userId, action: "item.inspected", entity: "item", entityId: id, after: { status, verdict: input.verdict } }, trx);
+      return { status, measured };
+    }),
+  );
+}
+
+/** Simple status changes that need a reason in words. */
+export async function changeWithReason(
+  actor: Principal,
+  id: string,
+  change: "return_to_service" | "retire" | "lost" | "found",
+  reason: string,
+) {
+  const permission: Record<typeof change, Permission> = {
+    return_to_service: "items.inspect",
+    retire: "stock.retire",
+    lost: "stock.edit",
+    found: "stock.edit",
+  };
+  require(actor, permission[change]);
+  const eventType = { return_to_service: "return_to_service", retire: "retired", lost: "lost", found: "found" }[change];
+  await db.transaction(async (trx) => {
+    const { status } = await changeStatus(trx, actor, id, change);
+    await items.insertEvent({ organisationId: actor.organisationId, itemId: id, type: eventType, note: reason, actorId: actor.userId }, trx);
+    await items.updateItem(actor.organisationId, id, { status }, trx);
+    await writeAudit({ organisationId: actor.organisationId, actorId: actor.userId, action: `item.${eventType}`, entity: "item", entityId: id, after: { status, reason } }, trx);
+  });
+}
+
+/** History is never edited: a mistake is answered by a correction event that points at it. */
+export async function correctEvent(actor: Principal, itemId: string, eventId: number, note: string) {
+  require(actor, "items.check");
+  await db.transaction(async (trx) => {
+    const event = await trx("item_events").where({ organisation_id: actor.organisationId, item_id: itemId, id: eventId }).first("id");
+    if (!event) throw notFound("No such event on this item.");
+    await items.insertEvent({ organisationId: actor.organisationId, itemId, type: "correction", correctsEventId: eventId, note, actorId: actor.userId }, trx);
+    await writeAudit({ organisationId: actor.organisationId, actorId: actor.userId, action: "item.event_corrected", entity: "item", entityId: itemId, after: { eventId, note } }, trx);
+  });
+}
+
+/** A maker's certificate or other document kept with the item. */
+export async function attachCertificate(actor: Principal, id: string, file: File) {
+  require(actor, "stock.edit");
+  if (!(await items.getItem(actor.organisationId, id))) throw notFound("No such item in your stock.");
+  await withUpload(actor, file, "certificate", "certificate", async (stored) => {
+    if (!stored) throw fieldError("certificate", "Choose a file.");
+    await db.transaction(async (trx) => {
+      await items.insertAttachment({ organisationId: actor.organisationId, itemId: id, eventId: null, purpose: "certificate", ...stored, createdBy: actor.userId }, trx);
+      await writeAudit({ organisationId: actor.organisationId, actorId: actor.userId, action: "item.certificate_added", entity: "item", entityId: id, after: { name: stored.originalName } }, trx);
+    });
+  });
+}

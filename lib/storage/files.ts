@@ -1,0 +1,46 @@
+import "server-only";
+import { randomUUID } from "node:crypto";
+import { DeleteObjectCommand, GetObjectCommand, PutObjectCommand, S3Client } from "@aws-sdk/client-s3";
+import { config } from "@/lib/config";
+import { badRequest } from "@/lib/http/errors";
+import { sniffContentType, uploadProblem, type FilePurpose } from "./file-type";
+
+// Photos and certificates live in an S3-compatible bucket: the local fake in development
+// and tests, a hosted bucket in production, by configuration alone.
+const s3 = new S3Client({
+  endpoint: config.S3_ENDPOINT,
+  region: config.S3_REGION,
+  forcePathStyle: true,
+  credentials: { accessKeyId: config.S3_ACCESS_KEY_ID, secretAccessKey: config.S3_SECRET_ACCESS_KEY },
+});
+
+export interface StoredFile {
+  storageKey: string;
+  contentType: string;
+  sizeBytes: number;
+  originalName: string;
+}
+
+/**
+ * Checks and stores an uploaded file. Throws a 400 AppError naming the field when the file
+ * is not acceptable; nothing is stored then.
+ */
+export async function storeUpload(organisationId: string, purpose: FilePurpose, file: File, field: string): Promise<StoredFile> {
+  const bytes = new Uint8Array(await file.arrayBuffer());
+  const problem = uploadProblem(purpose, bytes.byteLength, bytes.subarray(0, 16));
+  if (problem) throw badRequest(problem, [{ path: field, message: problem }]);
+  const contentType = sniffContentType(bytes.subarray(0, 16))!;
+  const storageKey = `${organisationId}/${purpose}/${randomUUID()}`;
+  await s3.send(new PutObjectCommand({ Bucket: config.S3_BUCKET, Key: storageKey, Body: bytes, ContentType: contentType }));
+  return { storageKey, contentType, sizeBytes: bytes.byteLength, originalName: file.name.slice(0, 200) || "upload" };
+}
+
+/** Removes a stored file; used to undo an upload whose database record could not be written. */
+export async function removeStored(storageKey: string): Promise<void> {
+  await s3.send(new DeleteObjectCommand({ Bucket: config.S3_BUCKET, Key: storageKey }));
+}
+
+export async function readStored(storageKey: string) {
+  const out = await s3.send(new GetObjectCommand({ Bucket: config.S3_BUCKET, Key: storageKey }));
+  return out.Body!.transformToWebStream();
+}
