@@ -9,7 +9,12 @@ const nextConfig = {
   serverExternalPackages: ["knex", "pg", "@node-rs/argon2"],
   poweredByHeader: false,
   turbopack: { root },
-  experimental: { authInterrupts: true }, // forbidden() and unauthorized() in pages
+  experimental: {
+    authInterrupts: true, // forbidden() and unauthorized() in pages
+    // Certificates may be up to 15 MB (lib/storage/file-type.ts); the action then refuses
+    // a larger file itself, with a message, instead of the framework cutting it off.
+    serverActions: { bodySizeLimit: "20mb" },
+  },
   async headers() {
     return [
       {

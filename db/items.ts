@@ -180,7 +180,12 @@ export async function listEvents(organisationId: string, itemId: string) {
   const files = await db("attachments")
     .where({ organisation_id: organisationId, item_id: itemId })
     .select("id", "event_id as eventId", "purpose", "content_type as contentType", "size_bytes as sizeBytes", "original_name as originalName");
-  return events.map((e) => ({ ...e, id: Number(e.id), attachments: files.filter((f) => Number(f.eventId) === Number(e.id)) }));
+  return events.map((e) => ({
+    ...e,
+    id: Number(e.id),
+    correctsEventId: e.correctsEventId == null ? null : Number(e.correctsEventId),
+    attachments: files.filter((f) => Number(f.eventId) === Number(e.id)),
+  }));
 }
 
 export async function insertAttachment(

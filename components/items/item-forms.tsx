@@ -19,12 +19,29 @@ function NoteField({ label, name = "note", error, required }: { label: string; n
   );
 }
 
-function PhotoField({ name = "photo", label, accept, error }: { name?: string; label: string; accept: string; error?: string }) {
+const MAX_MB = { photo: 8, certificate: 15 } as const;
+
+function PhotoField({ name = "photo", label, accept, error }: { name?: "photo" | "certificate"; label: string; accept: string; error?: string }) {
+  const [tooBig, setTooBig] = useState<string | null>(null);
+  const limit = MAX_MB[name];
   return (
     <div className="flex flex-col gap-1">
       <label htmlFor={name} className="text-base font-bold">{label}</label>
-      <input id={name} name={name} type="file" accept={accept} capture={name === "photo" ? "environment" : undefined} aria-describedby={`${name}-error`} className="min-h-tap rounded-lg border-2 border-dashed border-ink-soft p-2 text-lg file:mr-3 file:min-h-10 file:rounded-md file:border-2 file:border-ink file:bg-white file:px-3 file:font-bold" />
-      <p id={`${name}-error`} aria-live="polite" className="min-h-5 text-sm font-bold text-stop">{error}</p>
+      <input
+        id={name}
+        name={name}
+        type="file"
+        accept={accept}
+        capture={name === "photo" ? "environment" : undefined}
+        aria-describedby={`${name}-error`}
+        onChange={(e) => {
+          // Said at once, before a long upload; the server checks again.
+          const file = e.currentTarget.files?.[0];
+          const big = file && file.size > limit * 1024 * 1024;
+          setTooBig(big ? `The file is ${(file.size / 1024 / 1024).toFixed(1)} MB; the limit is ${limit} MB.` : null);
+          if (big) e.currentTarget.value = "";
+        }} className="min-h-tap rounded-lg border-2 border-dashed border-ink-soft p-2 text-lg file:mr-3 file:min-h-10 file:rounded-md file:border-2 file:border-ink file:bg-white file:px-3 file:font-bold" />
+      <p id={`${name}-error`} aria-live="polite" className="min-h-5 text-sm font-bold text-stop">{tooBig ?? error}</p>
     </div>
   );
 }

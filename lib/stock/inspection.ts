@@ -81,9 +81,10 @@ export function evaluateMeasurements(kind: ItemKind, size: string | null, values
       const a = values.throatNew;
       const b = values.throatNow;
       if (a !== undefined && b !== undefined && a > 0) {
-        const increase = b - a;
-        const pct = (increase / a) * 100;
-        add("throatIncrease", round3(pct), "more than 5 %, and never more than 1/4 in", pct > 5 || increase > 0.25, "ASME B30.10 hook removal criteria (throat opening)", "Throat opening increase", "%");
+        // rounded to thousandths so that 1.05 in over 1.00 in reads as exactly 5 %
+        const increase = round3(b - a);
+        const pct = round3(((b - a) / a) * 100);
+        add("throatIncrease", pct, "more than 5 %, and never more than 1/4 in", pct > 5 || increase > 0.25, "ASME B30.10 hook removal criteria (throat opening)", "Throat opening increase", "%");
       }
       const w = values.wear;
       if (w !== undefined) add("wear", w, "more than 10 %", w > 10, "ASME B30.10 (wear over 10 % of the original section)");

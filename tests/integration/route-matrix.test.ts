@@ -2,6 +2,7 @@ import { readdirSync, readFileSync, statSync } from "node:fs";
 import path from "node:path";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { addMember, BASE_URL, Client, newOrganisation } from "../support/http";
+import { callAction as callActionAt, discoveredActions, type ActionRef } from "../support/actions";
 import { testDb } from "../support/db";
 
 // Every route handler, page and server action, walked with every role, with no session and
@@ -100,34 +101,11 @@ function discoveredPages(): string[] {
   }).map((p) => (p === "/" ? "/" : p.replace(/\/$/, "")));
 }
 
-interface ActionRef {
-  id: string;
-  page: string; // a page that imports the action, where React posts it
-}
-
-function discoveredActions(): Map<string, ActionRef> {
-  const manifest = JSON.parse(readFileSync(path.join(ROOT, ".next/server/server-reference-manifest.json"), "utf8"));
-  const out = new Map<string, ActionRef>();
-  for (const [id, entry] of Object.entries<{ filename: string; exportedName: string; workers: Record<string, unknown> }>(manifest.node)) {
-    const worker = Object.keys(entry.workers)[0]; // e.g. "app/(app)/people/page"
-    const page = "/" + worker.replace(/^app\//, "").replace(/\([^)]*\)\/?/g, "").replace(/\/?page$/, "");
-    out.set(`${entry.filename}#${entry.exportedName}`, { id, page });
-  }
-  return out;
-}
-
-/** Calls a server action the way React does: the form's fields, behind its previous state. */
-async function callAction(client: Client, action: ActionRef, fields: Record<string, string> = {}) {
-  const form = new FormData();
-  for (const [k, v] of Object.entries(fields)) form.append(`_1_${k}`, v);
-  form.append("0", JSON.stringify([{}, "$K1"])); // the root goes last, as React sends it
-  const res = await client.request("POST", fillPage(action.page), form, { "next-action": action.id });
-  return res.text;
-}
-
 const fill = (p: string) => p.replace("[id]", "00000000-0000-4000-8000-000000000000").replace("[eventId]", "1");
 /** Pages and action targets need a real item of the walking organisation. */
 const fillPage = (p: string) => p.replace("[id]", ownItemId);
+const callAction = (client: Client, action: ActionRef, fields: Record<string, string> = {}) =>
+  callActionAt(client, { ...action, page: fillPage(action.page) }, fields);
 
 let clients: Record<Role | "anonymous", Client>;
 let outsider: Client;

@@ -1,0 +1,57 @@
+import { describe, expect, it } from "vitest";
+import { itemFormSchema, itemInputSchema, toWholeLb } from "@/lib/stock/schemas";
+import { itemRating } from "@/lib/stock/rating";
+
+const issues = (input: unknown) => {
+  const r = itemInputSchema.safeParse(input);
+  return r.success ? [] : r.error.issues.map((i) => `${i.path.join(".")}: ${i.message}`);
+};
+
+describe("item input", () => {
+  it("reads sizes and grades as the trade writes them", () => {
+    const r = itemInputSchema.parse({ kind: "chain", marking: "grade", grade: "7", size: '3/8"' });
+    expect(r).toMatchObject({ grade: 70, size: "3/8" });
+    expect(itemInputSchema.parse({ kind: "chain", marking: "grade", grade: 80, size: "10 mm" }).size).toBe("10 mm");
+  });
+
+  it("names the field at fault, with the nearest table sizes", () => {
+    expect(issues({ kind: "chain", marking: "grade", grade: 70, size: "9/16" })).toEqual([
+      "size: Size 9/16 in is not in the 49 CFR 393.108 chain table; nearest: 1/2 in, 5/8 in",
+    ]);
+    expect(issues({ kind: "chain", marking: "grade", grade: 75, size: "3/8" })[0]).toMatch(/^grade: Grade is one of 30, 43, 70, 80 or 100/);
+    expect(issues({ kind: "web-strap", marking: "wll", markedWll: { value: -5, unit: "lb" }, size: "2" })).toEqual(["markedWll.value: The WLL must be more than 0."]);
+    expect(issues({ kind: "binder", marking: "wll", markedWll: { value: 5400, unit: "lb" }, mechanism: "ratchet" })).toEqual([
+      "chainSizeRange: Enter the chain sizes the binder takes, e.g. 5/16 to 3/8.",
+    ]);
+  });
+
+  it("requires a marking on parts the tables do not cover (49 CFR 393.108)", () => {
+    const r = issues({ kind: "shackle", marking: "none", size: "5/8" });
+    expect(r[0]).toMatch(/^marking: .*marked WLL/);
+  });
+
+  it("converts a kilogram marking with the exact factor", () => {
+    expect(toWholeLb({ value: 2000, unit: "kg" })).toBe(4409); // 2000 / 0.45359237 = 4409.25
+  });
+
+  it("reads the add-item form's flat fields", () => {
+    const r = itemFormSchema.parse({ kind: "binder", marking: "wll", markedWllValue: "5400", markedWllUnit: "lb", rangeMin: "5/16", rangeMax: "3/8", mechanism: "lever", cost: "69.90", serial: " BL-1 " });
+    expect(r).toMatchObject({ chainSizeRange: ["5/16", "3/8"], markedWll: { value: 5400, unit: "lb" }, costCents: 6990, serial: "BL-1" });
+  });
+});
+
+describe("item rating", () => {
+  // 49 CFR 393.108 chain table (verified): grade 70, 3/8 in = 6,600 lb; grade 30, 5/16 in = 1,900 lb.
+  it("uses the table for an unmarked grade and grade 30 for chain with no grade mark", () => {
+    expect(itemRating({ kind: "chain", grade: 70, gradeMarked: true, size: "3/8", markedWllLb: null }).wllLb).toBe(6600);
+    expect(itemRating({ kind: "chain", grade: 70, gradeMarked: false, size: "5/16", markedWllLb: null }).wllLb).toBe(1900);
+  });
+  it("uses a marking as marked, and flags one above the table", () => {
+    const r = itemRating({ kind: "chain", grade: 70, gradeMarked: true, size: "3/8", markedWllLb: 7500 });
+    expect(r).toMatchObject({ wllLb: 7500, basis: "marked" });
+    expect(r.warnings[0]).toMatch(/above the 49 CFR 393.108, chain table value/);
+  });
+  it("cannot rate an unmarked binder", () => {
+    expect(itemRating({ kind: "binder", grade: null, gradeMarked: true, size: null, markedWllLb: null }).wllLb).toBeNull();
+  });
+});
