@@ -69,8 +69,13 @@ function Checklist({ points, errors }: { points: readonly CheckPoint[]; errors?:
   );
 }
 
-export function PreUseCheckForm({ itemId, points }: { itemId: string; points: readonly CheckPoint[] }) {
+/**
+ * The checklist, then the result. The page re-renders with the item's new status after the
+ * action; this component keeps showing the result the yard hand just got.
+ */
+export function PreUseCheckForm({ itemId, points, notUsable }: { itemId: string; points: readonly CheckPoint[]; notUsable?: React.ReactNode }) {
   const [state, action] = useActionState(itemEventAction, initialFormState);
+  if (!state.ok && notUsable) return <>{notUsable}</>;
   if (state.ok) {
     return (
       <div className="flex flex-col gap-4">

@@ -54,9 +54,15 @@ const columns: ColumnDef<ItemSummaryJson>[] = [
   { id: "wllLb", header: "WLL", cell: ({ row }) => <span className="font-bold">{lb(row.original.wllLb)}</span> },
   { id: "status", header: "Status", cell: ({ row }) => <StatusBadge status={row.original.status as ItemStatus} /> },
   { id: "yardName", header: "Lives at", cell: ({ row }) => row.original.yard?.name ?? "" },
-  { id: "nextInspectionDue", header: "Inspection due", cell: ({ row }) => row.original.nextInspectionDue ?? "" },
+  { id: "nextInspectionDue", header: "Inspection due", cell: ({ row }) => <DueDate date={row.original.nextInspectionDue} /> },
   { id: "serial", header: "Serial", cell: ({ row }) => row.original.serial ?? "" },
 ];
+
+function DueDate({ date }: { date: string | null }) {
+  if (!date) return <span>not set</span>;
+  const overdue = date < new Date().toISOString().slice(0, 10);
+  return overdue ? <strong className="text-stop">{date} overdue</strong> : <span>{date}</span>;
+}
 
 /** The stock list: paged, sorted and filtered on the server, with bulk actions. */
 export function StockTable({ yards, canEdit }: { yards: { id: string; name: string }[]; canEdit: boolean }) {
@@ -160,7 +166,7 @@ export function StockTable({ yards, canEdit }: { yards: { id: string; name: stri
               <span className="text-lg font-bold">WLL {lb(row.original.wllLb)}</span>
               <StatusBadge status={row.original.status as ItemStatus} />
               <span className="text-base text-ink-soft">
-                {row.original.yard?.name ?? "no yard"} · inspection due {row.original.nextInspectionDue ?? "not set"}
+                {row.original.yard?.name ?? "no yard"} · inspection due <DueDate date={row.original.nextInspectionDue} />
               </span>
             </div>
           </li>

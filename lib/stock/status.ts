@@ -54,5 +54,5 @@ export function usability(status: ItemStatus, nextInspectionDue: string | null, 
   if (nextInspectionDue && nextInspectionDue < today) {
     return { usable: false, reason: `Periodic inspection overdue since ${nextInspectionDue}. Have it inspected before use.` };
   }
-  return { usable: true, reason: "In service. Do the pre-use check before every use." };
+  return { usable: true, reason: "Do the pre-use check before every use." };
 }

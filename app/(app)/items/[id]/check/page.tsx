@@ -23,11 +23,11 @@ export default async function PreUseCheckPage({ params }: { params: Promise<{ id
       <Link href={`/items/${id}`} className="text-lg underline">← {item.tagCode}</Link>
       <h1 className="text-3xl font-bold">Pre-use check</h1>
       <p className="text-xl">{describeItem(item)} · <span className="font-mono font-bold">{item.tagCode}</span></p>
-      {item.status === "in_service" ? (
-        <PreUseCheckForm itemId={id} points={PRE_USE_CHECKLISTS[item.kind as ItemKind]} />
-      ) : (
-        <UsabilityBanner status={item.status as ItemStatus} nextInspectionDue={item.nextInspectionDue} />
-      )}
+      <PreUseCheckForm
+        itemId={id}
+        points={PRE_USE_CHECKLISTS[item.kind as ItemKind]}
+        notUsable={item.status === "in_service" ? undefined : <UsabilityBanner status={item.status as ItemStatus} nextInspectionDue={item.nextInspectionDue} />}
+      />
     </div>
   );
 }
