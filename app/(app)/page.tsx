@@ -12,10 +12,10 @@ export default async function TodayPage() {
   ]);
   const invites = can(principal, "people.manage") ? await listOpenInvites(principal.organisationId) : [];
   const tiles = [
-    { label: "In service", value: byStatus.in_service ?? 0, tone: "border-ok bg-ok-bg text-ok" },
-    { label: "Tagged out", value: byStatus.tagged_out ?? 0, tone: "border-stop bg-stop-bg text-stop" },
-    { label: "Inspection due in 30 days", value: due, tone: "border-caution bg-caution-bg text-caution" },
-    { label: "Retired or lost", value: (byStatus.retired ?? 0) + (byStatus.lost ?? 0), tone: "border-idle bg-idle-bg text-idle" },
+    { label: "In service", value: byStatus.in_service ?? 0, tone: "border-ok bg-ok-bg text-ok", href: "/stock?status=in_service" },
+    { label: "Tagged out", value: byStatus.tagged_out ?? 0, tone: "border-stop bg-stop-bg text-stop", href: "/stock?status=tagged_out" },
+    { label: "Inspection due in 30 days", value: due, tone: "border-caution bg-caution-bg text-caution", href: "/stock?due=30d&status=in_service" },
+    { label: "Retired or lost", value: (byStatus.retired ?? 0) + (byStatus.lost ?? 0), tone: "border-idle bg-idle-bg text-idle", href: "/stock?status=lost" },
   ];
   return (
     <div className="flex max-w-4xl flex-col gap-6">
@@ -24,9 +24,11 @@ export default async function TodayPage() {
         <h2 id="gear-heading" className="text-xl font-bold">Gear at a glance</h2>
         <ul className="grid grid-cols-2 gap-3 md:grid-cols-4">
           {tiles.map((t) => (
-            <li key={t.label} className={`rounded-xl border-2 p-4 ${t.tone}`}>
-              <p className="text-4xl font-bold">{t.value}</p>
-              <p className="text-base font-bold">{t.label}</p>
+            <li key={t.label}>
+              <Link href={t.href} className={`block h-full rounded-xl border-2 p-4 ${t.tone}`}>
+                <span className="block text-4xl font-bold">{t.value}</span>
+                <span className="block text-base font-bold">{t.label}</span>
+              </Link>
             </li>
           ))}
         </ul>

@@ -1,11 +1,12 @@
 "use client";
 import { useActionState } from "react";
-import { createTokenAction, revokeTokenAction, saveOrganisationAction } from "@/app/(app)/settings/actions";
+import { createTokenAction, revokeTokenAction, saveIntervalsAction, saveOrganisationAction } from "@/app/(app)/settings/actions";
 import { SubmitButton } from "@/components/ui/button";
 import { Field, SelectField } from "@/components/ui/field";
 import { FormAlert } from "@/components/ui/form-alert";
 import { ROLE_LABELS, ROLES } from "@/lib/auth/roles";
 import { initialFormState } from "@/lib/forms/state";
+import { ITEM_KINDS, KIND_LABELS, type ItemKind } from "@/lib/stock/labels";
 
 export function OrganisationForm({ name, publicTagView }: { name: string; publicTagView: boolean }) {
   const [state, action] = useActionState(saveOrganisationAction, initialFormState);
@@ -58,6 +59,26 @@ export function RevokeTokenButton({ tokenId, name }: { tokenId: string; name: st
         Revoke
       </SubmitButton>
       <FormAlert state={state} />
+    </form>
+  );
+}
+
+export function IntervalsForm({ intervals }: { intervals: Record<ItemKind, number> }) {
+  const [state, action] = useActionState(saveIntervalsAction, initialFormState);
+  return (
+    <form action={action} className="flex flex-col gap-2 rounded-xl border-2 border-ink-soft p-4" noValidate>
+      <h2 className="text-xl font-bold">Periodic inspection, days between</h2>
+      <p className="text-base">
+        Defaults: a year for chain and hardware (ASME B30.26 asks at most a year in normal service),
+        half a year for web straps (common practice). Severe service calls for shorter intervals.
+      </p>
+      <FormAlert state={state} />
+      <div className="grid grid-cols-2 gap-x-3 md:grid-cols-4">
+        {ITEM_KINDS.map((k) => (
+          <Field key={k} label={KIND_LABELS[k]} name={k} inputMode="numeric" defaultValue={state.values?.[k] ?? String(intervals[k])} error={state.fieldErrors?.[k]} />
+        ))}
+      </div>
+      <SubmitButton pendingLabel="Saving…">Save intervals</SubmitButton>
     </form>
   );
 }

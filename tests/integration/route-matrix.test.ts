@@ -70,6 +70,7 @@ const ACTIONS: Record<string, Access> = {
   "app/(app)/settings/actions.ts#saveOrganisationAction": OWNER,
   "app/(app)/settings/actions.ts#createTokenAction": OWNER,
   "app/(app)/settings/actions.ts#revokeTokenAction": OWNER,
+  "app/(app)/settings/actions.ts#saveIntervalsAction": OWNER,
   "app/(app)/stock/actions.ts#createItemAction": EDITORS,
   "app/(app)/stock/actions.ts#editItemAction": EDITORS,
   "app/(app)/items/[id]/actions.ts#itemEventAction": ALL,

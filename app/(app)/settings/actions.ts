@@ -7,6 +7,7 @@ import { getOrganisation, updateOrganisation } from "@/db/people";
 import { formAction } from "@/lib/auth/action";
 import { createApiToken, revokeToken } from "@/lib/auth/api-tokens";
 import { flagField, nameField, roleField } from "@/lib/auth/schemas";
+import { ITEM_KINDS, KIND_LABELS } from "@/lib/stock/labels";
 
 export const saveOrganisationAction = formAction(
   "settings.manage",
@@ -41,3 +42,27 @@ export const revokeTokenAction = formAction(
     return { ok: true, message: "Token revoked." };
   },
 );
+
+const intervalsForm = z.object(
+  Object.fromEntries(
+    ITEM_KINDS.map((k) => [
+      k,
+      z.coerce
+        .number({ error: `Days for ${KIND_LABELS[k].toLowerCase()} must be a number.` })
+        .int(`Days for ${KIND_LABELS[k].toLowerCase()} must be whole days.`)
+        .min(1, "At least 1 day.")
+        .max(3650, "At most 3,650 days (10 years)."),
+    ]),
+  ),
+);
+
+/** Days between periodic inspections, per kind; applies to inspections recorded from now on. */
+export const saveIntervalsAction = formAction("settings.manage", intervalsForm, async (input, principal) => {
+  await db.transaction(async (trx) => {
+    const before = await trx("organisations").where({ id: principal.organisationId }).first("inspection_interval_days");
+    await trx("organisations").where({ id: principal.organisationId }).update({ inspection_interval_days: JSON.stringify(input) });
+    await writeAudit({ organisationId: principal.organisationId, actorId: principal.userId, action: "organisation.intervals_updated", entity: "organisation", entityId: principal.organisationId, before: before?.inspection_interval_days, after: input }, trx);
+  });
+  revalidatePath("/settings");
+  return { ok: true, message: "Inspection intervals saved. They apply from the next inspection of each item." };
+});

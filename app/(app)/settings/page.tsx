@@ -1,7 +1,8 @@
 import type { Metadata } from "next";
-import { CreateTokenForm, OrganisationForm, RevokeTokenButton } from "@/components/settings/settings-forms";
+import { CreateTokenForm, IntervalsForm, OrganisationForm, RevokeTokenButton } from "@/components/settings/settings-forms";
 import { listApiTokens } from "@/db/api-tokens";
-import { getOrganisation } from "@/db/people";
+import { getOrganisation, getOrganisationSettings } from "@/db/people";
+import { intervalsWithDefaults } from "@/lib/stock/intervals";
 import { ROLE_LABELS, type Role } from "@/lib/auth/roles";
 import { requirePage } from "@/lib/auth/session";
 
@@ -9,14 +10,16 @@ export const metadata: Metadata = { title: "Settings" };
 
 export default async function SettingsPage() {
   const principal = await requirePage("settings.manage");
-  const [organisation, tokens] = await Promise.all([
+  const [organisation, tokens, settings] = await Promise.all([
     getOrganisation(principal.organisationId),
     listApiTokens(principal.organisationId),
+    getOrganisationSettings(principal.organisationId),
   ]);
   return (
     <div className="flex max-w-3xl flex-col gap-6">
       <h1 className="text-3xl font-bold">Settings</h1>
       <OrganisationForm name={organisation!.name} publicTagView={organisation!.publicTagView} />
+      <IntervalsForm intervals={intervalsWithDefaults(settings?.inspectionIntervalDays)} />
       <section aria-labelledby="tokens-heading" className="flex flex-col gap-3 rounded-xl border-2 border-ink-soft p-4">
         <h2 id="tokens-heading" className="text-xl font-bold">API tokens</h2>
         <p className="text-base">
