@@ -27,6 +27,8 @@ const API: Record<string, Access> = {
   "POST /api/v1/invites/accept": "public",
   "POST /api/v1/password-resets": "public",
   "POST /api/v1/password-resets/confirm": "public",
+  "POST /api/v1/securement-checks": ALL,
+  "GET /api/v1/ratings": ALL,
 };
 
 const PAGES: Record<string, Access> = {
