@@ -38,6 +38,8 @@ const PAGES: Record<string, Access> = {
   "/settings": OWNER,
   "/audit": OWNER,
   "/more": ALL,
+  "/check": ALL,
+  "/ratings": ALL,
 };
 
 const ACTIONS: Record<string, Access> = {
