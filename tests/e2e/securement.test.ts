@@ -10,6 +10,8 @@ import { BASE_URL } from "../support/http";
 const DEMO = { password: "yard-demo-2026", domain: "corvid-hollow.example" };
 let phone: OpenBrowser;
 let page: Page;
+/** Errors the page itself reports (a failed hydration, an exception); refused API calls are expected. */
+const pageErrors: string[] = [];
 
 async function signIn(p: Page, email: string) {
   await p.goto(`${BASE_URL}/sign-in`);
@@ -50,6 +52,10 @@ beforeAll(async () => {
   mkdirSync(SCREENSHOT_DIR, { recursive: true });
   phone = await openBrowser({ phone: true });
   page = await phone.context.newPage();
+  page.on("pageerror", (e) => pageErrors.push(e.message));
+  page.on("console", (m) => {
+    if (m.type() === "error" && !m.text().startsWith("Failed to load resource")) pageErrors.push(m.text());
+  });
   await signIn(page, `yara@${DEMO.domain}`);
 });
 afterAll(async () => {
@@ -153,5 +159,11 @@ describe("Load check", () => {
     expect(await alert.textContent()).toContain("Weight: The value must be a number");
     expect(await page.getByLabel("Weight", { exact: true }).getAttribute("aria-invalid")).toBe("true");
     await shoot(page, "check-needs-fixing-phone");
+  });
+});
+
+describe("both screens", () => {
+  it("ran without an error in the page (no failed hydration, no exception)", () => {
+    expect(pageErrors).toEqual([]);
   });
 });
