@@ -9,10 +9,15 @@ export interface FieldIssue {
 }
 
 export class AppError extends Error {
+  /**
+   * `extra` holds a few more top-level fields for the JSON body (e.g. `nearest` sizes);
+   * they never replace `error` or `issues`.
+   */
   constructor(
     readonly status: 400 | 401 | 403 | 404 | 409 | 410 | 413 | 415 | 422 | 429,
     message: string,
     readonly issues: FieldIssue[] = [],
+    readonly extra: Readonly<Record<string, unknown>> = {},
   ) {
     super(message);
     this.name = "AppError";
@@ -28,12 +33,25 @@ export const conflict = (message: string, issues: FieldIssue[] = []) => new AppE
 export const gone = (message: string) => new AppError(410, message);
 export const tooManyRequests = (message: string) => new AppError(429, message);
 
-/** zod issues as `{ path: "tiedowns.0.wll", message }`, the shape every 400 uses. */
-export function zodIssues(error: { issues: ReadonlyArray<{ path: ReadonlyArray<PropertyKey>; message: string }> }): FieldIssue[] {
-  return error.issues.map((issue) => ({
-    path: issue.path.map(String).join("."),
-    message: issue.message,
-  }));
+interface ZodLikeIssue {
+  path: ReadonlyArray<PropertyKey>;
+  message: string;
+  code?: string;
+  keys?: ReadonlyArray<string>;
+}
+
+/**
+ * zod issues as `{ path: "tiedowns.0.wll", message }`, the shape every 400 uses. An unknown
+ * key in a strict object is reported at its own path ("tiedowns.0.components.1.wl").
+ */
+export function zodIssues(error: { issues: ReadonlyArray<ZodLikeIssue> }): FieldIssue[] {
+  return error.issues.flatMap((issue) => {
+    const path = issue.path.map(String).join(".");
+    if (issue.code === "unrecognized_keys" && issue.keys?.length) {
+      return issue.keys.map((key) => ({ path: path ? `${path}.${key}` : key, message: `Unknown field "${key}"` }));
+    }
+    return [{ path, message: issue.message }];
+  });
 }
 
 /** A route's id parameter; anything that is not a UUID is simply not found. */

@@ -106,8 +106,13 @@ async function readBody(request: Request): Promise<unknown> {
 
 export function errorResponse(error: unknown): Response {
   if (error instanceof AppError) {
-    return Response.json({ error: error.message, issues: error.issues }, { status: error.status });
+    return Response.json({ error: error.message, issues: error.issues, ...withoutReserved(error.extra) }, { status: error.status });
   }
   console.error(error);
   return Response.json({ error: "Something went wrong on our side. Try again." }, { status: 500 });
+}
+
+function withoutReserved(extra: Readonly<Record<string, unknown>>): Record<string, unknown> {
+  const { error: _error, issues: _issues, ...rest } = extra;
+  return rest;
 }

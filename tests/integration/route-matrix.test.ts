@@ -41,6 +41,8 @@ const API: Record<string, Access> = {
   "POST /api/v1/items/move": EDITORS,
   "GET /api/v1/yards": ALL,
   "GET /api/v1/attachments/[id]": ALL,
+  "POST /api/v1/securement-checks": ALL,
+  "GET /api/v1/ratings": ALL,
 };
 
 const PAGES: Record<string, Access> = {
@@ -55,6 +57,8 @@ const PAGES: Record<string, Access> = {
   "/items/[id]/check": ALL,
   "/items/[id]/inspect": OWNER, // or a designated person of any role
   "/items/[id]/edit": EDITORS,
+  "/check": ALL,
+  "/ratings": ALL,
 };
 
 const ACTIONS: Record<string, Access> = {
