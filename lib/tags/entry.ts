@@ -59,7 +59,7 @@ export function readTypedTagCode(input: string): TagInput {
     const words = list.length === 1 ? list[0] : `${list.slice(0, -1).join(", ")} or ${list[list.length - 1]}`;
     return {
       ok: false,
-      message: `Tag codes never use ${words}. Check the code on the tag: it only has ${ALPHABET_HINT}.`,
+      message: `Tag codes never use ${words}. Check the code on the tag again.`,
     };
   }
   if (raw.length !== TAG_CODE_LENGTH) {
@@ -70,4 +70,19 @@ export function readTypedTagCode(input: string): TagInput {
   }
   const code = normaliseTagCode(raw);
   return code ? { ok: true, code } : { ok: false, message: "That is not a tag code." };
+}
+
+/**
+ * The tag code in a URL path segment (`/t/{code}`, `/api/v1/tags/{code}`), percent-decoded
+ * if needed, or null.
+ * @example tagCodeFromPath("k7xm%203hqa") // "K7XM-3HQA"
+ */
+export function tagCodeFromPath(segment: string): string | null {
+  let text = segment;
+  try {
+    text = decodeURIComponent(segment);
+  } catch {
+    return null;
+  }
+  return normaliseTagCode(text);
 }

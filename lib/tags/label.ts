@@ -69,3 +69,13 @@ function formatFeet(feet: number): string {
   const halves = Math.round(feet * 2) / 2;
   return Number.isInteger(halves) ? String(halves) : halves.toFixed(1);
 }
+
+/**
+ * A calendar day (YYYY-MM-DD) in words, the same in every time zone.
+ * @example dayText("2026-11-02") // "November 2, 2026"
+ */
+export function dayText(isoDay: string): string {
+  const date = new Date(`${isoDay}T00:00:00Z`);
+  if (Number.isNaN(date.getTime())) return isoDay;
+  return date.toLocaleDateString("en-US", { timeZone: "UTC", year: "numeric", month: "long", day: "numeric" });
+}

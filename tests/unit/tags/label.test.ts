@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { tagLabelText, wllText } from "@/lib/tags/label";
+import { dayText, tagLabelText, wllText } from "@/lib/tags/label";
 
 describe("tag label words", () => {
   it("says the WLL in pounds, or that there is none", () => {
@@ -35,5 +35,13 @@ describe("tag label words", () => {
     const t = tagLabelText({ kind: "chain", grade: 80, size: "10 mm", lengthMm: 4000, wllLb: null });
     expect(t).toMatchObject({ size: "10 mm", length: "13 ft", wll: "No WLL: do not use", hasWll: false });
     expect(tagLabelText({ kind: "chain", grade: 80, size: null, lengthMm: 2900, wllLb: null })).toMatchObject({ size: null, length: "9.5 ft" });
+  });
+});
+
+describe("days in words", () => {
+  it("name the month and never shift the day", () => {
+    expect(dayText("2026-11-02")).toBe("November 2, 2026");
+    expect(dayText("2027-01-01")).toBe("January 1, 2027");
+    expect(dayText("not a day")).toBe("not a day");
   });
 });
