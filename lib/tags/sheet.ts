@@ -151,3 +151,25 @@ export function clampSkip(skip: number, layout: SheetLayout): number {
   if (!Number.isFinite(skip)) return 0;
   return Math.min(Math.max(0, Math.trunc(skip)), labelsPerSheet(layout) - 1);
 }
+
+/** Most items on one tag sheet request: 10 sheets of the small labels. */
+export const MAX_SHEET_ITEMS = 300;
+
+const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
+
+/**
+ * Item ids from the sheet's query string (`?ids=a,b,c`, or `ids` repeated by a form):
+ * only well-formed ids, each once, in the order given, at most MAX_SHEET_ITEMS.
+ * `truncated` says that some were left off.
+ * @example parseSheetIds("not-an-id,0b3c…").ids // ["0b3c…"]
+ */
+export function parseSheetIds(value: string | string[] | undefined | null): { ids: string[]; truncated: boolean } {
+  const parts = (Array.isArray(value) ? value : value ? [value] : []).flatMap((v) => v.split(","));
+  const seen = new Set<string>();
+  for (const part of parts) {
+    const id = part.trim().toLowerCase();
+    if (UUID.test(id)) seen.add(id);
+  }
+  const all = [...seen];
+  return { ids: all.slice(0, MAX_SHEET_ITEMS), truncated: all.length > MAX_SHEET_ITEMS };
+}

@@ -7,7 +7,9 @@ import {
   LETTER,
   labelsPerSheet,
   layoutSheets,
+  MAX_SHEET_ITEMS,
   MM_PER_INCH,
+  parseSheetIds,
   SHEET_LAYOUTS,
   sheetLayout,
 } from "@/lib/tags/sheet";
@@ -154,5 +156,30 @@ describe("laying out items", () => {
         }
       }),
     );
+  });
+});
+
+describe("item ids in the sheet's address", () => {
+  const a = "0b3c6a52-8d4e-4f7a-9c1d-2e5f6a7b8c9d";
+  const b = "1c4d7b63-9e5f-4a8b-8d2e-3f6a7b8c9d0e";
+
+  it("reads a comma separated list or a repeated parameter", () => {
+    expect(parseSheetIds(`${a},${b}`)).toEqual({ ids: [a, b], truncated: false });
+    expect(parseSheetIds([a, b])).toEqual({ ids: [a, b], truncated: false });
+    expect(parseSheetIds([`${a}, ${b}`, a])).toEqual({ ids: [a, b], truncated: false });
+  });
+
+  it("drops what is not an id, so nothing odd reaches the database", () => {
+    expect(parseSheetIds(`nope,${a},'; drop table items;--,${b.toUpperCase()}`).ids).toEqual([a, b]);
+    expect(parseSheetIds(undefined).ids).toEqual([]);
+    expect(parseSheetIds("").ids).toEqual([]);
+  });
+
+  it(`keeps at most ${MAX_SHEET_ITEMS}`, () => {
+    const many = Array.from({ length: MAX_SHEET_ITEMS + 5 }, (_, i) => `00000000-0000-4000-8000-${String(i).padStart(12, "0")}`);
+    const parsed = parseSheetIds(many.join(","));
+    expect(parsed.ids).toHaveLength(MAX_SHEET_ITEMS);
+    expect(parsed.ids[0]).toBe(many[0]);
+    expect(parsed.truncated).toBe(true);
   });
 });
