@@ -27,6 +27,7 @@ const API: Record<string, Access> = {
   "POST /api/v1/invites/accept": "public",
   "POST /api/v1/password-resets": "public",
   "POST /api/v1/password-resets/confirm": "public",
+  "GET /api/v1/tags/[code]": ALL,
 };
 
 const PAGES: Record<string, Access> = {
@@ -36,6 +37,7 @@ const PAGES: Record<string, Access> = {
   "/settings": OWNER,
   "/audit": OWNER,
   "/more": ALL,
+  "/scan": ALL,
 };
 
 const ACTIONS: Record<string, Access> = {
@@ -103,7 +105,7 @@ async function callAction(client: Client, action: ActionRef, fields: Record<stri
   return res.text;
 }
 
-const fill = (p: string) => p.replace("[id]", "00000000-0000-4000-8000-000000000000");
+const fill = (p: string) => p.replace("[id]", "00000000-0000-4000-8000-000000000000").replace("[code]", "3333-4444");
 
 let clients: Record<Role | "anonymous", Client>;
 let outsider: Client;
