@@ -144,7 +144,7 @@ export function layoutSheets<T>(items: readonly T[], layout: SheetLayout, option
 }
 
 /**
- * A "start at label" value made safe to use: a whole number from 0 to one less than a sheet.
+ * A "start at label" value kept on the sheet: a whole number from 0 to one less than a sheet.
  * @example clampSkip(45, sheetLayout("small-30")) // 29
  */
 export function clampSkip(skip: number, layout: SheetLayout): number {

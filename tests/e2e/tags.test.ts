@@ -94,9 +94,28 @@ describe("printed tag sheets", () => {
       const wanted = items.filter((_, i) => i % 4 === (c.layout === "small-30" ? 1 : 3)).slice(0, c.count);
       expect(wanted).toHaveLength(c.count);
       const ids = [...wanted.map((i) => i.id), "00000000-0000-4000-8000-000000000000"].join(",");
-      await page.goto(`${BASE_URL}/tags/sheet?layout=${c.layout}&start=${c.start}&ids=${ids}`);
+      // One item without a WLL, for the longest WLL line a label can carry.
+      const unrated = wanted[1];
+      const before = await testDb("items").where({ id: unrated.id }).first("wll_lb");
+      await testDb("items").where({ id: unrated.id }).update({ wll_lb: null });
+      try {
+        await page.goto(`${BASE_URL}/tags/sheet?layout=${c.layout}&start=${c.start}&ids=${ids}`);
+      } finally {
+        await testDb("items").where({ id: unrated.id }).update({ wll_lb: before.wll_lb });
+      }
       await page.evaluate(() => document.fonts.ready);
       await page.screenshot({ path: `${SCREENSHOT_DIR}/tag-sheet-${c.layout}.png`, fullPage: true });
+      const unratedLabel = page.locator(`[data-tag-code="${unrated.tagCode}"]`);
+      expect(await unratedLabel.textContent()).toContain("No WLL: do not use");
+      await unratedLabel.screenshot({ path: `${SCREENSHOT_DIR}/tag-label-no-wll-${c.layout}.png` });
+      // Nothing printed on a label runs past its edge.
+      const overflowing = await page.evaluate(() =>
+        [...document.querySelectorAll<HTMLElement>(".tag-cell, .tag-cell *")]
+          .filter((el) => el.scrollWidth > el.clientWidth + 1 || el.scrollHeight > el.clientHeight + 1)
+          .filter((el) => el.clientWidth > 0)
+          .map((el) => `${el.closest<HTMLElement>(".tag-cell")!.dataset.tagCode} ${el.className}`),
+      );
+      expect(overflowing).toEqual([]);
 
       const sheets = page.locator("section.tag-sheet");
       const per = labelsPerSheet(sheetLayout(c.layout));

@@ -108,6 +108,8 @@ function sheetCss(layout: SheetLayout): string {
 .tag--large .tag__details { font-size: 13pt; }
 .tag--large .tag__wll { font-size: 22pt; }
 .tag--large .tag__hint { font-size: 8.5pt; margin-top: 0.04in; }
+.tag--small .tag__wll--none { font-size: 10.5pt; }
+.tag--large .tag__wll--none { font-size: 17pt; }
 @media print {
   html, body { margin: 0; padding: 0; background: #fff; }
   .tag-toolbar { display: none !important; }
