@@ -180,7 +180,9 @@ describe("scanning with the phone's camera", () => {
     const item = items.find((i) => i.status === "in_service")!;
     const png = path.join(work, "qr.png");
     const video = path.join(work, "qr.y4m");
-    await QRCode.toFile(png, `${APP_URL}/t/${item.tagCode}`, { errorCorrectionLevel: "Q", margin: 4, width: 360 });
+    // A wide white margin, so that in the 640 × 480 frame the tag sits inside the scan box
+    // the way a person holds it, rather than filling the whole picture.
+    await QRCode.toFile(png, `${APP_URL}/t/${item.tagCode}`, { errorCorrectionLevel: "Q", margin: 10, width: 530 });
     execFileSync("/usr/bin/ffmpeg", [
       "-y", "-loglevel", "error", "-loop", "1", "-i", png,
       "-vf", "scale=640:480:force_original_aspect_ratio=decrease,pad=640:480:(ow-iw)/2:(oh-ih)/2:color=white,format=yuv420p",
@@ -192,18 +194,30 @@ describe("scanning with the phone's camera", () => {
     });
     try {
       const page = await phone.context.newPage();
+      const logs: string[] = [];
+      page.on("console", (m) => logs.push(`${m.type()}: ${m.text()}`));
+      page.on("pageerror", (e) => logs.push(`pageerror: ${e.message}`));
       await signIn(page, "yara");
       const opened = Date.now();
       await page.goto(`${BASE_URL}/scan`);
+      const cameraOn = page.waitForSelector('[data-camera="scanning"]', { timeout: 30_000 }).then(() => Date.now(), () => null);
       try {
         await page.waitForURL(`${BASE_URL}/items/${item.id}`, { timeout: 30_000 }); // slow only on a loaded machine
       } catch (error) {
         await page.screenshot({ path: `${SCREENSHOT_DIR}/scan-camera-failed-phone.png` });
-        console.log("camera:", await page.locator("#camera-status").textContent(), "result:", await page.locator("#scan-result").textContent());
+        const state = await page.evaluate(() => ({
+          camera: document.querySelector("#camera-status")?.textContent,
+          result: document.querySelector("#scan-result")?.textContent ?? null,
+          videos: [...document.querySelectorAll("video")].map((v) => ({ w: v.videoWidth, h: v.videoHeight, cw: v.clientWidth, ch: v.clientHeight, ready: v.readyState, paused: v.paused })),
+          canvases: [...document.querySelectorAll("#tag-camera canvas")].map((c) => [(c as HTMLCanvasElement).width, (c as HTMLCanvasElement).height]),
+        }));
+        console.log("[tags e2e] camera scan did not finish:", JSON.stringify(state), logs.join(" | "));
         throw error;
       }
-      const ms = Date.now() - opened;
-      console.log(`[tags e2e] camera scan: /scan opened to /items/${item.id} in ${ms} ms`);
+      const done = Date.now();
+      const ms = done - opened;
+      const on = await cameraOn;
+      console.log(`[tags e2e] camera scan: /scan opened to /items/${item.id} in ${ms} ms; camera running to item page ${on ? `${done - on} ms` : "not observed"}`);
       expect(ms).toBeLessThan(30_000);
     } finally {
       await phone.close();
