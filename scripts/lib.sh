@@ -143,7 +143,7 @@ ensure_chromium() {
 
 # Rebuild only when a source file is newer than the last build.
 build_if_stale() {
-  if [ ! -f "$ROOT/.next/BUILD_ID" ] || [ -n "$(cd "$ROOT" && find app components lib db public tailwind.config.ts next.config.mjs postcss.config.mjs package-lock.json -newer .next/BUILD_ID -type f -print -quit)" ]; then
+  if [ ! -f "$ROOT/.next/BUILD_ID" ] || [ -n "$(cd "$ROOT" && find app components lib db public proxy.ts tailwind.config.ts next.config.mjs postcss.config.mjs package-lock.json -newer .next/BUILD_ID -type f -print -quit)" ]; then
     say "building the app"
     (cd "$ROOT" && node_modules/.bin/next build >"$DATA/build.log" 2>&1) || { tail -60 "$DATA/build.log"; exit 1; }
   fi

@@ -1,32 +1,15 @@
 import { randomInt } from "node:crypto";
+import { TAG_ALPHABET, TAG_CODE_LENGTH } from "./alphabet";
+
+export { normaliseTagCode, TAG_ALPHABET } from "./alphabet";
 
 /**
- * Tag codes are read aloud and typed by people in gloves, so the alphabet leaves out
- * characters that look or sound alike (0/O, 1/I/L, 5/S, 2/Z, 8/B, U/V). Codes are drawn
- * at random (not sequential) so that one code says nothing about its neighbours.
- * 8 characters of 23 gives 23^8 ≈ 7.8e10 codes.
- */
-export const TAG_ALPHABET = "34679ACDEFGHJKMNPQRTWXY";
-const LENGTH = 8;
-
-/**
- * A fresh random tag code, shown as two groups of four.
+ * A fresh random tag code, shown as two groups of four. Codes are drawn at random (not
+ * sequential) so that one code says nothing about its neighbours.
  * @example newTagCode() // "K7XM-3HQA"
  */
 export function newTagCode(random: (max: number) => number = randomInt): string {
   let raw = "";
-  for (let i = 0; i < LENGTH; i++) raw += TAG_ALPHABET[random(TAG_ALPHABET.length)];
-  return `${raw.slice(0, 4)}-${raw.slice(4)}`;
-}
-
-/**
- * Normalises what a person typed: case, spaces and dashes do not matter. Returns null when
- * the input cannot be a tag code.
- * @example normaliseTagCode(" k7xm 3hqa ") // "K7XM-3HQA"
- */
-export function normaliseTagCode(input: string): string | null {
-  const raw = input.toUpperCase().replace(/[\s-]/g, "");
-  if (raw.length !== LENGTH) return null;
-  for (const ch of raw) if (!TAG_ALPHABET.includes(ch)) return null;
+  for (let i = 0; i < TAG_CODE_LENGTH; i++) raw += TAG_ALPHABET[random(TAG_ALPHABET.length)];
   return `${raw.slice(0, 4)}-${raw.slice(4)}`;
 }

@@ -43,6 +43,7 @@ const API: Record<string, Access> = {
   "GET /api/v1/attachments/[id]": ALL,
   "POST /api/v1/securement-checks": ALL,
   "GET /api/v1/ratings": ALL,
+  "GET /api/v1/tags/[code]": ALL,
 };
 
 const PAGES: Record<string, Access> = {
@@ -59,6 +60,7 @@ const PAGES: Record<string, Access> = {
   "/items/[id]/edit": EDITORS,
   "/check": ALL,
   "/ratings": ALL,
+  "/scan": ALL,
 };
 
 const ACTIONS: Record<string, Access> = {
@@ -106,7 +108,7 @@ function discoveredPages(): string[] {
   }).map((p) => (p === "/" ? "/" : p.replace(/\/$/, "")));
 }
 
-const fill = (p: string) => p.replace("[id]", "00000000-0000-4000-8000-000000000000").replace("[eventId]", "1");
+const fill = (p: string) => p.replace("[id]", "00000000-0000-4000-8000-000000000000").replace("[eventId]", "1").replace("[code]", "3333-4444");
 /** Pages and action targets need a real item of the walking organisation. */
 const fillPage = (p: string) => p.replace("[id]", ownItemId);
 const callAction = (client: Client, action: ActionRef, fields: Record<string, string> = {}) =>

@@ -19,15 +19,15 @@ export interface OpenBrowser {
   close: () => Promise<void>;
 }
 
-/** A fresh profile each time; `phone` gives a 390x844 touch viewport. */
-export async function openBrowser(options: { phone?: boolean; extraArgs?: string[] } = {}): Promise<OpenBrowser> {
+/** A fresh profile each time; `phone` gives a 390x844 touch viewport; `scale` is the device pixel ratio. */
+export async function openBrowser(options: { phone?: boolean; extraArgs?: string[]; scale?: number } = {}): Promise<OpenBrowser> {
   const dir = mkdtempSync(path.join(tmpdir(), "linkyard-chromium-"));
   const context = await chromium.launchPersistentContext(dir, {
     executablePath: process.env.CHROMIUM_PATH ?? "/usr/bin/chromium",
     headless: true,
     args: [...CHROMIUM_ARGS, ...(options.extraArgs ?? [])],
     viewport: options.phone ? { width: 390, height: 844 } : { width: 1280, height: 860 },
-    deviceScaleFactor: 1,
+    deviceScaleFactor: options.scale ?? 1,
     hasTouch: options.phone ?? false,
     isMobile: options.phone ?? false,
   });

@@ -1,0 +1,19 @@
+import { findItemByTag } from "@/db/items";
+import { route } from "@/lib/http/route";
+import { badRequest, notFound } from "@/lib/http/errors";
+import { toItemSummary } from "@/lib/stock/summary";
+import { tagCodeFromPath } from "@/lib/tags/entry";
+
+/** The item a tag code names, in the caller's organisation. Another organisation's code is
+ *  answered exactly like an unknown one. */
+export const GET = route("stock.view", {}, async ({ principal, params }) => {
+  const code = tagCodeFromPath(params.code ?? "");
+  if (!code) {
+    throw badRequest("That is not a tag code.", [
+      { path: "code", message: "A tag code is 8 characters from 34679ACDEFGHJKMNPQRTWXY, like K7XM-3HQA." },
+    ]);
+  }
+  const item = await findItemByTag(code);
+  if (!item || item.organisationId !== principal.organisationId) throw notFound("No item has this tag code.");
+  return toItemSummary(item);
+});

@@ -1,0 +1,127 @@
+"use client";
+import { useEffect, useRef, useState } from "react";
+import type { Html5Qrcode } from "html5-qrcode";
+import { buttonClass } from "@/components/ui/button";
+import { CAMERA_MESSAGES, cameraProblem, type CameraProblem } from "@/lib/tags/camera";
+
+const REGION_ID = "tag-camera";
+
+type CameraState = { on: "starting" } | { on: "scanning" } | { on: "stopped" } | { on: "failed"; problem: CameraProblem };
+
+async function stopScanner(scanner: Html5Qrcode | null) {
+  if (!scanner) return;
+  try {
+    if (scanner.isScanning) await scanner.stop();
+  } catch {
+    /* already stopped */
+  }
+  try {
+    scanner.clear();
+  } catch {
+    /* nothing to clear */
+  }
+}
+
+/**
+ * The rear camera, reading QR codes ten times a second. html5-qrcode is loaded in the
+ * browser only. The camera stops when this leaves the screen, and through `stopRef` before
+ * the page navigates away.
+ */
+export function CameraScanner({
+  onText,
+  stopRef,
+}: {
+  onText: (text: string) => void;
+  stopRef: React.RefObject<(() => Promise<void>) | null>;
+}) {
+  const [camera, setCamera] = useState<CameraState>({ on: "starting" });
+  const [run, setRun] = useState(0);
+  const onTextRef = useRef(onText);
+  onTextRef.current = onText;
+
+  useEffect(() => {
+    if (run < 0) return;
+    let cancelled = false;
+    let scanner: Html5Qrcode | null = null;
+
+    const stop = async () => {
+      cancelled = true;
+      const s = scanner;
+      scanner = null;
+      await stopScanner(s);
+    };
+    stopRef.current = stop;
+
+    (async () => {
+      if (!window.isSecureContext) return setCamera({ on: "failed", problem: "insecure" });
+      if (!navigator.mediaDevices?.getUserMedia) return setCamera({ on: "failed", problem: "unsupported" });
+      const { Html5Qrcode, Html5QrcodeSupportedFormats } = await import("html5-qrcode");
+      if (cancelled) return;
+      const instance = new Html5Qrcode(REGION_ID, { formatsToSupport: [Html5QrcodeSupportedFormats.QR_CODE], verbose: false });
+      scanner = instance;
+      try {
+        await instance.start(
+          { facingMode: "environment" },
+          { fps: 10, qrbox: 250 },
+          (text) => onTextRef.current(text),
+          () => {},
+        );
+        if (cancelled) await stopScanner(instance);
+        else setCamera({ on: "scanning" });
+      } catch (error) {
+        scanner = null;
+        if (!cancelled) setCamera({ on: "failed", problem: cameraProblem(error) });
+      }
+    })();
+
+    return () => {
+      void stop();
+    };
+  }, [run, stopRef]);
+
+  async function toggle() {
+    if (camera.on === "scanning" || camera.on === "starting") {
+      await stopRef.current?.();
+      setCamera({ on: "stopped" });
+      setRun(-1);
+    } else {
+      // One render shows the camera box again before the effect starts the camera in it.
+      setCamera({ on: "starting" });
+      setRun((r) => Math.abs(r) + 1);
+    }
+  }
+
+  const words =
+    camera.on === "starting"
+      ? "Starting the camera…"
+      : camera.on === "scanning"
+        ? "Point the camera at the QR tag and hold still."
+        : camera.on === "stopped"
+          ? "The camera is off."
+          : CAMERA_MESSAGES[camera.problem];
+
+  return (
+    <section aria-labelledby="camera-heading" className="flex flex-col gap-3">
+      <h2 id="camera-heading" className="sr-only">Camera</h2>
+      <div className={`relative overflow-hidden rounded-xl border-2 border-ink bg-ink ${camera.on === "failed" ? "hidden" : ""}`}>
+        <div id={REGION_ID} className="min-h-56 w-full [&_video]:block [&_video]:w-full" data-camera={camera.on} />
+        {camera.on !== "scanning" && (
+          <div className="absolute inset-0 flex items-center justify-center p-4 text-center text-xl font-bold text-white">
+            {camera.on === "stopped" ? "Camera off" : "Starting the camera…"}
+          </div>
+        )}
+      </div>
+      <p
+        id="camera-status"
+        role="status"
+        aria-live="polite"
+        className={`text-xl ${camera.on === "failed" ? "rounded-lg border-2 border-caution bg-caution-bg p-3 font-bold text-caution" : ""}`}
+      >
+        {words}
+      </p>
+      <button type="button" onClick={toggle} className={buttonClass("secondary", "w-full")}>
+        {camera.on === "scanning" || camera.on === "starting" ? "Stop camera" : "Start camera"}
+      </button>
+    </section>
+  );
+}

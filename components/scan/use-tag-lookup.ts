@@ -1,0 +1,63 @@
+"use client";
+import { useRouter } from "next/navigation";
+import { useCallback, useRef, useState } from "react";
+import type { ItemSummaryJson } from "@/lib/stock/summary";
+
+/** Where the code came from: the result is shown beside it. */
+export type LookupSource = "camera" | "typed";
+
+export type LookupState =
+  | { step: "idle" }
+  | { step: "looking"; code: string; source: LookupSource }
+  | { step: "found"; code: string; source: LookupSource; item: ItemSummaryJson }
+  | { step: "failed"; code: string | null; source: LookupSource; message: string; unknown: boolean };
+
+/**
+ * Asks the server for the item of a tag code and opens its page. One lookup at a time;
+ * `before` runs before navigating (the scanner stops the camera there).
+ */
+export function useTagLookup(before?: () => Promise<void> | void) {
+  const router = useRouter();
+  const [state, setState] = useState<LookupState>({ step: "idle" });
+  const busy = useRef(false);
+
+  const lookUp = useCallback(
+    async (code: string, source: LookupSource): Promise<boolean> => {
+      if (busy.current) return false;
+      busy.current = true;
+      setState({ step: "looking", code, source });
+      try {
+        const res = await fetch(`/api/v1/tags/${encodeURIComponent(code)}`, { headers: { accept: "application/json" } });
+        const body = await res.json().catch(() => ({}));
+        if (res.ok) {
+          const item = body as ItemSummaryJson;
+          setState({ step: "found", code, source, item });
+          await before?.();
+          router.push(item.url);
+          return true;
+        }
+        const message =
+          res.status === 404
+            ? `No item in your company has the tag code ${code}.`
+            : res.status === 401
+              ? "Your session has ended. Sign in again, then scan."
+              : (body.error as string | undefined) ?? "The lookup failed. Try again.";
+        setState({ step: "failed", code, source, message, unknown: res.status === 404 });
+        busy.current = false;
+        return false;
+      } catch {
+        setState({ step: "failed", code, source, message: "No connection to Linkyard. Check the signal and try again.", unknown: false });
+        busy.current = false;
+        return false;
+      }
+    },
+    [before, router],
+  );
+
+  /** Shows a problem found before asking the server (a QR code that is not a tag). */
+  const fail = useCallback((message: string) => {
+    if (!busy.current) setState({ step: "failed", code: null, source: "camera", message, unknown: false });
+  }, []);
+
+  return { state, lookUp, fail };
+}
