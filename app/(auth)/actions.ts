@@ -12,6 +12,7 @@ import {
   signUpSchema,
 } from "@/lib/auth/schemas";
 import { currentSessionId, endSession, startSession } from "@/lib/auth/session";
+import { safeNextPath } from "@/lib/http/next-path";
 
 async function setSessionCookie(userId: string) {
   const cookie = await startSession(userId);
@@ -23,9 +24,9 @@ async function clientIp() {
 }
 
 export const signInAction = publicFormAction(signInSchema, async (input) => {
-  const userId = await accounts.signIn({ ...input, ip: await clientIp() });
+  const userId = await accounts.signIn({ email: input.email, password: input.password, ip: await clientIp() });
   await setSessionCookie(userId);
-  redirect("/");
+  redirect(safeNextPath(input.next) ?? "/");
 });
 
 export const signUpAction = publicFormAction(signUpSchema, async (input) => {

@@ -13,11 +13,12 @@ import { Field } from "@/components/ui/field";
 import { FormAlert } from "@/components/ui/form-alert";
 import { initialFormState } from "@/lib/forms/state";
 
-export function SignInForm() {
+export function SignInForm({ next }: { next?: string }) {
   const [state, action] = useActionState(signInAction, initialFormState);
   return (
     <form action={action} className="flex flex-col gap-2" noValidate>
       <FormAlert state={state} />
+      {next && <input type="hidden" name="next" value={next} />}
       <Field label="E-mail" name="email" type="email" autoComplete="email" defaultValue={state.values?.email} error={state.fieldErrors?.email} />
       <Field label="Password" name="password" type="password" autoComplete="current-password" error={state.fieldErrors?.password} />
       <SubmitButton pendingLabel="Signing in…">Sign in</SubmitButton>

@@ -31,6 +31,7 @@ export const flagField = z
 export const signInSchema = z.object({
   email: emailField,
   password: z.string({ error: "Enter your password." }).min(1, "Enter your password."),
+  next: z.string().optional(), // where the form came from (a scanned tag); checked before use
 });
 
 export const signUpSchema = z.object({

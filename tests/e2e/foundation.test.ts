@@ -52,6 +52,27 @@ describe("sign-in", () => {
   });
 });
 
+describe("a scanned tag before signing in", () => {
+  it("comes back to the item after sign-in", async () => {
+    const { testDb } = await import("../support/db");
+    const item = await testDb("items as i")
+      .join("organisations as o", "o.id", "i.organisation_id")
+      .where("o.name", "Corvid Hollow Groundworks")
+      .first("i.id", "i.tag_code");
+    const page = await phone.context.newPage();
+    await page.context().clearCookies();
+    await page.goto(`${BASE_URL}/t/${item.tag_code}`);
+    expect(page.url()).toContain("/sign-in?next=");
+    expect(await page.locator("main").textContent()).toContain("Sign in to open the tag you scanned.");
+    await page.getByLabel("E-mail").fill(`yara@${DEMO.domain}`);
+    await page.getByLabel("Password").fill(DEMO.password);
+    await page.getByRole("button", { name: "Sign in" }).click();
+    await page.waitForURL(`${BASE_URL}/items/${item.id}`);
+    await signOut(page);
+    await page.close();
+  });
+});
+
 describe("the shell of each role", () => {
   const cases = [
     { who: "olive", role: "Owner", nav: ["Today", "Scan", "Stock", "Load check", "More"], more: ["People", "Audit log", "Settings"] },

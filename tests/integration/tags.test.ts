@@ -131,7 +131,8 @@ describe("the tag resolver /t/{code}", () => {
   it("sends a stranger to sign-in while the organisation keeps its tags private (the default)", async () => {
     const res = await visit(new Client(), chain.tagCode);
     expect(res.status).toBe(307);
-    expect(res.headers.get("location")).toMatch(/\/sign-in$/);
+    // back to the tag after signing in
+    expect(res.headers.get("location")).toMatch(new RegExp(`/sign-in\\?next=%2Ft%2F${chain.tagCode}$`));
   });
 
   it("sends a signed-in member of the organisation to the item", async () => {

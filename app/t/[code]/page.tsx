@@ -40,7 +40,7 @@ export default async function TagPage({ params }: { params: Promise<{ code: stri
       notFound();
     }
     await recordLookup(ip, true);
-    redirect("/sign-in");
+    redirect(`/sign-in?next=${encodeURIComponent(`/t/${item.tagCode}`)}`);
   }
 
   await recordLookup(ip, true);
