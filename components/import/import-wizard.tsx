@@ -178,9 +178,15 @@ function UploadStep({ onFile, busy }: { onFile: (f: File | undefined) => void; b
         }}
         className={`flex min-h-48 cursor-pointer flex-col items-center justify-center gap-2 rounded-xl border-4 border-dashed p-6 text-center ${over ? "border-ink bg-signal/30" : "border-ink-soft bg-white"}`}
       >
-        <span className="text-2xl font-bold">{busy ? "Reading the file…" : "Drop the CSV file here"}</span>
-        <span className="text-lg">or</span>
-        <span className={buttonClass("primary")}>Choose a CSV file</span>
+        {busy ? (
+          <span className="text-2xl font-bold">Reading the file…</span>
+        ) : (
+          <>
+            <span className="hidden text-2xl font-bold md:block">Drop the CSV file here</span>
+            <span className="hidden text-lg md:block">or</span>
+            <span className={buttonClass("primary")}>Choose a CSV file</span>
+          </>
+        )}
         <span className="text-base text-ink-soft">Comma, semicolon or tab separated; up to 50 MB.</span>
       </label>
       <input
@@ -253,7 +259,7 @@ function MappingStep(props: {
     <section aria-labelledby="mapping-h" className="flex flex-col gap-4">
       <h2 id="mapping-h" className="text-xl font-bold">2. Say what each column holds</h2>
       <p className="text-lg">
-        <strong>{props.file.name}</strong> · {count(check.rows, "row")} · columns separated by {check.delimiter ?? "commas"} · {check.encoding}
+        <strong>{props.file.name}</strong> · {count(check.rows, "row")} · columns separated by {check.delimiter === "tab" ? "tabs" : check.delimiter === "semicolon" ? "semicolons" : "commas"} · {check.encoding}
       </p>
       {headerErrors.length > 0 && (
         <ul role="alert" className="flex flex-col gap-1 rounded-lg border-2 border-stop bg-stop-bg p-3 text-lg font-bold text-stop">
@@ -261,49 +267,45 @@ function MappingStep(props: {
         </ul>
       )}
 
-      <div className="overflow-x-auto">
-        <table className="w-full border-collapse text-left text-base">
-          <caption className="sr-only">Columns of the file and what they are read as</caption>
-          <thead>
-            <tr className="border-b-2 border-ink">
-              <th scope="col" className="py-2 pr-3">Column in your file</th>
-              <th scope="col" className="py-2 pr-3">First values</th>
-              <th scope="col" className="py-2 pr-3">Read as</th>
-            </tr>
-          </thead>
-          <tbody>
-            {check.headers.map((h, i) => {
-              const auto = check.autoMapping[h];
-              const samples = check.sample.map((r) => r[i]).filter((v) => v !== undefined && v !== "");
-              return (
-                <tr key={h} className="border-b border-idle align-top">
-                  <th scope="row" className="py-2 pr-3 text-lg font-bold">{h}</th>
-                  <td className="max-w-56 py-2 pr-3 text-ink-soft"><span className="line-clamp-2 break-words">{samples.slice(0, 2).join(" · ") || "(empty)"}</span></td>
-                  <td className="py-2 pr-3">
-                    <select
-                      aria-label={`Read "${h}" as`}
-                      value={mapping[h] ?? ""}
-                      onChange={(e) => setMapping({ ...mapping, [h]: (e.target.value || null) as ImportField | null })}
-                      className={`min-h-tap w-full min-w-56 rounded-lg border-2 bg-white px-2 text-lg ${mapping[h] ? "border-ink" : "border-ink-soft text-ink-soft"}`}
-                    >
-                      <option value="">Not imported</option>
-                      {IMPORT_FIELDS.map((f) => <option key={f} value={f}>{FIELD_LABELS[f]}</option>)}
-                    </select>
-                    <p className="text-sm text-ink-soft">
-                      {check.setByLinkyard.includes(h)
-                        ? "Linkyard sets this itself; not imported."
-                        : check.unknownColumns.includes(h) && !mapping[h]
-                          ? "No field matches this header."
-                          : auto && auto === mapping[h]
-                            ? "Chosen from the header."
-                            : ""}
-                    </p>
-                  </td>
-                </tr>
-              );
-            })}
-          </tbody>
-        </table>
+      <p className="text-lg">Linkyard chose a field for each column it recognised. Change any that is wrong; a column set to “Not imported” is left out.</p>
+      <div role="table" aria-label="Columns of the file and what they are read as" className="flex flex-col">
+        <div role="row" className="hidden border-b-2 border-ink pb-2 text-base font-bold md:grid md:grid-cols-[minmax(0,1fr)_minmax(0,1fr)_minmax(0,1.3fr)] md:gap-3">
+          <span role="columnheader">Column in your file</span>
+          <span role="columnheader">First values</span>
+          <span role="columnheader">Read as</span>
+        </div>
+        {check.headers.map((h, i) => {
+          const auto = check.autoMapping[h];
+          const samples = check.sample.map((r) => r[i]).filter((v) => v !== undefined && v !== "");
+          const note = check.setByLinkyard.includes(h)
+            ? "Linkyard sets this itself; not imported."
+            : check.unknownColumns.includes(h) && !mapping[h]
+              ? "No field matches this header."
+              : (mapping[h] ?? null) !== (auto ?? null)
+                ? "Changed by you."
+                : "";
+          return (
+            <div role="row" key={h} className="grid grid-cols-1 gap-1 border-b border-idle py-3 md:grid-cols-[minmax(0,1fr)_minmax(0,1fr)_minmax(0,1.3fr)] md:gap-3">
+              <span role="rowheader" className="text-lg font-bold break-words">{h}</span>
+              <span role="cell" className="text-base text-ink-soft break-words">
+                <span className="md:hidden">First values: </span>
+                {samples.slice(0, 2).join(" · ") || "(empty in the first rows)"}
+              </span>
+              <span role="cell" className="flex flex-col gap-1">
+                <select
+                  aria-label={`Read "${h}" as`}
+                  value={mapping[h] ?? ""}
+                  onChange={(e) => setMapping({ ...mapping, [h]: (e.target.value || null) as ImportField | null })}
+                  className={`min-h-tap w-full rounded-lg border-2 bg-white px-2 text-lg ${mapping[h] ? "border-ink" : "border-ink-soft text-ink-soft"}`}
+                >
+                  <option value="">Not imported</option>
+                  {IMPORT_FIELDS.map((f) => <option key={f} value={f}>{FIELD_LABELS[f]}</option>)}
+                </select>
+                {note && <span className="text-sm text-ink-soft">{note}</span>}
+              </span>
+            </div>
+          );
+        })}
       </div>
       {check.unknownColumns.length > 0 && (
         <p className="text-lg">

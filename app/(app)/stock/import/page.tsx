@@ -16,8 +16,8 @@ export default async function ImportPage() {
         <Link href="/stock/import/history" className="flex min-h-tap items-center text-lg font-bold underline">Import history</Link>
       </div>
       <p className="text-lg">
-        A row with a serial or tag code already in your stock updates that item; every other row adds a new item with its own tag code. Each
-        row is checked like the add-item form, and nothing goes in until the whole file is right (or you choose to import only the valid rows).
+        Rows whose serial or tag code is already in your stock update that item; other rows add new items, each with its own tag code.
+        Nothing goes in until every row passes the same checks as the add-item form, unless you choose to import only the valid rows.
       </p>
       <ImportWizard savedMappings={mappings.map((m) => ({ id: m.id, name: m.name, mapping: m.mapping }))} />
     </div>
