@@ -96,6 +96,32 @@ export async function listItems(
   return { data, pageCount: Math.max(1, Math.ceil(total / options.perPage)), total };
 }
 
+/**
+ * Every item the stock list's filters select, in the list's order, read through a server-side
+ * cursor a batch at a time (for the CSV export: memory holds one batch, whatever the stock).
+ * Stopping the iteration early closes the cursor.
+ */
+export async function* streamItems(
+  organisationId: string,
+  options: ItemFilters & { sort: SortKey; order: "asc" | "desc" },
+  batchSize = 1000,
+): AsyncGenerator<ItemSummary[]> {
+  const { sql, bindings } = applyFilters(base().select(SUMMARY_COLUMNS), organisationId, options)
+    .orderByRaw(`${SORTABLE[options.sort]} ${options.order} nulls last, i.tag_code asc`)
+    .toSQL();
+  const trx = await db.transaction({ readOnly: true });
+  try {
+    await trx.raw(`DECLARE stock_export NO SCROLL CURSOR FOR ${sql}`, bindings);
+    for (;;) {
+      const { rows } = await trx.raw(`FETCH ${Math.max(1, Math.floor(batchSize))} FROM stock_export`);
+      if (!rows.length) break;
+      yield rows as ItemSummary[];
+    }
+  } finally {
+    await trx.rollback().catch(() => undefined);
+  }
+}
+
 export async function getItem(organisationId: string, id: string, trx: Knex = db): Promise<ItemSummary | undefined> {
   return base(trx).where({ "i.organisation_id": organisationId, "i.id": id }).first(SUMMARY_COLUMNS);
 }

@@ -65,7 +65,7 @@ function DueDate({ date }: { date: string | null }) {
 }
 
 /** The stock list: paged, sorted and filtered on the server, with bulk actions. */
-export function StockTable({ yards, canEdit }: { yards: { id: string; name: string }[]; canEdit: boolean }) {
+export function StockTable({ yards, canEdit, canExport = false }: { yards: { id: string; name: string }[]; canEdit: boolean; canExport?: boolean }) {
   const params = useSearchParams();
   const router = useRouter();
   const pathname = usePathname();
@@ -113,6 +113,9 @@ export function StockTable({ yards, canEdit }: { yards: { id: string; name: stri
   });
 
   const selected = Object.keys(rowSelection);
+  // The export carries the filters and the sort of the table, and every matching row.
+  const exportQuery = new URLSearchParams();
+  for (const k of [...FILTER_KEYS, "sort", "order"] as const) if (params.get(k)) exportQuery.set(k, params.get(k)!);
   const refresh = () => queryClient.invalidateQueries({ queryKey: ["items"] });
 
   return (
@@ -138,9 +141,16 @@ export function StockTable({ yards, canEdit }: { yards: { id: string; name: stri
         <Filter label="Inspection" value={params.get("due")} onChange={(v) => setParams({ due: v })} options={[["overdue", "Overdue"], ["30d", "Due in 30 days"]]} />
       </div>
 
-      <p aria-live="polite" className="text-lg">
-        {error ? <strong className="text-stop">{(error as Error).message}</strong> : data ? `${data.total.toLocaleString("en-US")} items${isFetching ? " (updating…)" : ""}` : "Loading…"}
-      </p>
+      <div className="flex flex-wrap items-center justify-between gap-2">
+        <p aria-live="polite" className="text-lg">
+          {error ? <strong className="text-stop">{(error as Error).message}</strong> : data ? `${data.total.toLocaleString("en-US")} items${isFetching ? " (updating…)" : ""}` : "Loading…"}
+        </p>
+        {canExport && (
+          <a href={`/api/v1/items/export.csv${exportQuery.size ? `?${exportQuery.toString()}` : ""}`} download className="flex min-h-tap items-center text-lg font-bold underline">
+            Export CSV{exportQuery.size ? " (these filters)" : ""}
+          </a>
+        )}
+      </div>
 
       {selected.length > 0 && (
         <div className="flex flex-col gap-2 rounded-xl border-2 border-ink bg-signal/20 p-3">

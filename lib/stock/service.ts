@@ -17,8 +17,8 @@ import { preUseOutcome, type CheckAnswer } from "./checklists";
 import { evaluateMeasurements, verdictProblem, type InspectionVerdict } from "./inspection";
 import { intervalsWithDefaults, nextDue } from "./intervals";
 import type { ItemKind, ItemStatus } from "./labels";
-import { itemRating } from "./rating";
-import { toMillimetres, toRatable, type ItemInput } from "./schemas";
+import { itemRow } from "./row";
+import type { ItemInput } from "./schemas";
 import { nextStatus, type StatusChange } from "./status";
 import { describeItem } from "./summary";
 
@@ -30,30 +30,6 @@ function require(actor: Principal, permission: Permission) {
 }
 
 const today = () => new Date().toISOString().slice(0, 10);
-
-function toRow(input: ItemInput) {
-  const ratable = toRatable(input);
-  const rating = itemRating(ratable);
-  return {
-    kind: input.kind,
-    grade: ratable.grade,
-    grade_marked: ratable.gradeMarked,
-    size: input.size ?? (input.kind === "binder" ? (input.chainSizeRange?.[1] ?? null) : null),
-    length_mm: input.length ? toMillimetres(input.length) : null,
-    marked_wll_lb: ratable.markedWllLb,
-    serial: input.serial ?? null,
-    yard_id: input.yardId ?? null,
-    in_service_on: input.inServiceOn ?? null,
-    cost_cents: input.costCents ?? null,
-    details: JSON.stringify({
-      ...(input.mechanism && { mechanism: input.mechanism }),
-      ...(input.chainSizeRange && { chainSizeRange: input.chainSizeRange }),
-      ...(input.ends && { ends: input.ends }),
-    }),
-    wll_lb: rating.wllLb,
-    wll_source: rating.source,
-  };
-}
 
 async function checkReferences(actor: Principal, input: ItemInput, exceptId: string | undefined, trx: Knex) {
   if (input.yardId && !(await items.yardBelongs(actor.organisationId, input.yardId, trx))) {
@@ -78,7 +54,7 @@ export async function createItem(actor: Principal, input: ItemInput): Promise<st
   const intervals = intervalsWithDefaults((await getOrganisationSettings(actor.organisationId))?.inspectionIntervalDays);
   return db.transaction(async (trx) => {
     await checkReferences(actor, input, undefined, trx);
-    const row = toRow(input);
+    const row = itemRow(input);
     const id = await items.insertItem(
       {
         ...row,
@@ -102,7 +78,7 @@ export async function editItem(actor: Principal, id: string, input: ItemInput): 
     if (!before) throw notFound("No such item in your stock.");
     if (before.kind !== input.kind) throw fieldError("kind", "The kind of an item cannot change; add a new item instead.");
     await checkReferences(actor, input, id, trx);
-    const row = toRow(input);
+    const row = itemRow(input);
     await items.updateItem(actor.organisationId, id, row, trx);
     const after = await items.getItem(actor.organisationId, id, trx);
     const changes = diff(before as unknown as Record<string, unknown>, after as unknown as Record<string, unknown>);

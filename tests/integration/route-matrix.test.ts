@@ -44,6 +44,20 @@ const API: Record<string, Access> = {
   "POST /api/v1/securement-checks": ALL,
   "GET /api/v1/ratings": ALL,
   "GET /api/v1/tags/[code]": ALL,
+  // CSV import: owners only ("stock.import").
+  "GET /api/v1/imports": OWNER,
+  "POST /api/v1/imports": OWNER,
+  "GET /api/v1/imports/[id]": OWNER,
+  "POST /api/v1/imports/[id]/undo": OWNER,
+  "GET /api/v1/imports/[id]/file": OWNER,
+  "GET /api/v1/imports/[id]/rejected.csv": OWNER,
+  "GET /api/v1/imports/template.csv": OWNER,
+  "GET /api/v1/imports/mappings": OWNER,
+  "POST /api/v1/imports/mappings": OWNER,
+  "DELETE /api/v1/imports/mappings/[id]": OWNER,
+  // The export is a read, but a full copy of the register with costs, made for editing and
+  // importing back: owners and planners ("stock.edit"); a yard hand reads stock on screen.
+  "GET /api/v1/items/export.csv": EDITORS,
 };
 
 const PAGES: Record<string, Access> = {
@@ -61,6 +75,9 @@ const PAGES: Record<string, Access> = {
   "/check": ALL,
   "/ratings": ALL,
   "/scan": ALL,
+  "/stock/import": OWNER,
+  "/stock/import/history": OWNER,
+  "/stock/import/[batchId]": OWNER,
 };
 
 const ACTIONS: Record<string, Access> = {
@@ -110,7 +127,7 @@ function discoveredPages(): string[] {
 
 const fill = (p: string) => p.replace("[id]", "00000000-0000-4000-8000-000000000000").replace("[eventId]", "1").replace("[code]", "3333-4444");
 /** Pages and action targets need a real item of the walking organisation. */
-const fillPage = (p: string) => p.replace("[id]", ownItemId);
+const fillPage = (p: string) => p.replace("[id]", ownItemId).replace("[batchId]", ownBatchId);
 const callAction = (client: Client, action: ActionRef, fields: Record<string, string> = {}) =>
   callActionAt(client, { ...action, page: fillPage(action.page) }, fields);
 
@@ -118,6 +135,7 @@ let clients: Record<Role | "anonymous", Client>;
 let outsider: Client;
 let victim: { organisationId: string; plannerId: string; inviteId: string };
 let ownItemId: string;
+let ownBatchId: string;
 
 beforeAll(async () => {
   const org = await newOrganisation("Matrix Co");
@@ -131,6 +149,11 @@ beforeAll(async () => {
   const item = await org.owner.post("/api/v1/items", { kind: "chain", marking: "grade", grade: 70, size: "3/8" });
   if (item.status !== 201) throw new Error(`item: ${item.status} ${item.text}`);
   ownItemId = item.json.id;
+  const csv = new FormData();
+  csv.append("file", new Blob(["Kind,Grade,Size\nchain,70,3/8\n"], { type: "text/csv" }), "matrix.csv");
+  const batch = await org.owner.post("/api/v1/imports", csv);
+  if (batch.status !== 201) throw new Error(`import: ${batch.status} ${batch.text}`);
+  ownBatchId = batch.json.batchId;
 }, 60_000);
 
 afterAll(() => testDb.destroy());

@@ -15,12 +15,17 @@ export default async function StockPage() {
     <div className="flex max-w-6xl flex-col gap-4">
       <div className="flex flex-wrap items-center justify-between gap-2">
         <h1 className="text-3xl font-bold">Stock</h1>
-        {can(principal, "stock.edit") && (
-          <Link href="/stock/new" className="flex min-h-tap items-center rounded-lg border-2 border-ink bg-signal px-4 text-lg font-bold">Add an item</Link>
-        )}
+        <div className="flex flex-wrap gap-2">
+          {can(principal, "stock.import") && (
+            <Link href="/stock/import" className="flex min-h-tap items-center rounded-lg border-2 border-ink bg-white px-4 text-lg font-bold">Import CSV</Link>
+          )}
+          {can(principal, "stock.edit") && (
+            <Link href="/stock/new" className="flex min-h-tap items-center rounded-lg border-2 border-ink bg-signal px-4 text-lg font-bold">Add an item</Link>
+          )}
+        </div>
       </div>
       <Suspense>
-        <StockTable yards={yards} canEdit={can(principal, "stock.edit")} />
+        <StockTable yards={yards} canEdit={can(principal, "stock.edit")} canExport={can(principal, "stock.edit")} />
       </Suspense>
     </div>
   );

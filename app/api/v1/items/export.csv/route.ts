@@ -1,0 +1,40 @@
+import { streamItems } from "@/db/items";
+import { csvLine, EXPORT_HEADERS, exportRow } from "@/lib/import/csv-write";
+import { route } from "@/lib/http/route";
+import { itemListQuerySchema } from "@/lib/stock/api-schemas";
+import { attachment } from "@/lib/stock/import";
+
+/**
+ * The stock as CSV, with the stock table's filters and sort (kind, status, yardId, due, q,
+ * sort, order), every matching row, streamed. The file imports back as it is: its header
+ * maps itself, and each row updates its item by tag code.
+ * Owners and planners: the export carries costs and is made for editing and importing back;
+ * a yard hand reads the stock on screen.
+ */
+export const GET = route("stock.edit", { query: itemListQuerySchema }, async ({ principal, query }) => {
+  const batches = streamItems(principal.organisationId, query);
+  const encoder = new TextEncoder();
+  let started = false;
+  const stream = new ReadableStream<Uint8Array>({
+    async pull(controller) {
+      if (!started) {
+        started = true;
+        controller.enqueue(encoder.encode("\ufeff" + csvLine([...EXPORT_HEADERS])));
+        return;
+      }
+      try {
+        const next = await batches.next();
+        if (next.done) controller.close();
+        else controller.enqueue(encoder.encode(next.value.map((item) => csvLine(exportRow(item))).join("")));
+      } catch (error) {
+        console.error("stock export failed", error);
+        controller.error(error);
+      }
+    },
+    async cancel() {
+      await batches.return(undefined);
+    },
+  });
+  const day = new Date().toISOString().slice(0, 10);
+  return new Response(stream, { headers: attachment(`linkyard-stock-${day}.csv`) });
+});

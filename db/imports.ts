@@ -1,0 +1,247 @@
+import type { Knex } from "knex";
+import type { ExistingItem } from "@/lib/import/row";
+import type { ItemKind } from "@/lib/stock/labels";
+import { writeAudit } from "./audit";
+import { db } from "./index";
+
+// CSV import batches, the values an import replaced, saved column mappings, and the bulk
+// writes of an import. Every function takes the organisation id and filters on it.
+
+export interface BatchRow {
+  id: string;
+  createdAt: Date;
+  finishedAt: Date | null;
+  createdBy: string;
+  createdByName: string | null;
+  fileName: string;
+  fileKey: string | null;
+  fileBytes: number;
+  rejectedKey: string | null;
+  delimiter: string | null;
+  encoding: string | null;
+  mapping: Record<string, string | null>;
+  validOnly: boolean;
+  status: "running" | "committed" | "undone";
+  rowsProcessed: number;
+  bytesProcessed: number;
+  rowsTotal: number;
+  created: number;
+  updated: number;
+  unchanged: number;
+  rejected: number;
+  lastEventId: number | null;
+  undoneAt: Date | null;
+  undoneByName: string | null;
+}
+
+const BATCH_COLUMNS = [
+  "b.id", "b.created_at as createdAt", "b.finished_at as finishedAt", "b.created_by as createdBy", "u.name as createdByName",
+  "b.file_name as fileName", "b.file_key as fileKey", "b.file_bytes as fileBytes", "b.rejected_key as rejectedKey",
+  "b.delimiter", "b.encoding", "b.mapping", "b.valid_only as validOnly", "b.status", "b.rows_processed as rowsProcessed",
+  "b.bytes_processed as bytesProcessed", "b.rows_total as rowsTotal", "b.created_count as created", "b.updated_count as updated",
+  "b.unchanged_count as unchanged", "b.rejected_count as rejected", "b.last_event_id as lastEventId", "b.undone_at as undoneAt",
+  "v.name as undoneByName",
+];
+
+const batchBase = (trx: Knex = db) =>
+  trx("import_batches as b").leftJoin("users as u", "u.id", "b.created_by").leftJoin("users as v", "v.id", "b.undone_by");
+
+const toBatch = (r: Record<string, unknown>): BatchRow => ({
+  ...(r as unknown as BatchRow),
+  fileBytes: Number(r.fileBytes),
+  bytesProcessed: Number(r.bytesProcessed),
+  lastEventId: r.lastEventId == null ? null : Number(r.lastEventId),
+});
+
+export async function batchIdTaken(id: string): Promise<boolean> {
+  return Boolean(await db("import_batches").where({ id }).first("id"));
+}
+
+/** The batch row of an import that is starting: committed at once, so that its progress can be read. */
+export async function insertBatch(b: {
+  id: string; organisationId: string; createdBy: string; fileName: string; fileKey: string; fileBytes: number;
+  delimiter: string; encoding: string; mapping: unknown; validOnly: boolean;
+}): Promise<void> {
+  await db("import_batches").insert({
+    id: b.id, organisation_id: b.organisationId, created_by: b.createdBy, file_name: b.fileName, file_key: b.fileKey,
+    file_bytes: b.fileBytes, delimiter: b.delimiter, encoding: b.encoding, mapping: JSON.stringify(b.mapping), valid_only: b.validOnly,
+  });
+}
+
+/** Progress of a running import, written outside its transaction so that the page can poll it. */
+export async function recordProgress(id: string, rowsProcessed: number, bytesProcessed: number): Promise<void> {
+  await db("import_batches").where({ id, status: "running" }).update({ rows_processed: rowsProcessed, bytes_processed: bytesProcessed });
+}
+
+/** Removes the batch row of an import that did not go in (its transaction was rolled back). */
+export async function deleteBatch(id: string): Promise<void> {
+  await db("import_batches").where({ id, status: "running" }).delete();
+}
+
+export async function finishBatch(
+  trx: Knex,
+  id: string,
+  f: { mapping: unknown; rowsTotal: number; created: number; updated: number; unchanged: number; rejected: number; rejectedKey: string | null; lastEventId: number | null; bytes: number },
+): Promise<void> {
+  await trx("import_batches").where({ id }).update({
+    status: "committed", finished_at: trx.raw("clock_timestamp()"), mapping: JSON.stringify(f.mapping), rows_total: f.rowsTotal, rows_processed: f.rowsTotal,
+    bytes_processed: f.bytes, created_count: f.created, updated_count: f.updated, unchanged_count: f.unchanged,
+    rejected_count: f.rejected, rejected_key: f.rejectedKey, last_event_id: f.lastEventId,
+  });
+}
+
+export async function listBatches(organisationId: string, limit = 100): Promise<BatchRow[]> {
+  const rows = await batchBase().where("b.organisation_id", organisationId).orderBy("b.created_at", "desc").limit(limit).select(BATCH_COLUMNS);
+  return rows.map(toBatch);
+}
+
+export async function getBatch(organisationId: string, id: string, trx: Knex = db): Promise<BatchRow | undefined> {
+  const row = await batchBase(trx).where({ "b.organisation_id": organisationId, "b.id": id }).first(BATCH_COLUMNS);
+  return row ? toBatch(row) : undefined;
+}
+
+export async function lockBatch(organisationId: string, id: string, trx: Knex) {
+  return trx("import_batches").where({ organisation_id: organisationId, id }).forUpdate().first("id", "status", "last_event_id as lastEventId", "file_name as fileName", "created_count as created", "updated_count as updated");
+}
+
+/** Ids of the items an import added, by tag code. */
+export async function createdItemIds(organisationId: string, batchId: string, limit?: number): Promise<string[]> {
+  const q = db("items").where({ organisation_id: organisationId, import_batch_id: batchId }).orderBy("tag_code").pluck("id");
+  return limit ? q.limit(limit) : q;
+}
+
+/**
+ * Whether any item of the batch (added or updated by it) has a history entry after the
+ * import's own: the first such entry, or undefined.
+ */
+export async function laterEvent(organisationId: string, batchId: string, lastEventId: number, trx: Knex = db) {
+  return trx("item_events as e")
+    .join("items as i", "i.id", "e.item_id")
+    .where("e.organisation_id", organisationId)
+    .where("e.id", ">", lastEventId)
+    .where((w) => w.where("i.import_batch_id", batchId).orWhereIn("e.item_id", trx("import_updates").where({ batch_id: batchId }).select("item_id")))
+    .orderBy("e.id")
+    .first("e.type", "i.tag_code as tagCode");
+}
+
+// Reading stock for an import
+
+const EXISTING_COLUMNS = [
+  "id", "tag_code as tagCode", "kind", "grade", "grade_marked as gradeMarked", "size", "length_mm as lengthMm",
+  "marked_wll_lb as markedWllLb", "serial", "yard_id as yardId", db.raw("to_char(in_service_on, 'YYYY-MM-DD') as \"inServiceOn\""),
+  "cost_cents as costCents", "details", "wll_lb as wllLb", "wll_source as wllSource",
+];
+
+export async function findExisting(trx: Knex, organisationId: string, serials: string[], tagCodes: string[]): Promise<ExistingItem[]> {
+  const rows = await trx("items")
+    .where("organisation_id", organisationId)
+    .where((w) => {
+      if (serials.length) w.orWhereIn("serial", serials);
+      if (tagCodes.length) w.orWhereIn("tag_code", tagCodes);
+    })
+    .select(EXISTING_COLUMNS);
+  return rows.map((r) => ({ ...r, kind: r.kind as ItemKind }));
+}
+
+/** A table of the keys (serials, tag codes, items) seen so far in the file, dropped with the transaction. */
+export async function createSeenTable(trx: Knex): Promise<void> {
+  await trx.raw("CREATE TEMP TABLE import_seen (key text PRIMARY KEY, line integer NOT NULL) ON COMMIT DROP");
+}
+
+/** Notes keys as seen; answers the earlier line of each key that was seen before. */
+export async function firstSeen(trx: Knex, entries: { key: string; line: number }[]): Promise<Map<string, number>> {
+  // Every part of one statement sees the table as it was before the statement, so the
+  // select finds exactly the keys that earlier chunks put there.
+  const { rows } = await trx.raw(
+    `WITH input AS (SELECT * FROM unnest(?::text[], ?::int[]) AS t(key, line)),
+          ins AS (INSERT INTO import_seen (key, line) SELECT key, line FROM input ON CONFLICT (key) DO NOTHING)
+     SELECT s.key, s.line FROM import_seen s JOIN input USING (key)`,
+    [entries.map((e) => e.key), entries.map((e) => e.line)],
+  );
+  return new Map(rows.map((r: { key: string; line: number }) => [r.key, Number(r.line)]));
+}
+
+/** Serializes imports of one organisation: a second import waits for the first to finish. */
+export async function lockOrganisationImports(trx: Knex, organisationId: string): Promise<void> {
+  await trx.raw("SELECT pg_advisory_xact_lock(hashtext(?))", [`linkyard-import:${organisationId}`]);
+}
+
+export async function existingTagCodes(trx: Knex, codes: string[]): Promise<Set<string>> {
+  return new Set(await trx("items").whereIn("tag_code", codes).pluck("tag_code"));
+}
+
+// Bulk writes of an import
+
+export async function insertItems(trx: Knex, rows: Record<string, unknown>[]): Promise<string[]> {
+  const out = await trx("items").insert(rows).returning("id");
+  return out.map((r: { id: string }) => r.id);
+}
+
+export async function insertEvents(trx: Knex, events: Record<string, unknown>[]): Promise<number> {
+  if (!events.length) return 0;
+  const out = await trx("item_events").insert(events).returning("id");
+  return Math.max(...out.map((r: { id: string | number }) => Number(r.id)));
+}
+
+export async function updateItemRow(trx: Knex, organisationId: string, id: string, patch: Record<string, unknown>): Promise<void> {
+  await trx("items").where({ organisation_id: organisationId, id }).update({ ...patch, updated_at: trx.fn.now() });
+}
+
+export async function insertUpdates(trx: Knex, rows: { batch_id: string; item_id: string; before: string; after: string }[]): Promise<void> {
+  if (rows.length) await trx("import_updates").insert(rows);
+}
+
+export async function updatesOf(trx: Knex, batchId: string) {
+  return trx("import_updates").where({ batch_id: batchId }).select("item_id as itemId", "before", "after");
+}
+
+/**
+ * Retires every item an import added, frees their serials for a corrected file, and writes a
+ * 'retired' history entry for each. Answers how many.
+ */
+export async function retireBatchItems(trx: Knex, organisationId: string, batchId: string, actorId: string): Promise<number> {
+  const { rows } = await trx.raw(
+    `WITH old AS (SELECT id, serial, status FROM items WHERE organisation_id = ? AND import_batch_id = ? FOR UPDATE),
+          upd AS (UPDATE items i SET status = 'retired', serial = NULL, next_inspection_due = NULL, updated_at = now()
+                  FROM old WHERE i.id = old.id RETURNING i.id, old.serial, old.status),
+          ev AS (INSERT INTO item_events (organisation_id, item_id, type, note, changes, actor_id)
+                 SELECT ?, id, 'retired', 'Import undone',
+                        jsonb_build_object('status', jsonb_build_array(status, 'retired'))
+                          || CASE WHEN serial IS NULL THEN '{}'::jsonb ELSE jsonb_build_object('serial', jsonb_build_array(serial, NULL)) END,
+                        ? FROM upd RETURNING 1)
+     SELECT count(*)::int AS n FROM ev`,
+    [organisationId, batchId, organisationId, actorId],
+  );
+  return rows[0].n;
+}
+
+export async function markUndone(trx: Knex, batchId: string, actorId: string): Promise<void> {
+  await trx("import_batches").where({ id: batchId }).update({ status: "undone", undone_at: trx.fn.now(), undone_by: actorId });
+}
+
+// Saved column mappings
+
+export async function listMappings(organisationId: string) {
+  return db("import_mappings").where({ organisation_id: organisationId }).orderBy("name").select("id", "name", "mapping", "updated_at as updatedAt");
+}
+
+/** Saves a mapping by name (one of the same name is replaced), with its audit row. */
+export async function saveMapping(organisationId: string, name: string, mapping: unknown, userId: string): Promise<string> {
+  return db.transaction(async (trx) => {
+    const [row] = await trx("import_mappings")
+      .insert({ organisation_id: organisationId, name, mapping: JSON.stringify(mapping), created_by: userId })
+      .onConflict(["organisation_id", "name"])
+      .merge({ mapping: JSON.stringify(mapping), updated_at: trx.fn.now() })
+      .returning("id");
+    await writeAudit({ organisationId, actorId: userId, action: "import_mapping.saved", entity: "import_mapping", entityId: row.id, after: { name, mapping } }, trx);
+    return row.id;
+  });
+}
+
+export async function deleteMapping(organisationId: string, id: string, userId: string): Promise<boolean> {
+  return db.transaction(async (trx) => {
+    const gone = await trx("import_mappings").where({ organisation_id: organisationId, id }).delete();
+    if (gone) await writeAudit({ organisationId, actorId: userId, action: "import_mapping.deleted", entity: "import_mapping", entityId: id }, trx);
+    return gone > 0;
+  });
+}

@@ -1,0 +1,288 @@
+// The import of one file, row by row in chunks, with the organisation's stock reached only
+// through an ImportStore (the database in the app, a Map in the tests). Memory holds one
+// chunk of rows, the first errors (capped) and a few preview rows, whatever the file's size.
+import type { ItemInput } from "@/lib/stock/schemas";
+import { describeItem } from "@/lib/stock/summary";
+import type { CsvFatal, CsvRecord } from "./csv";
+import { autoMap, resolveMapping, uniqueHeaders, type ColumnMapping } from "./fields";
+import { RowReader, itemChanges, storedRow, type ExistingItem, type ReadRow, type RowError, type StoredRow } from "./row";
+
+export interface PreparedCreate {
+  line: number;
+  input: ItemInput;
+  row: StoredRow;
+}
+
+export interface PreparedUpdate {
+  line: number;
+  existing: ExistingItem;
+  row: StoredRow;
+  changes: Record<string, [unknown, unknown]>;
+}
+
+export interface ImportStore {
+  /** Items of the organisation with any of these serials or tag codes. */
+  findExisting(keys: { serials: string[]; tagCodes: string[] }): Promise<ExistingItem[]>;
+  /** Notes keys as seen in this file; answers, for keys seen before, the line they were first on. */
+  firstSeen(entries: { key: string; line: number }[]): Promise<Map<string, number>>;
+  /** Writes a chunk of valid rows (a commit; a dry run has no write). */
+  write?(creates: PreparedCreate[], updates: PreparedUpdate[]): Promise<void>;
+  /** A rejected row, for the rejected-rows file of a valid-rows-only import. */
+  rejected?(fields: readonly string[], messages: string[]): Promise<void>;
+  /** Rows read so far, for the progress shown while a large file goes in. */
+  progress?(rows: number): Promise<void>;
+}
+
+export interface ImportOptions {
+  /** The owner's column choices, by header; headers not named are mapped automatically. */
+  mapping?: Record<string, string | null>;
+  yards: readonly { id: string; name: string }[];
+  /** Write the valid rows even when some rows are rejected. */
+  validOnly?: boolean;
+  chunkSize?: number;
+  maxErrors?: number;
+  previewRows?: number;
+}
+
+export interface PreviewRow {
+  line: number;
+  action: "create" | "update" | "unchanged";
+  tagCode: string | null;
+  description: string;
+  kind: string;
+  grade: number | null;
+  size: string | null;
+  markedWllLb: number | null;
+  wllLb: number | null;
+  wllSource: string | null;
+  lengthMm: number | null;
+  serial: string | null;
+  yardName: string | null;
+  inServiceOn: string | null;
+  costCents: number | null;
+  changes?: Record<string, [unknown, unknown]>;
+}
+
+export interface ImportSummary {
+  headers: string[];
+  mapping: ColumnMapping;
+  /** The automatic mapping, for the mapping screen to show what was chosen and why. */
+  autoMapping: ColumnMapping;
+  unknownColumns: string[];
+  setByLinkyard: string[];
+  /** The first data rows as they are in the file, for the mapping screen. */
+  sample: string[][];
+  rows: number;
+  created: number;
+  updated: number;
+  unchanged: number;
+  rejected: number;
+  errors: RowError[];
+  errorCount: number;
+  /** The file cannot be imported at all (broken quotes, no Kind column, …), valid rows or not. */
+  fatal: boolean;
+  preview: PreviewRow[];
+}
+
+const KIND_COLUMN_MISSING =
+  "No column says what each item is. Add a Kind column (chain, ratchet binder, lever binder, web strap, hook, shackle…), or choose which of your columns is the Kind.";
+
+/**
+ * Reads, checks and (with a store that writes) imports the records of one CSV file.
+ * @example const summary = await runImport(readRecords(text, ","), { yards }, store)
+ */
+export async function runImport(records: AsyncIterable<CsvRecord | CsvFatal>, options: ImportOptions, store: ImportStore): Promise<ImportSummary> {
+  const chunkSize = options.chunkSize ?? 1000;
+  const maxErrors = options.maxErrors ?? 1000;
+  const previewRows = options.previewRows ?? 10;
+  const summary: ImportSummary = {
+    headers: [], mapping: {}, autoMapping: {}, unknownColumns: [], setByLinkyard: [], sample: [],
+    rows: 0, created: 0, updated: 0, unchanged: 0, rejected: 0, errors: [], errorCount: 0, fatal: false, preview: [],
+  };
+  const addError = (e: RowError) => {
+    summary.errorCount++;
+    if (summary.errors.length < maxErrors) summary.errors.push(e);
+  };
+  const fail = (e: RowError) => {
+    addError(e);
+    summary.fatal = true;
+    return summary;
+  };
+
+  const iterator = records[Symbol.asyncIterator]();
+  const first = await iterator.next();
+  if (first.done) return fail({ line: 1, column: null, message: "The file has no rows: the first line should name the columns, and each line after it one item." });
+  if ("fatal" in first.value) return fail({ line: first.value.line, column: null, message: first.value.fatal });
+
+  const headers = uniqueHeaders(first.value.fields.map((h) => h.trim()));
+  const headerLine = first.value.line;
+  const auto = autoMap(headers);
+  const { mapping, problems } = resolveMapping(headers, options.mapping);
+  Object.assign(summary, { headers, mapping, autoMapping: auto.mapping, setByLinkyard: auto.setByLinkyard });
+  summary.unknownColumns = auto.unknown.filter((h) => mapping[h] === null);
+  for (const p of problems) addError({ line: headerLine, column: p.column, message: p.message });
+  const reader = new RowReader(headers, mapping, options.yards);
+  if (!reader.has("kind") && !reader.has("tagCode") && !reader.has("serial")) addError({ line: headerLine, column: null, message: KIND_COLUMN_MISSING });
+  if (summary.errorCount) {
+    summary.fatal = true;
+    // still read a few rows for the mapping screen
+    for (let i = 0; i < 3; i++) {
+      const next = await iterator.next();
+      if (next.done || "fatal" in next.value) break;
+      summary.sample.push(next.value.fields.slice(0, headers.length));
+    }
+    return summary;
+  }
+
+  let writing = true; // false once a row is rejected and only valid rows may not go in
+  let chunk: CsvRecord[] = [];
+
+  const flush = async () => {
+    if (!chunk.length) return;
+    const rows = chunk;
+    chunk = [];
+    const read = rows.map((r): ReadRow & { problems: RowError[] } => {
+      const rr = reader.read(r.line, r.fields);
+      const problems = [...rr.errors];
+      if (r.quoteProblem) problems.unshift({ line: r.line, column: null, message: r.quoteProblem });
+      const extra = r.fields.slice(headers.length);
+      if (extra.some((f) => f.trim() !== "")) {
+        problems.unshift({ line: r.line, column: null, message: `This row has ${r.fields.length} values but the header names ${headers.length} columns. A value that holds the delimiter must be in quotes.` });
+      }
+      return { ...rr, problems };
+    });
+
+    const serials = [...new Set(read.flatMap((r) => (r.serial ? [r.serial] : [])))];
+    const tagCodes = [...new Set(read.flatMap((r) => (r.tagCode ? [r.tagCode] : [])))];
+    const found = serials.length || tagCodes.length ? await store.findExisting({ serials, tagCodes }) : [];
+    const bySerial = new Map(found.filter((f) => f.serial).map((f) => [f.serial!, f]));
+    const byTag = new Map(found.map((f) => [f.tagCode, f]));
+
+    // Which stored item each row updates, if any.
+    const matched = read.map((r) => {
+      if (r.tagCode) {
+        const item = byTag.get(r.tagCode);
+        if (!item) {
+          r.problems.push({ line: r.line, column: reader.column("tagCode"), message: `No item in your stock has tag code ${r.tagCode}. Leave the tag code empty to add a new item.` });
+          return undefined;
+        }
+        const owner = r.serial ? bySerial.get(r.serial) : undefined;
+        if (owner && owner.id !== item.id) {
+          r.problems.push({ line: r.line, column: reader.column("serial"), message: `Serial ${r.serial} belongs to item ${owner.tagCode}, not to ${item.tagCode}. Another item already has this serial or lot.` });
+        }
+        return item;
+      }
+      return r.serial ? bySerial.get(r.serial) : undefined;
+    });
+
+    // Each serial, tag code and stored item once per file.
+    const keyed = read.map((r, i) => {
+      const keys: { key: string; column: string; message: (line: number) => string }[] = [];
+      if (r.serial) keys.push({ key: `s:${r.serial}`, column: reader.column("serial"), message: (l) => `Serial ${r.serial} is already on line ${l}; each serial may appear once in the file.` });
+      if (r.tagCode) keys.push({ key: `t:${r.tagCode}`, column: reader.column("tagCode"), message: (l) => `Tag code ${r.tagCode} is already on line ${l}; each item may appear once in the file.` });
+      const item = matched[i];
+      if (item) keys.push({ key: `i:${item.id}`, column: r.tagCode ? reader.column("tagCode") : reader.column("serial"), message: (l) => `Line ${l} already updates item ${item.tagCode}; each item may appear once in the file.` });
+      return keys;
+    });
+    const inChunk = new Map<string, number>();
+    const toStore: { key: string; line: number }[] = [];
+    read.forEach((r, i) => {
+      for (const k of keyed[i]) {
+        if (inChunk.has(k.key)) continue;
+        inChunk.set(k.key, r.line);
+        toStore.push({ key: k.key, line: r.line });
+      }
+    });
+    const earlier = toStore.length ? await store.firstSeen(toStore) : new Map<string, number>();
+    read.forEach((r, i) => {
+      let reported = false;
+      for (const k of keyed[i]) {
+        const firstLine = earlier.get(k.key) ?? (inChunk.get(k.key) !== r.line ? inChunk.get(k.key) : undefined);
+        if (firstLine !== undefined && !reported) {
+          r.problems.push({ line: r.line, column: k.column, message: k.message(firstLine) });
+          reported = true; // one duplicate message per row is enough
+        }
+      }
+    });
+
+    const creates: PreparedCreate[] = [];
+    const updates: PreparedUpdate[] = [];
+    const yardName = (id: string | null) => (id ? (options.yards.find((y) => y.id === id)?.name ?? null) : null);
+    for (let i = 0; i < read.length; i++) {
+      const r = read[i];
+      const existing = matched[i];
+      const unreadable = new Set(r.problems.map((p) => p.column));
+      const kindProblem = r.problems.some((p) => p.column === reader.column("kind"));
+      const checked = kindProblem ? { errors: [] } : reader.validate(r, existing);
+      const problems = "errors" in checked ? [...r.problems, ...checked.errors.filter((e) => !unreadable.has(e.column))] : r.problems;
+      if (problems.length || !("input" in checked)) {
+        summary.rejected++;
+        problems.forEach(addError);
+        if (!options.validOnly) writing = false;
+        await store.rejected?.(r.fields, problems.map((p) => (p.column ? `${p.column}: ${p.message}` : p.message)));
+        continue;
+      }
+      const row = storedRow(checked.input, existing);
+      if (existing) {
+        const changes = itemChanges(existing, row, yardName);
+        if (Object.keys(changes).length === 0) {
+          summary.unchanged++;
+          preview(r.line, "unchanged", row, existing.tagCode);
+        } else {
+          summary.updated++;
+          updates.push({ line: r.line, existing, row, changes });
+          preview(r.line, "update", row, existing.tagCode, changes);
+        }
+      } else {
+        summary.created++;
+        creates.push({ line: r.line, input: checked.input, row });
+        preview(r.line, "create", row, null);
+      }
+    }
+    if (writing && store.write && (creates.length || updates.length)) await store.write(creates, updates);
+    await store.progress?.(summary.rows);
+  };
+
+  const preview = (line: number, action: PreviewRow["action"], row: StoredRow, tagCode: string | null, changes?: Record<string, [unknown, unknown]>) => {
+    if (summary.preview.length >= previewRows) return;
+    summary.preview.push({
+      line, action, tagCode,
+      description: describeItem({ kind: row.kind, grade: row.grade, size: row.size, details: row.details }),
+      kind: row.kind, grade: row.grade, size: row.size, markedWllLb: row.marked_wll_lb, wllLb: row.wll_lb, wllSource: row.wll_source,
+      lengthMm: row.length_mm, serial: row.serial,
+      yardName: row.yard_id ? (options.yards.find((y) => y.id === row.yard_id)?.name ?? null) : null,
+      inServiceOn: row.in_service_on, costCents: row.cost_cents, ...(changes && { changes }),
+    });
+  };
+
+  for (;;) {
+    const next = await iterator.next();
+    if (next.done) break;
+    const record = next.value;
+    if ("fatal" in record) {
+      await flush();
+      addError({ line: record.line, column: null, message: record.fatal });
+      summary.fatal = true;
+      break;
+    }
+    summary.rows++;
+    if (summary.sample.length < 3) summary.sample.push(record.fields.slice(0, headers.length));
+    chunk.push(record);
+    if (chunk.length >= chunkSize) await flush();
+  }
+  await flush();
+  if (summary.rows === 0 && !summary.fatal) {
+    return fail({ line: headerLine + 1, column: null, message: "The file names its columns but has no items under them." });
+  }
+  return summary;
+}
+
+/** Whether a checked file may be committed, and if not, why, in words. */
+export function commitRefusal(summary: ImportSummary, validOnly: boolean): string | null {
+  if (summary.fatal) return "The file cannot be imported as it is; nothing was imported.";
+  if (summary.rejected && !validOnly) {
+    return `${summary.rejected.toLocaleString("en-US")} ${summary.rejected === 1 ? "row needs" : "rows need"} fixing; nothing was imported. Fix ${summary.rejected === 1 ? "it" : "them"} and upload again, or import only the valid rows.`;
+  }
+  if (summary.rejected && summary.created + summary.updated + summary.unchanged === 0) return "None of the rows can be imported; nothing was imported.";
+  return null;
+}

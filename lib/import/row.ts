@@ -1,0 +1,260 @@
+// One CSV row to an item: the mapped cells are read (lib/import/values.ts), laid over the
+// stored item when the row updates one, and then go through itemInputSchema, the same rules
+// as the add-item form and the API, including the rated-limit engine. Every problem comes
+// back as { column, message } with the column as the file names it.
+import { itemInputSchema, type ItemInput } from "@/lib/stock/schemas";
+import type { ItemKind } from "@/lib/stock/labels";
+import { itemRow, MANAGED_DETAILS } from "@/lib/stock/row";
+import { FIELD_COLUMN, headerWords, type ColumnMapping, type ImportField } from "./fields";
+import {
+  readChainRange, readCost, readDate, readGrade, readKind, readLength, readMarking, readMechanism,
+  readSize, readTagCode, readWeight, readYard, unneutralise, type Read,
+} from "./values";
+
+export interface RowError {
+  /** The line the row starts on, as a person counts lines in the file (header = 1). */
+  line: number;
+  /** The column as the file's header names it; null when the problem is the whole row or file. */
+  column: string | null;
+  message: string;
+}
+
+/** An item in stock that a row may update, as the import reads and compares it. */
+export interface ExistingItem {
+  id: string;
+  tagCode: string;
+  kind: ItemKind;
+  grade: number | null;
+  gradeMarked: boolean;
+  size: string | null;
+  lengthMm: number | null;
+  markedWllLb: number | null;
+  serial: string | null;
+  yardId: string | null;
+  inServiceOn: string | null;
+  costCents: number | null;
+  details: Record<string, unknown>;
+  wllLb: number | null;
+  wllSource: string | null;
+}
+
+export type InputKey = keyof ItemInput;
+
+const INPUT_OF: Record<Exclude<ImportField, "tagCode">, InputKey> = {
+  kind: "kind", marking: "marking", grade: "grade", size: "size", sizeMm: "size", wll: "markedWll", wllLb: "markedWll",
+  wllKg: "markedWll", mechanism: "mechanism", chainRange: "chainSizeRange", length: "length", lengthFt: "length",
+  lengthM: "length", ends: "ends", serial: "serial", yard: "yardId", inServiceOn: "inServiceOn", cost: "costCents",
+};
+
+/** Named in an error when the file has no column for the value at fault. */
+const FALLBACK_COLUMN: Record<InputKey, string> = {
+  kind: FIELD_COLUMN.kind, marking: FIELD_COLUMN.marking, markedWll: FIELD_COLUMN.wllLb, grade: FIELD_COLUMN.grade,
+  size: FIELD_COLUMN.size, chainSizeRange: FIELD_COLUMN.chainRange, mechanism: FIELD_COLUMN.mechanism,
+  length: FIELD_COLUMN.lengthFt, ends: FIELD_COLUMN.ends, serial: FIELD_COLUMN.serial, yardId: FIELD_COLUMN.yard,
+  inServiceOn: FIELD_COLUMN.inServiceOn, costCents: FIELD_COLUMN.cost,
+};
+
+/** How a file's columns feed an item: which column fills which input, with its unit. */
+export class RowReader {
+  readonly columns: { index: number; header: string; field: ImportField; unit?: string }[];
+  private readonly columnOf = new Map<InputKey | "tagCode", string>();
+
+  constructor(
+    readonly headers: readonly string[],
+    mapping: ColumnMapping,
+    private readonly yards: readonly { id: string; name: string }[],
+  ) {
+    this.columns = headers.flatMap((header, index) => {
+      const field = mapping[header];
+      if (!field) return [];
+      const { weightUnit, lengthUnit } = headerWords(header);
+      const unit =
+        field === "wllLb" ? "lb" : field === "wllKg" ? "kg" : field === "wll" ? weightUnit
+        : field === "lengthFt" ? "ft" : field === "lengthM" ? "m" : field === "length" ? lengthUnit
+        : field === "sizeMm" ? "mm" : field === "size" || field === "chainRange" ? (lengthUnit === "mm" || lengthUnit === "in" ? lengthUnit : undefined)
+        : undefined;
+      return [{ index, header, field, unit }];
+    });
+    for (const c of this.columns) this.columnOf.set(c.field === "tagCode" ? "tagCode" : INPUT_OF[c.field], c.header);
+  }
+
+  /** Whether the file has a column for an input. */
+  has(key: InputKey | "tagCode"): boolean {
+    return this.columnOf.has(key);
+  }
+
+  /** The file's column for an input, or the template's name for it. */
+  column(key: InputKey | "tagCode"): string {
+    return this.columnOf.get(key) ?? (key === "tagCode" ? FIELD_COLUMN.tagCode : FALLBACK_COLUMN[key]);
+  }
+
+  /** Reads the mapped cells of a row: the values it sets (a blank cell sets "nothing") and the cells it cannot read. */
+  read(line: number, fields: readonly string[]): ReadRow {
+    const values: Partial<Record<InputKey, unknown>> = {};
+    const provided = new Set<InputKey>();
+    const errors: RowError[] = [];
+    let tagCode: string | undefined;
+    let kindMechanism: "ratchet" | "lever" | undefined;
+    for (const c of this.columns) {
+      const cell = unneutralise(fields[c.index] ?? "").trim();
+      if (c.field === "tagCode") {
+        if (!cell) continue;
+        const r = readTagCode(cell);
+        if ("error" in r) errors.push({ line, column: c.header, message: r.error });
+        else tagCode = r.value;
+        continue;
+      }
+      const key = INPUT_OF[c.field];
+      provided.add(key);
+      if (!cell) continue;
+      const r = this.readCell(c.field, cell, c.unit);
+      if ("error" in r) {
+        errors.push({ line, column: c.header, message: r.error });
+        continue;
+      }
+      if (c.field === "kind") {
+        const k = r.value as { kind: ItemKind; mechanism?: "ratchet" | "lever" };
+        values.kind = k.kind;
+        kindMechanism = k.mechanism;
+      } else values[key] = r.value;
+    }
+    if (kindMechanism) {
+      if (values.mechanism && values.mechanism !== kindMechanism) {
+        errors.push({ line, column: this.column("mechanism"), message: `The kind says ${kindMechanism} binder but this column says ${values.mechanism}.` });
+      }
+      values.mechanism = kindMechanism;
+      provided.add("mechanism");
+    }
+    const serial = typeof values.serial === "string" ? values.serial : undefined;
+    return { line, fields, values, provided, tagCode, serial, errors, mechanismFromKind: Boolean(kindMechanism) };
+  }
+
+  private readCell(field: Exclude<ImportField, "tagCode">, cell: string, unit: string | undefined): Read<unknown> {
+    switch (field) {
+      case "kind": return readKind(cell);
+      case "marking": return readMarking(cell);
+      case "grade": return readGrade(cell);
+      case "size": case "sizeMm": return readSize(cell, unit as "in" | "mm" | undefined);
+      case "wll": case "wllLb": case "wllKg": return readWeight(cell, unit as "lb" | "kg" | undefined);
+      case "mechanism": return readMechanism(cell);
+      case "chainRange": return readChainRange(cell, unit as "in" | "mm" | undefined);
+      case "length": case "lengthFt": case "lengthM": return readLength(cell, unit as "ft" | "m" | "in" | "mm" | undefined);
+      case "yard": return readYard(cell, this.yards);
+      case "inServiceOn": return readDate(cell);
+      case "cost": return readCost(cell);
+      case "ends": case "serial": return { value: cell };
+    }
+  }
+
+  /**
+   * The item a read row describes, laid over the stored item when it updates one, through
+   * the item schema. Returns the valid input or the problems by column.
+   */
+  validate(row: ReadRow, existing: ExistingItem | undefined): { input: ItemInput } | { errors: RowError[] } {
+    const base: Partial<Record<InputKey, unknown>> = existing ? existingToInput(existing) : {};
+    const merged: Partial<Record<InputKey, unknown>> = { ...base };
+    for (const key of row.provided) merged[key] = row.values[key];
+    if (existing && row.provided.has("kind") && merged.kind && merged.kind !== existing.kind) {
+      return { errors: [{ line: row.line, column: this.column("kind"), message: `This row matches item ${existing.tagCode}, which is a ${existing.kind.replace("-", " ")}; the kind of an item cannot change. Give this row its own serial to add it as a new item.` }] };
+    }
+    if (existing && !row.provided.has("kind")) merged.kind = existing.kind;
+    const markingGiven = row.provided.has("marking") && row.values.marking !== undefined;
+    const markingTouched = row.provided.has("marking") || row.provided.has("markedWll") || row.provided.has("grade");
+    if (!markingGiven && (!existing || markingTouched)) {
+      // No marking in the file: a WLL means the WLL is marked, a grade means only the grade is.
+      merged.marking = merged.markedWll ? "wll" : merged.grade ? "grade" : "none";
+    }
+    if (merged.kind === undefined) {
+      return { errors: [{ line: row.line, column: this.column("kind"), message: this.has("kind") ? "Say what the item is: chain, ratchet binder, lever binder, web strap, wire rope, hook, shackle or rated item." : "This row matches no item in your stock, so it needs a Kind column saying what the item is." }] };
+    }
+    const parsed = itemInputSchema.safeParse(merged);
+    if (parsed.success) return { input: parsed.data };
+    const errors: RowError[] = [];
+    const seen = new Set<string>();
+    for (const issue of parsed.error.issues) {
+      const key = String(issue.path[0] ?? "") as InputKey;
+      let column: string;
+      if (key === "marking" && !markingGiven) column = this.has("markedWll") || !this.has("grade") ? this.column("markedWll") : this.column("grade");
+      else if (key === "mechanism" && row.mechanismFromKind) column = this.column("kind");
+      else column = key ? this.column(key) : this.column("kind");
+      const once = `${column}\u0000${issue.message}`;
+      if (seen.has(once)) continue;
+      seen.add(once);
+      errors.push({ line: row.line, column, message: issue.message });
+    }
+    return { errors };
+  }
+}
+
+export interface ReadRow {
+  line: number;
+  fields: readonly string[];
+  values: Partial<Record<InputKey, unknown>>;
+  /** Inputs the file has a column for: on an update, a blank cell in one of them clears the value. */
+  provided: Set<InputKey>;
+  tagCode?: string;
+  serial?: string;
+  errors: RowError[];
+  mechanismFromKind: boolean;
+}
+
+/** A stored item in the shape the schema reads, so that a row can change some of it. */
+export function existingToInput(e: ExistingItem): Partial<Record<InputKey, unknown>> {
+  const d = e.details ?? {};
+  return {
+    kind: e.kind,
+    marking: e.markedWllLb != null ? "wll" : e.gradeMarked ? "grade" : "none",
+    markedWll: e.markedWllLb != null ? { value: e.markedWllLb, unit: "lb" } : undefined,
+    grade: e.grade ?? undefined,
+    size: e.size ?? undefined,
+    chainSizeRange: Array.isArray(d.chainSizeRange) ? d.chainSizeRange : undefined,
+    mechanism: typeof d.mechanism === "string" ? d.mechanism : undefined,
+    ends: typeof d.ends === "string" ? d.ends : undefined,
+    length: e.lengthMm != null ? { value: e.lengthMm / 304.8, unit: "ft" } : undefined,
+    serial: e.serial ?? undefined,
+    yardId: e.yardId ?? undefined,
+    inServiceOn: e.inServiceOn ?? undefined,
+    costCents: e.costCents ?? undefined,
+  };
+}
+
+/** The stored row for an item input; on an update, detail keys the import does not manage are kept. */
+export function storedRow(input: ItemInput, existing?: ExistingItem) {
+  const row = itemRow(input);
+  const details: Record<string, unknown> = JSON.parse(row.details);
+  if (existing) {
+    for (const [k, v] of Object.entries(existing.details ?? {})) if (!(MANAGED_DETAILS as readonly string[]).includes(k)) details[k] = v;
+  }
+  return { ...row, details };
+}
+export type StoredRow = ReturnType<typeof storedRow>;
+
+const canonical = (v: unknown): string =>
+  v && typeof v === "object" && !Array.isArray(v)
+    ? `{${Object.keys(v).sort().map((k) => `${JSON.stringify(k)}:${canonical((v as Record<string, unknown>)[k])}`).join(",")}}`
+    : JSON.stringify(v ?? null);
+
+/**
+ * What an update changes, as the item's history shows edits: { field: [before, after] }.
+ * Empty when the row repeats what is stored.
+ */
+export function itemChanges(existing: ExistingItem, row: StoredRow, yardName: (id: string | null) => string | null): Record<string, [unknown, unknown]> {
+  const pairs: [string, unknown, unknown][] = [
+    ["grade", existing.grade, row.grade],
+    ["gradeMarked", existing.gradeMarked, row.grade_marked],
+    ["size", existing.size, row.size],
+    ["lengthMm", existing.lengthMm, row.length_mm],
+    ["markedWllLb", existing.markedWllLb, row.marked_wll_lb],
+    ["wllLb", existing.wllLb, row.wll_lb],
+    ["serial", existing.serial, row.serial],
+    ["yardName", yardName(existing.yardId), yardName(row.yard_id)],
+    ["inServiceOn", existing.inServiceOn, row.in_service_on],
+    ["costCents", existing.costCents, row.cost_cents],
+    ["details", existing.details ?? {}, row.details],
+  ];
+  const out: Record<string, [unknown, unknown]> = {};
+  for (const [k, a, b] of pairs) if (canonical(a) !== canonical(b)) out[k] = [a, b];
+  // the yard may change without its name changing only if two yards share a name: they cannot
+  if (existing.yardId !== row.yard_id && !out.yardName) out.yardName = [yardName(existing.yardId), yardName(row.yard_id)];
+  return out;
+}
