@@ -2,6 +2,7 @@ import { mkdirSync } from "node:fs";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import type { Page } from "playwright-core";
 import { openBrowser, SCREENSHOT_DIR, type OpenBrowser } from "./support/browser";
+import { testDb } from "../support/db";
 import { BASE_URL, MAIL_API, latestMailTo, linkIn, uniqueEmail } from "../support/http";
 
 // The foundation as a person meets it: sign in, see the shell of each role, invite a
@@ -19,6 +20,7 @@ beforeAll(async () => {
 afterAll(async () => {
   await phone?.close();
   await desk?.close();
+  await testDb.destroy();
 });
 
 async function signIn(page: Page, email: string, password = DEMO.password) {
@@ -54,7 +56,6 @@ describe("sign-in", () => {
 
 describe("a scanned tag before signing in", () => {
   it("comes back to the item after sign-in", async () => {
-    const { testDb } = await import("../support/db");
     const item = await testDb("items as i")
       .join("organisations as o", "o.id", "i.organisation_id")
       .where("o.name", "Corvid Hollow Groundworks")
