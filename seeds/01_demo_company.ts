@@ -30,7 +30,7 @@ const STOCK: Item[] = [
   { kind: "chain", grade: 70, size: "3/8", lengthFt: 20, markedWllLb: 6600, serialPrefix: "CH7-38", count: 12, details: { ends: "grab hook both ends" }, costCents: 11900 },
   { kind: "chain", grade: 70, size: "5/16", lengthFt: 20, markedWllLb: 4700, serialPrefix: "CH7-516", count: 8, details: { ends: "grab hook both ends" }, costCents: 8900 },
   { kind: "chain", grade: 80, size: "1/2", lengthFt: 16, markedWllLb: 12000, serialPrefix: "CH8-12", count: 4, details: { ends: "clevis grab hook both ends" }, costCents: 24500 },
-  { kind: "chain", grade: 30, size: "3/8", lengthFt: 14, markedWllLb: null, gradeMarked: false, serialPrefix: "CH3-38", count: 2, details: { ends: "slip hook both ends", note: "old proof coil, no grade mark" }, costCents: 3500 },
+  { kind: "chain", size: "3/8", lengthFt: 14, markedWllLb: null, gradeMarked: false, serialPrefix: "CH3-38", count: 2, details: { ends: "slip hook both ends", note: "old proof coil, no grade mark" }, costCents: 3500 },
   { kind: "binder", size: "3/8", markedWllLb: 5400, serialPrefix: "BR-516-38", count: 10, details: { mechanism: "ratchet", chainSizeRange: ["5/16", "3/8"] }, costCents: 6900 },
   { kind: "binder", size: "1/2", markedWllLb: 9200, serialPrefix: "BR-38-12", count: 4, details: { mechanism: "ratchet", chainSizeRange: ["3/8", "1/2"] }, costCents: 9400 },
   { kind: "binder", size: "3/8", markedWllLb: 5400, serialPrefix: "BL-516-38", count: 4, details: { mechanism: "lever", chainSizeRange: ["5/16", "3/8"] }, costCents: 4200 },
