@@ -1,31 +1,12 @@
 import type { Knex } from "knex";
+import type { StoredItem } from "@/lib/stock/summary";
 import { db } from "./index";
 
 // Stock queries. Every function takes the organisation id and filters on it, except the
 // tag lookup, which finds the one item a printed code names.
 
-export interface ItemSummary {
-  id: string;
-  tagCode: string;
-  kind: string;
-  grade: number | null;
-  gradeMarked: boolean;
-  size: string | null;
-  lengthMm: number | null;
-  markedWllLb: number | null;
-  wllLb: number | null;
-  wllSource: string | null;
-  serial: string | null;
-  status: string;
-  yardId: string | null;
-  yardName: string | null;
-  nextInspectionDue: string | null;
-  lastCheckedAt: Date | null;
-  lastInspectedOn: string | null;
-  details: Record<string, unknown>;
-  inServiceOn: string | null;
-  costCents: number | null;
-}
+/** The stored shape is declared beside the code that turns it into API answers. */
+export type ItemSummary = StoredItem;
 
 const SUMMARY_COLUMNS = [
   "i.id", "i.tag_code as tagCode", "i.kind", "i.grade", "i.grade_marked as gradeMarked", "i.size",

@@ -23,12 +23,13 @@ export function describeItem(item: { kind: string; grade: number | null; size: s
   return parts.join(", ");
 }
 
-/** The item as every API and scan screen answers it. */
-export function toItemSummary(row: {
+/** An item as the data layer reads it (db/items.ts), one row per physical piece of gear. */
+export interface StoredItem {
   id: string;
   tagCode: string;
   kind: string;
   grade: number | null;
+  gradeMarked: boolean;
   size: string | null;
   lengthMm: number | null;
   markedWllLb: number | null;
@@ -41,8 +42,13 @@ export function toItemSummary(row: {
   nextInspectionDue: string | null;
   lastCheckedAt: Date | string | null;
   lastInspectedOn: string | null;
-  details?: Record<string, unknown> | null;
-}) {
+  details: Record<string, unknown>;
+  inServiceOn: string | null;
+  costCents: number | null;
+}
+
+/** The item as every API and scan screen answers it. */
+export function toItemSummary(row: StoredItem) {
   return {
     id: row.id,
     tagCode: row.tagCode,
