@@ -1,6 +1,7 @@
 // Writing CSV that a spreadsheet opens without running anything: the stock export, the
 // rejected rows of an import and the template. Pure.
 import { KIND_LABELS, STATUS_LABELS, type ItemKind, type ItemStatus } from "@/lib/stock/labels";
+import type { StoredItem } from "@/lib/stock/summary";
 
 /**
  * A cell a spreadsheet would run as a formula (it starts with =, +, -, @, a tab or a carriage
@@ -39,23 +40,12 @@ export const EXPORT_HEADERS = [
   "End fittings", "Serial/Lot", "Yard", "In service", "Cost", "Status", "WLL used (lb)", "Inspection due",
 ] as const;
 
-export interface ExportItem {
-  tagCode: string;
-  kind: string;
-  grade: number | null;
-  gradeMarked: boolean;
-  size: string | null;
-  lengthMm: number | null;
-  markedWllLb: number | null;
-  wllLb: number | null;
-  serial: string | null;
-  status: string;
-  yardName: string | null;
-  nextInspectionDue: string | null;
-  details: Record<string, unknown> | null;
-  inServiceOn: string | null;
-  costCents: number | null;
-}
+/** What the export reads of a stored item. */
+export type ExportItem = Pick<
+  StoredItem,
+  | "tagCode" | "kind" | "grade" | "gradeMarked" | "size" | "lengthMm" | "markedWllLb" | "wllLb" | "serial"
+  | "status" | "yardName" | "nextInspectionDue" | "inServiceOn" | "costCents"
+> & { details: StoredItem["details"] | null };
 
 const trimZeros = (n: number, decimals: number) => String(Number(n.toFixed(decimals)));
 
