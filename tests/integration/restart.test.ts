@@ -1,0 +1,61 @@
+import { spawn, type ChildProcess } from "node:child_process";
+import path from "node:path";
+import { afterAll, describe, expect, it } from "vitest";
+import { newOrganisation, TEST_PASSWORD } from "../support/http";
+
+// Sessions live in PostgreSQL, so a person stays signed in when the app restarts. This test
+// runs a second server of the same build on its own port, signs in, restarts it, and asks again.
+
+const ROOT = path.resolve(__dirname, "../..");
+const PORT = Number(process.env.LINKYARD_TEST_PORT ?? 3100) + 77;
+const BASE = `http://127.0.0.1:${PORT}`;
+let server: ChildProcess | undefined;
+
+async function startServer(): Promise<void> {
+  server = spawn(path.join(ROOT, "node_modules/.bin/next"), ["start", "-H", "127.0.0.1", "-p", String(PORT)], {
+    cwd: ROOT,
+    env: { ...process.env, APP_URL: BASE },
+    stdio: "ignore",
+  });
+  for (let i = 0; i < 120; i++) {
+    try {
+      if ((await fetch(`${BASE}/api/health`)).ok) return;
+    } catch {
+      /* not up yet */
+    }
+    await new Promise((r) => setTimeout(r, 250));
+  }
+  throw new Error("the second server did not start");
+}
+
+async function stopServer(): Promise<void> {
+  if (!server || server.exitCode !== null) return;
+  const exited = new Promise((r) => server!.once("exit", r));
+  server.kill("SIGTERM");
+  await exited;
+}
+
+afterAll(stopServer);
+
+describe("a restart of the app", () => {
+  it("keeps people signed in", async () => {
+    const { email } = await newOrganisation("Restart Co");
+    await startServer();
+    const signIn = await fetch(`${BASE}/api/v1/sessions`, {
+      method: "POST",
+      headers: { "content-type": "application/json", origin: BASE },
+      body: JSON.stringify({ email, password: TEST_PASSWORD }),
+    });
+    expect(signIn.status).toBe(200);
+    const cookie = signIn.headers.get("set-cookie")!.split(";")[0];
+    const me = () => fetch(`${BASE}/api/v1/me`, { headers: { cookie } });
+    expect((await me()).status).toBe(200);
+
+    await stopServer();
+    await expect(me()).rejects.toThrow(); // really down
+    await startServer();
+    const after = await me();
+    expect(after.status).toBe(200);
+    expect((await after.json()).email).toBe(email);
+  }, 90_000);
+});
