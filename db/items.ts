@@ -254,6 +254,8 @@ export async function ownersOf(organisationId: string): Promise<{ email: string;
 
 export async function recordTagLookup(ip: string, found: boolean) {
   await db("tag_lookups").insert({ ip, found });
+  // Only the last few minutes matter for the limit: drop this address's older rows.
+  await db("tag_lookups").where({ ip }).where("at", "<", db.raw("now() - interval '1 day'")).delete();
 }
 
 export async function recentTagMisses(ip: string, since: Date): Promise<number> {

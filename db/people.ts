@@ -184,6 +184,8 @@ export async function markPasswordResetUsed(id: string, trx: Knex = db) {
 
 export async function recordSignInAttempt(email: string, ip: string, succeeded: boolean) {
   await db("sign_in_attempts").insert({ email, ip, succeeded });
+  // The throttle looks back minutes, not days: keep the table small.
+  await db("sign_in_attempts").where({ email }).where("at", "<", db.raw("now() - interval '1 day'")).delete();
 }
 
 /** Failures for this e-mail since its last success, and for this address, within the window. */
