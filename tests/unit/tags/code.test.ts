@@ -15,10 +15,13 @@ describe("tag codes", () => {
     }
   });
 
-  it("do not repeat in 100,000 draws", () => {
+  it("rarely repeat: about as often as 23^8 random codes should", () => {
+    // Birthday bound: 100,000 draws from 23^8 ≈ 7.8e10 codes give n²/2N ≈ 0.064 expected
+    // repeats, so three or more (p ≈ 4e-5) would mean the draw is not uniform. The app
+    // still checks every new code against stock (freshTagCode) and the column is unique.
     const seen = new Set<string>();
     for (let i = 0; i < 100_000; i++) seen.add(newTagCode());
-    expect(seen.size).toBe(100_000);
+    expect(100_000 - seen.size).toBeLessThanOrEqual(2);
   });
 
   it("are spread evenly over the alphabet (not sequential)", () => {
