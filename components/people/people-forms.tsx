@@ -18,7 +18,7 @@ export function InviteForm() {
       <Field label="E-mail" name="email" type="email" defaultValue={state.ok ? "" : state.values?.email} error={state.fieldErrors?.email} />
       <SelectField label="Role" name="role" options={roleOptions} defaultValue={state.values?.role ?? "yard_hand"} error={state.fieldErrors?.role} />
       <label className="flex min-h-tap items-center gap-3 text-lg">
-        <input type="checkbox" name="designated" className="h-6 w-6" />
+        <input type="checkbox" name="designated" className="h-6 w-6 shrink-0" />
         Designated person (may do periodic inspections and return gear to service)
       </label>
       <SubmitButton pendingLabel="Sending…">Send invite</SubmitButton>
@@ -45,12 +45,12 @@ export function PersonRow({
         <input type="hidden" name="userId" value={person.id} />
         <SelectField label={`Role of ${person.name}`} name="role" id={`role-${person.id}`} options={roleOptions} defaultValue={person.role} error={state.fieldErrors?.role} />
         <label className="flex min-h-tap items-center gap-3 text-lg">
-          <input type="checkbox" name="designated" defaultChecked={person.designated} className="h-6 w-6" />
+          <input type="checkbox" name="designated" defaultChecked={person.designated} className="h-6 w-6 shrink-0" />
           Designated person
         </label>
         {!isSelf && (
           <label className="flex min-h-tap items-center gap-3 text-lg">
-            <input type="checkbox" name="disabled" defaultChecked={person.disabled} className="h-6 w-6" />
+            <input type="checkbox" name="disabled" defaultChecked={person.disabled} className="h-6 w-6 shrink-0" />
             Disabled (cannot sign in)
           </label>
         )}

@@ -16,7 +16,7 @@ export function OrganisationForm({ name, publicTagView }: { name: string; public
       <FormAlert state={state} />
       <Field label="Company name" name="name" defaultValue={state.values?.name ?? name} error={state.fieldErrors?.name} />
       <label className="flex min-h-tap items-start gap-3 text-lg">
-        <input type="checkbox" name="publicTagView" defaultChecked={publicTagView} className="mt-1 h-6 w-6" />
+        <input type="checkbox" name="publicTagView" defaultChecked={publicTagView} className="mt-1 h-6 w-6 shrink-0" />
         <span>
           Public tag view: someone without an account who scans a tag (a roadside inspector) sees only the
           kind, grade, size, WLL, status and the date of the last inspection.

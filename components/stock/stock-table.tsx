@@ -37,10 +37,10 @@ const columns: ColumnDef<ItemSummaryJson>[] = [
     id: "select",
     enableSorting: false,
     header: ({ table }) => (
-      <input type="checkbox" aria-label="Select all on this page" className="h-6 w-6" checked={table.getIsAllPageRowsSelected()} onChange={table.getToggleAllPageRowsSelectedHandler()} />
+      <input type="checkbox" aria-label="Select all on this page" className="h-6 w-6 shrink-0" checked={table.getIsAllPageRowsSelected()} onChange={table.getToggleAllPageRowsSelectedHandler()} />
     ),
     cell: ({ row }) => (
-      <input type="checkbox" aria-label={`Select ${row.original.tagCode}`} className="h-6 w-6" checked={row.getIsSelected()} onChange={row.getToggleSelectedHandler()} />
+      <input type="checkbox" aria-label={`Select ${row.original.tagCode}`} className="h-6 w-6 shrink-0" checked={row.getIsSelected()} onChange={row.getToggleSelectedHandler()} />
     ),
   },
   {
