@@ -12,6 +12,7 @@ import Link from "next/link";
 import { usePathname, useRouter, useSearchParams } from "next/navigation";
 import { useMemo, useState } from "react";
 import { StatusBadge } from "@/components/ui/status-badge";
+import { apiJson } from "@/lib/http/client";
 import { ITEM_KINDS, ITEM_STATUSES, KIND_LABELS, STATUS_LABELS, type ItemStatus } from "@/lib/stock/labels";
 import type { ItemSummaryJson } from "@/lib/stock/summary";
 
@@ -23,12 +24,6 @@ interface Page {
 
 const FILTER_KEYS = ["kind", "status", "yardId", "due", "q"] as const;
 
-async function fetchJson<T>(url: string, init?: RequestInit): Promise<T> {
-  const res = await fetch(url, { ...init, headers: { "content-type": "application/json", ...init?.headers } });
-  const body = await res.json().catch(() => ({}));
-  if (!res.ok) throw new Error(body.error ?? `The server answered ${res.status}.`);
-  return body as T;
-}
 
 const lb = (n: number | null) => (n == null ? "not rated" : `${n.toLocaleString("en-US")} lb`);
 
@@ -84,7 +79,7 @@ export function StockTable({ yards, canEdit, canExport = false }: { yards: { id:
 
   const { data, isFetching, error } = useQuery({
     queryKey: ["items", query],
-    queryFn: () => fetchJson<Page>(`/api/v1/items?${query}`),
+    queryFn: () => apiJson<Page>(`/api/v1/items?${query}`),
     placeholderData: keepPreviousData,
   });
 
@@ -237,7 +232,7 @@ function Filter({ label, value, onChange, options }: { label: string; value: str
 
 function BulkMove({ ids, yards, onDone }: { ids: string[]; yards: { id: string; name: string }[]; onDone: () => void }) {
   const [yardId, setYardId] = useState(yards[0]?.id ?? "");
-  const move = useMutation({ mutationFn: () => fetchJson<{ moved: number }>("/api/v1/items/move", { method: "POST", body: JSON.stringify({ itemIds: ids, yardId }) }), onSuccess: onDone });
+  const move = useMutation({ mutationFn: () => apiJson<{ moved: number }>("/api/v1/items/move", { method: "POST", body: JSON.stringify({ itemIds: ids, yardId }) }), onSuccess: onDone });
   return (
     <div className="flex flex-wrap items-end gap-2">
       <label className="flex flex-col gap-1 text-base font-bold">
@@ -260,7 +255,7 @@ function BulkTagOut({ ids, onDone }: { ids: string[]; onDone: () => void }) {
       const failed: string[] = [];
       for (const id of ids) {
         try {
-          await fetchJson(`/api/v1/items/${id}/events`, { method: "POST", body: JSON.stringify({ type: "tag_out", note }) });
+          await apiJson(`/api/v1/items/${id}/events`, { method: "POST", body: JSON.stringify({ type: "tag_out", note }) });
         } catch (e) {
           failed.push((e as Error).message);
         }
