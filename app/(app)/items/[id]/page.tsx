@@ -1,14 +1,12 @@
 import type { Metadata } from "next";
 import Link from "next/link";
-import { notFound } from "next/navigation";
 import { EventList } from "@/components/items/event-list";
 import { CertificateForm, ReasonForm, TagOutForm } from "@/components/items/item-forms";
 import { UsabilityBanner } from "@/components/items/usability-banner";
 import { StatusBadge } from "@/components/ui/status-badge";
-import { getItem, listEvents } from "@/db/items";
+import { listEvents } from "@/db/items";
 import { can } from "@/lib/auth/roles";
-import { requirePage } from "@/lib/auth/session";
-import { isUuid } from "@/lib/http/ids";
+import { requireItemPage } from "@/lib/stock/page-item";
 import type { ItemKind, ItemStatus } from "@/lib/stock/labels";
 import { itemRating } from "@/lib/stock/rating";
 import { describeItem, sizeLabel } from "@/lib/stock/summary";
@@ -28,11 +26,7 @@ function Fact({ label, children }: { label: string; children: React.ReactNode })
 }
 
 export default async function ItemPage({ params }: { params: Promise<{ id: string }> }) {
-  const principal = await requirePage("stock.view");
-  const { id } = await params;
-  if (!isUuid(id)) notFound();
-  const item = await getItem(principal.organisationId, id);
-  if (!item) notFound();
+  const { principal, id, item } = await requireItemPage("stock.view", params);
   const events = await listEvents(principal.organisationId, id);
   const status = item.status as ItemStatus;
   const rating = itemRating({ kind: item.kind as ItemKind, grade: item.grade, gradeMarked: item.gradeMarked, size: item.size, markedWllLb: item.markedWllLb, details: item.details });

@@ -1,11 +1,8 @@
 import type { Metadata } from "next";
 import Link from "next/link";
-import { notFound } from "next/navigation";
 import { PreUseCheckForm } from "@/components/items/item-forms";
 import { UsabilityBanner } from "@/components/items/usability-banner";
-import { getItem } from "@/db/items";
-import { requirePage } from "@/lib/auth/session";
-import { isUuid } from "@/lib/http/ids";
+import { requireItemPage } from "@/lib/stock/page-item";
 import { PRE_USE_CHECKLISTS } from "@/lib/stock/checklists";
 import type { ItemKind, ItemStatus } from "@/lib/stock/labels";
 import { describeItem } from "@/lib/stock/summary";
@@ -13,11 +10,7 @@ import { describeItem } from "@/lib/stock/summary";
 export const metadata: Metadata = { title: "Pre-use check" };
 
 export default async function PreUseCheckPage({ params }: { params: Promise<{ id: string }> }) {
-  const principal = await requirePage("items.check");
-  const { id } = await params;
-  if (!isUuid(id)) notFound();
-  const item = await getItem(principal.organisationId, id);
-  if (!item) notFound();
+  const { id, item } = await requireItemPage("items.check", params);
   return (
     <div className="flex max-w-xl flex-col gap-4">
       <Link href={`/items/${id}`} className="text-lg underline">← {item.tagCode}</Link>

@@ -1,20 +1,14 @@
 import type { Metadata } from "next";
 import Link from "next/link";
-import { notFound } from "next/navigation";
 import { ItemForm, type ItemFormValues } from "@/components/items/item-form";
-import { getItem, listYards } from "@/db/items";
-import { requirePage } from "@/lib/auth/session";
-import { isUuid } from "@/lib/http/ids";
+import { listYards } from "@/db/items";
+import { requireItemPage } from "@/lib/stock/page-item";
 import type { ItemKind } from "@/lib/stock/labels";
 
 export const metadata: Metadata = { title: "Edit item" };
 
 export default async function EditItemPage({ params }: { params: Promise<{ id: string }> }) {
-  const principal = await requirePage("stock.edit");
-  const { id } = await params;
-  if (!isUuid(id)) notFound();
-  const item = await getItem(principal.organisationId, id);
-  if (!item) notFound();
+  const { principal, id, item } = await requireItemPage("stock.edit", params);
   const d = item.details as { mechanism?: string; chainSizeRange?: [string, string]; ends?: string };
   const initial: ItemFormValues = {
     kind: item.kind as ItemKind,

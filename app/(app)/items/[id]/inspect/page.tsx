@@ -1,10 +1,7 @@
 import type { Metadata } from "next";
 import Link from "next/link";
-import { notFound } from "next/navigation";
 import { InspectionForm } from "@/components/items/item-forms";
-import { getItem } from "@/db/items";
-import { requirePage } from "@/lib/auth/session";
-import { isUuid } from "@/lib/http/ids";
+import { requireItemPage } from "@/lib/stock/page-item";
 import { PRE_USE_CHECKLISTS } from "@/lib/stock/checklists";
 import { MEASUREMENTS } from "@/lib/stock/inspection";
 import type { ItemKind } from "@/lib/stock/labels";
@@ -13,11 +10,7 @@ import { describeItem } from "@/lib/stock/summary";
 export const metadata: Metadata = { title: "Periodic inspection" };
 
 export default async function InspectionPage({ params }: { params: Promise<{ id: string }> }) {
-  const principal = await requirePage("items.inspect");
-  const { id } = await params;
-  if (!isUuid(id)) notFound();
-  const item = await getItem(principal.organisationId, id);
-  if (!item) notFound();
+  const { id, item } = await requireItemPage("items.inspect", params);
   const kind = item.kind as ItemKind;
   return (
     <div className="flex max-w-xl flex-col gap-4">
