@@ -107,8 +107,8 @@ export async function getItem(organisationId: string, id: string, trx: Knex = db
   return base(trx).where({ "i.organisation_id": organisationId, "i.id": id }).first(SUMMARY_COLUMNS);
 }
 
-export async function getItemsByIds(organisationId: string, ids: string[]): Promise<ItemSummary[]> {
-  return base().where("i.organisation_id", organisationId).whereIn("i.id", ids).orderBy("i.tag_code").select(SUMMARY_COLUMNS);
+export async function getItemsByIds(organisationId: string, ids: string[], trx: Knex = db): Promise<ItemSummary[]> {
+  return base(trx).where("i.organisation_id", organisationId).whereIn("i.id", ids).orderBy("i.tag_code").select(SUMMARY_COLUMNS);
 }
 
 /** By printed tag code, in any organisation (callers check the organisation). */
@@ -135,6 +135,10 @@ export async function insertItem(row: ItemRow, trx: Knex): Promise<string> {
 
 export async function updateItem(organisationId: string, id: string, patch: ItemRow, trx: Knex): Promise<void> {
   await trx("items").where({ organisation_id: organisationId, id }).update({ ...patch, updated_at: trx.fn.now() });
+}
+
+export async function setYard(organisationId: string, ids: string[], yardId: string, trx: Knex): Promise<void> {
+  await trx("items").where({ organisation_id: organisationId }).whereIn("id", ids).update({ yard_id: yardId, updated_at: trx.fn.now() });
 }
 
 /** Locks an item row for a state change (check, tag-out, inspection) inside a transaction. */

@@ -103,14 +103,13 @@ export async function moveItems(actor: Principal, itemIds: string[], yardId: str
   return db.transaction(async (trx) => {
     if (!(await items.yardBelongs(actor.organisationId, yardId, trx))) throw fieldError("yardId", "Choose a yard from the list.");
     const yard = await trx("yards").where({ id: yardId }).first("name");
-    let moved = 0;
-    for (const id of itemIds) {
-      const before = await items.getItem(actor.organisationId, id, trx);
-      if (!before || before.yardId === yardId) continue;
-      await items.updateItem(actor.organisationId, id, { yard_id: yardId }, trx);
-      await items.insertEvent({ organisationId: actor.organisationId, itemId: id, type: "moved", actorId: actor.userId, changes: { yardName: [before.yardName, yard.name] } }, trx);
-      moved++;
+    // One read and one update for the whole selection; ids of other organisations drop out here.
+    const toMove = (await items.getItemsByIds(actor.organisationId, itemIds, trx)).filter((i) => i.yardId !== yardId);
+    if (toMove.length) await items.setYard(actor.organisationId, toMove.map((i) => i.id), yardId, trx);
+    for (const before of toMove) {
+      await items.insertEvent({ organisationId: actor.organisationId, itemId: before.id, type: "moved", actorId: actor.userId, changes: { yardName: [before.yardName, yard.name] } }, trx);
     }
+    const moved = toMove.length;
     await writeAudit({ organisationId: actor.organisationId, actorId: actor.userId, action: "items.moved", entity: "yard", entityId: yardId, after: { itemIds, moved } }, trx);
     return moved;
   });

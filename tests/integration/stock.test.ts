@@ -95,6 +95,27 @@ describe("adding stock", () => {
   });
 });
 
+describe("moving stock", () => {
+  it("moves a selection in one go, records each move, and skips another organisation's items", async () => {
+    const [north] = await testDb("yards").insert({ organisation_id: org.organisationId, name: `North ${Date.now()}` }).returning("id");
+    const a = await newChain({ yardId });
+    const b = await newChain({ yardId });
+    const stranger = await newOrganisation();
+    const theirs = (await stranger.owner.post("/api/v1/items", CHAIN)).json;
+    const res = await planner.post("/api/v1/items/move", { itemIds: [a.id, b.id, theirs.id], yardId: north.id });
+    expect(res.status).toBe(200);
+    expect(res.json.moved).toBe(2);
+    for (const id of [a.id, b.id]) {
+      expect((await hand.get(`/api/v1/items/${id}`)).json.yard.id).toBe(north.id);
+      const [moved] = (await hand.get(`/api/v1/items/${id}/events`)).json.data;
+      expect(moved).toMatchObject({ type: "moved", changes: { yardName: ["Main yard", expect.stringMatching(/^North /)] } });
+    }
+    expect((await testDb("items").where({ id: theirs.id }).first("yard_id")).yard_id).toBeNull();
+    const again = await planner.post("/api/v1/items/move", { itemIds: [a.id], yardId: north.id });
+    expect(again.json.moved).toBe(0); // already there: no event
+  });
+});
+
 describe("the stock list", () => {
   it("pages, filters and searches on the server", async () => {
     const a = await newChain({ serial: `FIND-${Date.now()}` });
