@@ -2,6 +2,8 @@ import type { Knex } from "knex";
 import { db } from "./index";
 import type { Role } from "@/lib/auth/roles";
 
+// API tokens: bearer secrets for integrations. Only the hash of a secret is stored.
+
 export async function insertApiToken(
   t: { organisationId: string; createdBy: string; name: string; role: Role; tokenHash: string },
   trx: Knex = db,
@@ -22,4 +24,27 @@ export async function listApiTokens(organisationId: string) {
 
 export async function revokeApiToken(organisationId: string, id: string, trx: Knex = db): Promise<number> {
   return trx("api_tokens").where({ organisation_id: organisationId, id }).whereNull("revoked_at").update({ revoked_at: trx.fn.now() });
+}
+
+/** A live token by the hash of its secret, with the person who made it (who must not be disabled). */
+export interface ActiveApiToken {
+  id: string;
+  organisationId: string;
+  role: Role;
+  userId: string;
+  name: string;
+  email: string;
+}
+
+export async function findActiveApiToken(tokenHash: string): Promise<ActiveApiToken | undefined> {
+  return db("api_tokens as t")
+    .join("users as u", "u.id", "t.created_by")
+    .where("t.token_hash", tokenHash)
+    .whereNull("t.revoked_at")
+    .whereNull("u.disabled_at")
+    .first("t.id", "t.organisation_id as organisationId", "t.role", "u.id as userId", "u.name", "u.email");
+}
+
+export async function markApiTokenUsed(id: string): Promise<void> {
+  await db("api_tokens").where({ id }).update({ last_used_at: db.fn.now() });
 }

@@ -2,7 +2,7 @@ import "server-only";
 import { cache } from "react";
 import { cookies } from "next/headers";
 import { forbidden, redirect } from "next/navigation";
-import { db } from "@/db";
+import { findActiveApiToken, markApiTokenUsed } from "@/db/api-tokens";
 import { lucia } from "./lucia";
 import { can, type Permission, type Role } from "./roles";
 import { hashSecret } from "./secrets";
@@ -61,21 +61,16 @@ export async function principalFromRequest(request: Request): Promise<Principal 
 
 async function principalFromApiToken(secret: string): Promise<Principal | null> {
   if (!secret) return null;
-  const row = await db("api_tokens as t")
-    .join("users as u", "u.id", "t.created_by")
-    .where("t.token_hash", hashSecret(secret))
-    .whereNull("t.revoked_at")
-    .whereNull("u.disabled_at")
-    .first("t.id", "t.organisation_id", "t.role", "u.id as user_id", "u.name", "u.email");
-  if (!row) return null;
-  await db("api_tokens").where({ id: row.id }).update({ last_used_at: db.fn.now() });
+  const token = await findActiveApiToken(hashSecret(secret));
+  if (!token) return null;
+  await markApiTokenUsed(token.id);
   return {
-    userId: row.user_id,
-    organisationId: row.organisation_id,
-    role: row.role,
+    userId: token.userId,
+    organisationId: token.organisationId,
+    role: token.role,
     designated: false,
-    name: `${row.name} (API token)`,
-    email: row.email,
+    name: `${token.name} (API token)`,
+    email: token.email,
     via: "token",
   };
 }
