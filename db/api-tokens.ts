@@ -32,6 +32,8 @@ export interface ActiveApiToken {
   organisationId: string;
   role: Role;
   userId: string;
+  /** The maker's role now: the token never acts above it. */
+  creatorRole: Role;
   name: string;
   email: string;
 }
@@ -42,9 +44,18 @@ export async function findActiveApiToken(tokenHash: string): Promise<ActiveApiTo
     .where("t.token_hash", tokenHash)
     .whereNull("t.revoked_at")
     .whereNull("u.disabled_at")
-    .first("t.id", "t.organisation_id as organisationId", "t.role", "u.id as userId", "u.name", "u.email");
+    .first("t.id", "t.organisation_id as organisationId", "t.role", "u.id as userId", "u.role as creatorRole", "u.name", "u.email");
 }
 
 export async function markApiTokenUsed(id: string): Promise<void> {
   await db("api_tokens").where({ id }).update({ last_used_at: db.fn.now() });
+}
+
+/** The live tokens a person made, for capping or revoking them when the person changes. */
+export async function liveApiTokensOf(organisationId: string, userId: string, trx: Knex = db): Promise<{ id: string; role: Role }[]> {
+  return trx("api_tokens").where({ organisation_id: organisationId, created_by: userId }).whereNull("revoked_at").orderBy("created_at").select("id", "role");
+}
+
+export async function setApiTokenRole(organisationId: string, id: string, role: Role, trx: Knex = db): Promise<void> {
+  await trx("api_tokens").where({ organisation_id: organisationId, id }).update({ role });
 }

@@ -7,6 +7,7 @@ import { config } from "@/lib/config";
 import { conflict, fieldError, forbidden, gone, notFound, tooManyRequests, unauthorized } from "@/lib/http/errors";
 import { inviteMail, passwordResetMail } from "@/lib/mail/templates";
 import { sendMail } from "@/lib/mail/send";
+import { capTokensOf, revokeTokensOf } from "./api-tokens";
 import type { Role } from "./roles";
 import { can } from "./roles";
 import { hashPassword, hashSecret, newSecret, verifyPassword } from "./secrets";
@@ -153,7 +154,9 @@ export async function resetPassword(input: { token: string; password: string }):
     await people.markPasswordResetUsed(reset.id, trx);
     await people.deleteSessionsOf(reset.userId, trx); // sign out everywhere else
     const user = await trx("users").where({ id: reset.userId }).first("organisation_id");
-    await writeAudit({ organisationId: user.organisation_id, actorId: reset.userId, action: "person.password_reset", entity: "user", entityId: reset.userId }, trx);
+    const change = { organisationId: user.organisation_id, actorId: reset.userId };
+    await revokeTokensOf(change, reset.userId, "password reset", trx); // a token must not outlive the password it was made under
+    await writeAudit({ ...change, action: "person.password_reset", entity: "user", entityId: reset.userId }, trx);
     return reset.userId as string;
   });
 }
@@ -172,7 +175,12 @@ export async function updatePerson(
       throw fieldError("role", "The organisation needs at least one active owner.");
     }
     await people.updatePerson(actor.organisationId, userId, patch, trx);
-    if (patch.disabled) await people.deleteSessionsOf(userId, trx);
+    // A person's API tokens never act above the person: disabled, they stop; demoted, they are capped.
+    const change = { organisationId: actor.organisationId, actorId: actor.userId };
+    if (patch.disabled) {
+      await people.deleteSessionsOf(userId, trx);
+      await revokeTokensOf(change, userId, "person disabled", trx);
+    } else if (patch.role) await capTokensOf(change, userId, patch.role, trx);
     const after = await people.getPerson(actor.organisationId, userId, trx);
     await writeAudit({ organisationId: actor.organisationId, actorId: actor.userId, action: "person.updated", entity: "user", entityId: userId, before, after }, trx);
   });

@@ -53,6 +53,17 @@ export function can(actor: Actor, permission: Permission): boolean {
   return actor.designated && DESIGNATED_GRANTS.includes(permission);
 }
 
+/** How much a role may do: each role may do all that a lower one may (see GRANTS). */
+const RANK: Record<Role, number> = { yard_hand: 0, planner: 1, owner: 2 };
+
+/**
+ * The lesser of two roles: what an API token acts as, given its own role and its maker's.
+ * @example lowerRole("owner", "yard_hand") // "yard_hand"
+ */
+export function lowerRole(a: Role, b: Role): Role {
+  return RANK[a] <= RANK[b] ? a : b;
+}
+
 export function isRole(value: unknown): value is Role {
   return typeof value === "string" && (ROLES as readonly string[]).includes(value);
 }

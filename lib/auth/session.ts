@@ -4,7 +4,7 @@ import { cookies } from "next/headers";
 import { forbidden, redirect } from "next/navigation";
 import { findActiveApiToken, markApiTokenUsed } from "@/db/api-tokens";
 import { lucia } from "./lucia";
-import { can, type Permission, type Role } from "./roles";
+import { can, lowerRole, type Permission, type Role } from "./roles";
 import { hashSecret } from "./secrets";
 
 /** Who is asking, as every route and action sees it. */
@@ -67,7 +67,8 @@ async function principalFromApiToken(secret: string): Promise<Principal | null> 
   return {
     userId: token.userId,
     organisationId: token.organisationId,
-    role: token.role,
+    // A token never acts above its maker's current role (a demotion caps it at once).
+    role: lowerRole(token.role, token.creatorRole),
     designated: false,
     name: `${token.name} (API token)`,
     email: token.email,

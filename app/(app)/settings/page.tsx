@@ -24,7 +24,7 @@ export default async function SettingsPage() {
         <h2 id="tokens-heading" className="text-xl font-bold">API tokens</h2>
         <p className="text-base">
           For integrations: send <code className="font-mono">Authorization: Bearer &lt;token&gt;</code> to{" "}
-          <code className="font-mono">/api/v1/…</code>. A token acts with the role you choose.
+          <code className="font-mono">/api/v1/…</code>. A token acts with the role you choose, never above your own role: if your role is lowered, your tokens are lowered with it, and if you are disabled or reset your password, they stop working.
         </p>
         <ul className="flex flex-col gap-2">
           {tokens.map((t) => (

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { can, isRole, type Permission, type Role } from "@/lib/auth/roles";
+import { can, isRole, lowerRole, ROLES, type Permission, type Role } from "@/lib/auth/roles";
 
 // The matrix as the product's domain notes state it (owner / planner / yard hand), written
 // out literally here so that a change to lib/auth/roles.ts has to be made on purpose.
@@ -41,5 +41,22 @@ describe("isRole", () => {
     expect(isRole("planner")).toBe(true);
     expect(isRole("admin")).toBe(false);
     expect(isRole(undefined)).toBe(false);
+  });
+});
+
+describe("lowerRole", () => {
+  it.each([
+    ["owner", "owner", "owner"],
+    ["owner", "planner", "planner"],
+    ["planner", "owner", "planner"],
+    ["owner", "yard_hand", "yard_hand"],
+    ["yard_hand", "planner", "yard_hand"],
+  ] as [Role, Role, Role][])("%s and %s: %s", (a, b, lower) => expect(lowerRole(a, b)).toBe(lower));
+
+  it("never grants a permission that either role lacks", () => {
+    for (const a of ROLES) for (const b of ROLES) for (const p of Object.keys(EXPECTED) as Permission[]) {
+      const low = { role: lowerRole(a, b), designated: false };
+      if (can(low, p)) expect(can({ role: a, designated: false }, p) && can({ role: b, designated: false }, p)).toBe(true);
+    }
   });
 });
