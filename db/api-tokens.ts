@@ -14,7 +14,7 @@ export async function insertApiToken(
   return row.id;
 }
 
-export async function listApiTokens(organisationId: string) {
+export async function listApiTokens(organisationId: string): Promise<{ id: string; name: string; role: Role; createdAt: Date; lastUsedAt: Date | null }[]> {
   return db("api_tokens")
     .where({ organisation_id: organisationId })
     .whereNull("revoked_at")

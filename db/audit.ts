@@ -24,6 +24,35 @@ export async function writeAudit(entry: AuditEntry, trx: Knex = db): Promise<voi
   });
 }
 
+/** Who makes a change: a principal fits. */
+export interface AuditActor {
+  organisationId: string;
+  userId: string | null;
+}
+
+/** What an audit row says; the organisation and the actor come from the change unless given. */
+export type AuditFact = Omit<AuditEntry, "organisationId" | "actorId"> & Partial<Pick<AuditEntry, "organisationId" | "actorId">>;
+
+/** Writes an audit row in the transaction of the change it records. */
+export type Audit = (fact: AuditFact) => Promise<void>;
+
+/**
+ * The one way a change is written: one transaction, in which the work writes its audit rows
+ * through `audit`, so a change and its record commit or roll back together. The actor is
+ * null when the change comes from an e-mailed link: each fact then names who and where.
+ * @example await audited(actor, async (tx, audit) => { await updateThing(tx); await audit({ action: "thing.updated", entity: "thing" }); })
+ */
+export function audited<T>(actor: AuditActor | null, work: (tx: Knex.Transaction, audit: Audit) => Promise<T>): Promise<T> {
+  return db.transaction((tx) =>
+    work(tx, async (fact) => {
+      const organisationId = fact.organisationId ?? actor?.organisationId;
+      // Without an actor (a link from an e-mail), each fact names its organisation.
+      if (!organisationId) throw new Error(`audit row "${fact.action}" without an organisation`);
+      await writeAudit({ actorId: actor?.userId ?? null, ...fact, organisationId }, tx);
+    }),
+  );
+}
+
 export async function listAudit(organisationId: string, limit = 100) {
   return db("audit_log as a")
     .leftJoin("users as u", "u.id", "a.actor_id")

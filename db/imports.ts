@@ -1,7 +1,6 @@
 import type { Knex } from "knex";
 import type { ExistingItem } from "@/lib/import/row";
 import type { ItemKind } from "@/lib/stock/labels";
-import { writeAudit } from "./audit";
 import { db } from "./index";
 
 // CSV import batches, the values an import replaced, saved column mappings, and the bulk
@@ -225,23 +224,17 @@ export async function listMappings(organisationId: string) {
   return db("import_mappings").where({ organisation_id: organisationId }).orderBy("name").select("id", "name", "mapping", "updated_at as updatedAt");
 }
 
-/** Saves a mapping by name (one of the same name is replaced), with its audit row. */
-export async function saveMapping(organisationId: string, name: string, mapping: unknown, userId: string): Promise<string> {
-  return db.transaction(async (trx) => {
-    const [row] = await trx("import_mappings")
-      .insert({ organisation_id: organisationId, name, mapping: JSON.stringify(mapping), created_by: userId })
-      .onConflict(["organisation_id", "name"])
-      .merge({ mapping: JSON.stringify(mapping), updated_at: trx.fn.now() })
-      .returning("id");
-    await writeAudit({ organisationId, actorId: userId, action: "import_mapping.saved", entity: "import_mapping", entityId: row.id, after: { name, mapping } }, trx);
-    return row.id;
-  });
+/** Saves a mapping by name: one of the same name is replaced. Answers its id. */
+export async function upsertMapping(organisationId: string, name: string, mapping: unknown, userId: string, trx: Knex): Promise<string> {
+  const [row] = await trx("import_mappings")
+    .insert({ organisation_id: organisationId, name, mapping: JSON.stringify(mapping), created_by: userId })
+    .onConflict(["organisation_id", "name"])
+    .merge({ mapping: JSON.stringify(mapping), updated_at: trx.fn.now() })
+    .returning("id");
+  return row.id;
 }
 
-export async function deleteMapping(organisationId: string, id: string, userId: string): Promise<boolean> {
-  return db.transaction(async (trx) => {
-    const gone = await trx("import_mappings").where({ organisation_id: organisationId, id }).delete();
-    if (gone) await writeAudit({ organisationId, actorId: userId, action: "import_mapping.deleted", entity: "import_mapping", entityId: id }, trx);
-    return gone > 0;
-  });
+/** Removes a saved mapping; answers whether there was one. */
+export async function deleteMapping(organisationId: string, id: string, trx: Knex): Promise<boolean> {
+  return (await trx("import_mappings").where({ organisation_id: organisationId, id }).delete()) > 0;
 }

@@ -137,6 +137,11 @@ export async function updateItem(organisationId: string, id: string, patch: Item
   await trx("items").where({ organisation_id: organisationId, id }).update({ ...patch, updated_at: trx.fn.now() });
 }
 
+/** A pre-use check's change: the new status, and the time of the check (the database's clock). */
+export async function setCheckedStatus(organisationId: string, id: string, status: string, trx: Knex): Promise<void> {
+  await updateItem(organisationId, id, { status, last_checked_at: trx.fn.now() }, trx);
+}
+
 export async function setYard(organisationId: string, ids: string[], yardId: string, trx: Knex): Promise<void> {
   await trx("items").where({ organisation_id: organisationId }).whereIn("id", ids).update({ yard_id: yardId, updated_at: trx.fn.now() });
 }
@@ -177,6 +182,11 @@ export async function insertEvent(e: ItemEventInput, trx: Knex): Promise<number>
     })
     .returning("id");
   return Number(row.id);
+}
+
+/** Whether an item has a history entry of that id (in the organisation). */
+export async function eventExists(organisationId: string, itemId: string, eventId: number, trx: Knex = db): Promise<boolean> {
+  return Boolean(await trx("item_events").where({ organisation_id: organisationId, item_id: itemId, id: eventId }).first("id"));
 }
 
 export async function listEvents(organisationId: string, itemId: string) {
@@ -227,7 +237,12 @@ export async function listYards(organisationId: string) {
 }
 
 export async function yardBelongs(organisationId: string, yardId: string, trx: Knex = db) {
-  return Boolean(await trx("yards").where({ organisation_id: organisationId, id: yardId }).first("id"));
+  return Boolean(await getYard(organisationId, yardId, trx));
+}
+
+/** A yard of the organisation, or undefined. */
+export async function getYard(organisationId: string, yardId: string, trx: Knex = db): Promise<{ id: string; name: string } | undefined> {
+  return trx("yards").where({ organisation_id: organisationId, id: yardId }).first("id", "name");
 }
 
 // Dashboard counts

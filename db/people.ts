@@ -2,7 +2,7 @@ import type { Knex } from "knex";
 import { db } from "./index";
 import type { Role } from "@/lib/auth/roles";
 
-// Queries about organisations, people, invites, resets and sign-in attempts.
+// Queries about people, invites, resets and sign-in attempts.
 // Each returns a shape made for its caller, never a row with a password hash in it
 // (except findCredentials, which only the sign-in code calls).
 
@@ -20,26 +20,6 @@ const personColumns = [
   "id", "name", "email", "role", "designated",
   db.raw("disabled_at is not null as disabled"), "created_at as createdAt",
 ];
-
-export async function createOrganisation(name: string, trx: Knex = db): Promise<string> {
-  const [row] = await trx("organisations").insert({ name }).returning("id");
-  return row.id;
-}
-
-export async function getOrganisation(id: string) {
-  return db("organisations").where({ id }).first("id", "name", "public_tag_view as publicTagView");
-}
-
-export async function getOrganisationSettings(id: string) {
-  return db("organisations").where({ id }).first("inspection_interval_days as inspectionIntervalDays");
-}
-
-export async function updateOrganisation(id: string, patch: { name?: string; publicTagView?: boolean }, trx: Knex = db) {
-  await trx("organisations").where({ id }).update({
-    ...(patch.name !== undefined && { name: patch.name }),
-    ...(patch.publicTagView !== undefined && { public_tag_view: patch.publicTagView }),
-  });
-}
 
 export async function insertUser(
   user: { id: string; organisationId: string; email: string; name: string; role: Role; designated?: boolean; passwordHash: string },
@@ -103,6 +83,12 @@ export async function updatePerson(
     });
 }
 
+/** The organisation of a person (a reset link names the person only). */
+export async function organisationOf(userId: string, trx: Knex = db): Promise<string> {
+  const row = await trx("users").where({ id: userId }).first("organisation_id");
+  return row.organisation_id;
+}
+
 export async function setPassword(userId: string, passwordHash: string, trx: Knex = db) {
   await trx("users").where({ id: userId }).update({ password_hash: passwordHash });
 }
@@ -139,6 +125,17 @@ export async function findInviteByTokenHash(tokenHash: string, trx: Knex = db) {
       "i.id", "i.organisation_id as organisationId", "i.email", "i.role", "i.designated",
       "i.expires_at as expiresAt", "i.accepted_at as acceptedAt", "i.revoked_at as revokedAt",
       "o.name as organisationName",
+    );
+}
+
+/** The invite a link names, locked until its acceptance commits (a link is used once). */
+export async function lockInviteByTokenHash(tokenHash: string, trx: Knex) {
+  return trx("invites")
+    .where({ token_hash: tokenHash })
+    .forUpdate()
+    .first<{ id: string; organisationId: string; email: string; role: Role; designated: boolean; expiresAt: Date; acceptedAt: Date | null; revokedAt: Date | null } | undefined>(
+      "id", "organisation_id as organisationId", "email", "role", "designated",
+      "expires_at as expiresAt", "accepted_at as acceptedAt", "revoked_at as revokedAt",
     );
 }
 

@@ -1,5 +1,5 @@
 import { AppShell } from "@/components/shell/app-shell";
-import { getOrganisation } from "@/db/people";
+import { getOrganisation } from "@/db/organisations";
 import { requirePage } from "@/lib/auth/session";
 
 export default async function AppLayout({ children }: { children: React.ReactNode }) {

@@ -1,7 +1,8 @@
 import "server-only";
+import { randomUUID } from "node:crypto";
 import { generateIdFromEntropySize } from "lucia";
-import { db } from "@/db";
-import { writeAudit } from "@/db/audit";
+import { audited } from "@/db/audit";
+import { createOrganisation, getOrganisation } from "@/db/organisations";
 import * as people from "@/db/people";
 import { config } from "@/lib/config";
 import { conflict, fieldError, forbidden, gone, notFound, tooManyRequests, unauthorized } from "@/lib/http/errors";
@@ -30,10 +31,11 @@ export async function signUp(input: { organisationName: string; name: string; em
   }
   const passwordHash = await hashPassword(input.password);
   const userId = generateIdFromEntropySize(10);
-  await db.transaction(async (trx) => {
-    const organisationId = await people.createOrganisation(input.organisationName, trx);
-    await people.insertUser({ id: userId, organisationId, email: input.email, name: input.name, role: "owner", passwordHash }, trx);
-    await writeAudit({ organisationId, actorId: userId, action: "organisation.created", entity: "organisation", entityId: organisationId, after: { name: input.organisationName } }, trx);
+  const organisationId = randomUUID();
+  await audited({ organisationId, userId }, async (tx, audit) => {
+    await createOrganisation({ id: organisationId, name: input.organisationName }, tx);
+    await people.insertUser({ id: userId, organisationId, email: input.email, name: input.name, role: "owner", passwordHash }, tx);
+    await audit({ action: "organisation.created", entity: "organisation", entityId: organisationId, after: { name: input.organisationName } });
   });
   return userId;
 }
@@ -70,13 +72,13 @@ export async function invitePerson(actor: Principal, input: { email: string; rol
   }
   const secret = newSecret();
   const expiresAt = new Date(Date.now() + INVITE_DAYS * 86_400_000);
-  const organisation = await people.getOrganisation(actor.organisationId);
-  const id = await db.transaction(async (trx) => {
+  const organisation = await getOrganisation(actor.organisationId);
+  const id = await audited(actor, async (tx, audit) => {
     const inviteId = await people.insertInvite(
       { organisationId: actor.organisationId, email: input.email, role: input.role, designated: input.designated, tokenHash: hashSecret(secret), invitedBy: actor.userId, expiresAt },
-      trx,
+      tx,
     );
-    await writeAudit({ organisationId: actor.organisationId, actorId: actor.userId, action: "person.invited", entity: "invite", entityId: inviteId, after: input }, trx);
+    await audit({ action: "person.invited", entity: "invite", entityId: inviteId, after: input });
     return inviteId;
   });
   await sendMail(
@@ -107,29 +109,30 @@ function inviteProblem(invite: { acceptedAt: Date | null; revokedAt: Date | null
 
 export async function acceptInvite(input: { token: string; name: string; password: string }): Promise<string> {
   const passwordHash = await hashPassword(input.password);
-  return db.transaction(async (trx) => {
-    const invite = await trx("invites").where({ token_hash: hashSecret(input.token) }).forUpdate().first();
+  const userId = generateIdFromEntropySize(10);
+  // The organisation is the invite's, known once the invite is read inside the transaction.
+  return audited(null, async (tx, audit) => {
+    const invite = await people.lockInviteByTokenHash(hashSecret(input.token), tx);
     if (!invite) throw notFound("This invite link is not valid. Ask your owner for a new one.");
-    const problem = inviteProblem({ acceptedAt: invite.accepted_at, revokedAt: invite.revoked_at, expiresAt: invite.expires_at });
+    const problem = inviteProblem(invite);
     if (problem) throw gone(problem);
-    if (await people.emailTaken(invite.email, trx)) throw conflict("This e-mail already has an account. Sign in instead.");
-    const userId = generateIdFromEntropySize(10);
+    if (await people.emailTaken(invite.email, tx)) throw conflict("This e-mail already has an account. Sign in instead.");
     await people.insertUser(
-      { id: userId, organisationId: invite.organisation_id, email: invite.email, name: input.name, role: invite.role, designated: invite.designated, passwordHash },
-      trx,
+      { id: userId, organisationId: invite.organisationId, email: invite.email, name: input.name, role: invite.role, designated: invite.designated, passwordHash },
+      tx,
     );
-    await people.markInviteAccepted(invite.id, trx);
-    await writeAudit({ organisationId: invite.organisation_id, actorId: userId, action: "person.joined", entity: "user", entityId: userId, after: { email: invite.email, role: invite.role } }, trx);
+    await people.markInviteAccepted(invite.id, tx);
+    await audit({ organisationId: invite.organisationId, actorId: userId, action: "person.joined", entity: "user", entityId: userId, after: { email: invite.email, role: invite.role } });
     return userId;
   });
 }
 
 export async function withdrawInvite(actor: Principal, inviteId: string) {
   if (!can(actor, "people.manage")) throw forbidden();
-  await db.transaction(async (trx) => {
-    const changed = await people.revokeInvite(actor.organisationId, inviteId, trx);
+  await audited(actor, async (tx, audit) => {
+    const changed = await people.revokeInvite(actor.organisationId, inviteId, tx);
     if (!changed) throw notFound("No open invite with that id.");
-    await writeAudit({ organisationId: actor.organisationId, actorId: actor.userId, action: "invite.withdrawn", entity: "invite", entityId: inviteId }, trx);
+    await audit({ action: "invite.withdrawn", entity: "invite", entityId: inviteId });
   });
 }
 
@@ -145,18 +148,18 @@ export async function requestPasswordReset(email: string): Promise<void> {
 
 export async function resetPassword(input: { token: string; password: string }): Promise<string> {
   const passwordHash = await hashPassword(input.password);
-  return db.transaction(async (trx) => {
-    const reset = await people.findPasswordReset(hashSecret(input.token), trx);
+  // The person is known once the link is read inside the transaction.
+  return audited(null, async (tx, audit) => {
+    const reset = await people.findPasswordReset(hashSecret(input.token), tx);
     if (!reset) throw notFound("This reset link is not valid. Ask for a new one.");
     if (reset.usedAt) throw gone("This reset link has already been used. Ask for a new one.");
     if (reset.expiresAt.getTime() < Date.now()) throw gone("This reset link has expired. Ask for a new one.");
-    await people.setPassword(reset.userId, passwordHash, trx);
-    await people.markPasswordResetUsed(reset.id, trx);
-    await people.deleteSessionsOf(reset.userId, trx); // sign out everywhere else
-    const user = await trx("users").where({ id: reset.userId }).first("organisation_id");
-    const change = { organisationId: user.organisation_id, actorId: reset.userId };
-    await revokeTokensOf(change, reset.userId, "password reset", trx); // a token must not outlive the password it was made under
-    await writeAudit({ ...change, action: "person.password_reset", entity: "user", entityId: reset.userId }, trx);
+    await people.setPassword(reset.userId, passwordHash, tx);
+    await people.markPasswordResetUsed(reset.id, tx);
+    await people.deleteSessionsOf(reset.userId, tx); // sign out everywhere else
+    const by = { organisationId: await people.organisationOf(reset.userId, tx), actorId: reset.userId };
+    await revokeTokensOf(by.organisationId, reset.userId, "password reset", (fact) => audit({ ...by, ...fact }), tx); // a token must not outlive the password it was made under
+    await audit({ ...by, action: "person.password_reset", entity: "user", entityId: reset.userId });
     return reset.userId as string;
   });
 }
@@ -167,21 +170,20 @@ export async function updatePerson(
   patch: { role?: Role; designated?: boolean; disabled?: boolean },
 ) {
   if (!can(actor, "people.manage")) throw forbidden();
-  await db.transaction(async (trx) => {
-    const before = await people.getPerson(actor.organisationId, userId, trx);
+  await audited(actor, async (tx, audit) => {
+    const before = await people.getPerson(actor.organisationId, userId, tx);
     if (!before) throw notFound("No such person in your organisation.");
     const losesOwner = before.role === "owner" && !before.disabled && ((patch.role && patch.role !== "owner") || patch.disabled);
-    if (losesOwner && (await people.countActiveOwners(actor.organisationId, trx)) <= 1) {
+    if (losesOwner && (await people.countActiveOwners(actor.organisationId, tx)) <= 1) {
       throw fieldError("role", "The organisation needs at least one active owner.");
     }
-    await people.updatePerson(actor.organisationId, userId, patch, trx);
+    await people.updatePerson(actor.organisationId, userId, patch, tx);
     // A person's API tokens never act above the person: disabled, they stop; demoted, they are capped.
-    const change = { organisationId: actor.organisationId, actorId: actor.userId };
     if (patch.disabled) {
-      await people.deleteSessionsOf(userId, trx);
-      await revokeTokensOf(change, userId, "person disabled", trx);
-    } else if (patch.role) await capTokensOf(change, userId, patch.role, trx);
-    const after = await people.getPerson(actor.organisationId, userId, trx);
-    await writeAudit({ organisationId: actor.organisationId, actorId: actor.userId, action: "person.updated", entity: "user", entityId: userId, before, after }, trx);
+      await people.deleteSessionsOf(userId, tx);
+      await revokeTokensOf(actor.organisationId, userId, "person disabled", audit, tx);
+    } else if (patch.role) await capTokensOf(actor.organisationId, userId, patch.role, audit, tx);
+    const after = await people.getPerson(actor.organisationId, userId, tx);
+    await audit({ action: "person.updated", entity: "user", entityId: userId, before, after });
   });
 }

@@ -5,12 +5,10 @@ import { rm, stat } from "node:fs/promises";
 import { tmpdir } from "node:os";
 import path from "node:path";
 import { finished } from "node:stream/promises";
-import type { Knex } from "knex";
-import { db } from "@/db";
-import { writeAudit } from "@/db/audit";
+import { rolledBack, type Tx } from "@/db";
+import { audited } from "@/db/audit";
 import * as imports from "@/db/imports";
 import { listYards } from "@/db/items";
-import { getOrganisationSettings } from "@/db/people";
 import type { Principal } from "@/lib/auth/session";
 import { can } from "@/lib/auth/roles";
 import { csvLine } from "@/lib/import/csv-write";
@@ -20,9 +18,10 @@ import type { ExistingItem } from "@/lib/import/row";
 import { openCsv } from "@/lib/import/source";
 import { AppError, conflict, forbidden, notFound } from "@/lib/http/errors";
 import type { SpooledFile } from "@/lib/http/multipart";
+import { inspectionIntervals } from "@/lib/organisations/service";
 import { removeStored, storeFromDisk } from "@/lib/storage/files";
 import { newTagCode } from "@/lib/tags/code";
-import { intervalsWithDefaults, nextDue } from "./intervals";
+import { nextDue } from "./intervals";
 import type { ItemKind } from "./labels";
 
 // The CSV import of stock. A commit is ONE transaction: every row goes in, or, when the owner
@@ -116,20 +115,17 @@ export async function importStock(actor: Principal, request: ImportRequest): Pro
   const withDelimiter = { ...common, delimiter: csv.delimiterName };
 
   if (request.dryRun) {
-    const trx = await db.transaction();
-    try {
-      await imports.createSeenTable(trx);
-      const summary = await runImport(csv.records, options, readingStore(trx, actor.organisationId));
-      return { status: 200, body: body(summary, withDelimiter) };
-    } finally {
-      await trx.rollback();
-    }
+    const summary = await rolledBack(async (tx) => {
+      await imports.createSeenTable(tx);
+      return runImport(csv.records, options, readingStore(tx, actor.organisationId));
+    });
+    return { status: 200, body: body(summary, withDelimiter) };
   }
   return commit(actor, request, csv.records, options, withDelimiter, read);
 }
 
 /** The store of a dry run: it reads stock and notes duplicates, and writes nothing. */
-function readingStore(trx: Knex, organisationId: string): ImportStore {
+function readingStore(trx: Tx, organisationId: string): ImportStore {
   return {
     findExisting: ({ serials, tagCodes }) => imports.findExisting(trx, organisationId, serials, tagCodes),
     firstSeen: (entries) => imports.firstSeen(trx, entries),
@@ -152,7 +148,7 @@ async function commit(
   const rejectedPath = path.join(tmpdir(), `linkyard-rejected-${batchId}.csv`);
   let rejectedOut: WriteStream | null = null;
   let rejectedStored = false;
-  const intervals = intervalsWithDefaults((await getOrganisationSettings(org))?.inspectionIntervalDays);
+  const intervals = await inspectionIntervals(org);
 
   await storeFromDisk(fileKey, request.file.path, request.file.size, "text/csv");
   await imports.insertBatch({
@@ -160,72 +156,69 @@ async function commit(
     delimiter: common.delimiter ?? "", encoding: common.encoding, mapping: request.mapping ?? {}, validOnly: request.validOnly,
   });
 
-  const trx = await db.transaction();
-  let done = false;
+  let committed = false;
   try {
-    await imports.lockOrganisationImports(trx, org);
-    await imports.createSeenTable(trx);
-    let lastEventId: number | null = null;
-    let headers: string[] = [];
-    const note = (line: number) => `Imported from ${request.file.name}, line ${line}`;
+    const { summary, storedRejected } = await audited(actor, async (trx, audit) => {
+      await imports.lockOrganisationImports(trx, org);
+      await imports.createSeenTable(trx);
+      let lastEventId: number | null = null;
+      let headers: string[] = [];
+      const note = (line: number) => `Imported from ${request.file.name}, line ${line}`;
 
-    const store: ImportStore = {
-      ...readingStore(trx, org),
-      async write(creates, updates) {
-        if (creates.length) lastEventId = Math.max(lastEventId ?? 0, await writeCreates(trx, actor, batchId, creates, intervals, note));
-        if (updates.length) lastEventId = Math.max(lastEventId ?? 0, await writeUpdates(trx, actor, batchId, updates, note));
-      },
-      async progress(rows) {
-        await imports.recordProgress(batchId, rows, read.bytes);
-      },
-      ...(request.validOnly && {
-        async rejected(fields, messages) {
-          if (!rejectedOut) {
-            rejectedOut = createWriteStream(rejectedPath);
-            rejectedOut.write("\ufeff" + csvLine([...headers, "error"]));
-          }
-          const row = [...headers.map((_, i) => fields[i] ?? ""), messages.join(" | ")];
-          if (!rejectedOut.write(csvLine(row))) await new Promise<void>((r) => rejectedOut!.once("drain", () => r()));
+      const store: ImportStore = {
+        ...readingStore(trx, org),
+        async write(creates, updates) {
+          if (creates.length) lastEventId = Math.max(lastEventId ?? 0, await writeCreates(trx, actor, batchId, creates, intervals, note));
+          if (updates.length) lastEventId = Math.max(lastEventId ?? 0, await writeUpdates(trx, actor, batchId, updates, note));
         },
-      }),
-    };
-    // the rejected-rows file repeats the file's own header
-    const withHeaders = (async function* () {
-      let first = true;
-      for await (const r of records) {
-        if (first && !("fatal" in r)) headers = r.fields.map((h) => h.trim());
-        first = false;
-        yield r;
-      }
-    })();
+        async progress(rows) {
+          await imports.recordProgress(batchId, rows, read.bytes);
+        },
+        ...(request.validOnly && {
+          async rejected(fields, messages) {
+            if (!rejectedOut) {
+              rejectedOut = createWriteStream(rejectedPath);
+              rejectedOut.write("\ufeff" + csvLine([...headers, "error"]));
+            }
+            const row = [...headers.map((_, i) => fields[i] ?? ""), messages.join(" | ")];
+            if (!rejectedOut.write(csvLine(row))) await new Promise<void>((r) => rejectedOut!.once("drain", () => r()));
+          },
+        }),
+      };
+      // the rejected-rows file repeats the file's own header
+      const withHeaders = (async function* () {
+        let first = true;
+        for await (const r of records) {
+          if (first && !("fatal" in r)) headers = r.fields.map((h) => h.trim());
+          first = false;
+          yield r;
+        }
+      })();
 
-    const summary = await runImport(withHeaders, options, store);
-    const refusal = commitRefusal(summary, request.validOnly);
-    if (refusal) {
-      return { status: 422, body: body(summary, { ...common, error: refusal }) };
-    }
-    let storedRejected: string | null = null;
-    if (rejectedOut) {
-      const out = rejectedOut as WriteStream;
-      out.end();
-      await finished(out);
-      await storeFromDisk(rejectedKey, rejectedPath, (await stat(rejectedPath)).size, "text/csv");
-      rejectedStored = true;
-      storedRejected = rejectedKey;
-    }
-    await imports.finishBatch(trx, batchId, {
-      mapping: summary.mapping, rowsTotal: summary.rows, created: summary.created, updated: summary.updated, unchanged: summary.unchanged,
-      rejected: summary.rejected, rejectedKey: storedRejected, lastEventId, bytes: request.file.size,
-    });
-    await writeAudit(
-      {
-        organisationId: org, actorId: actor.userId, action: "items.imported", entity: "import_batch", entityId: batchId,
+      const summary = await runImport(withHeaders, options, store);
+      const refusal = commitRefusal(summary, request.validOnly);
+      // Thrown, so that the transaction rolls back; answered below as a 422.
+      if (refusal) throw new Refused({ status: 422, body: body(summary, { ...common, error: refusal }) });
+      let storedRejected: string | null = null;
+      if (rejectedOut) {
+        const out = rejectedOut as WriteStream;
+        out.end();
+        await finished(out);
+        await storeFromDisk(rejectedKey, rejectedPath, (await stat(rejectedPath)).size, "text/csv");
+        rejectedStored = true;
+        storedRejected = rejectedKey;
+      }
+      await imports.finishBatch(trx, batchId, {
+        mapping: summary.mapping, rowsTotal: summary.rows, created: summary.created, updated: summary.updated, unchanged: summary.unchanged,
+        rejected: summary.rejected, rejectedKey: storedRejected, lastEventId, bytes: request.file.size,
+      });
+      await audit({
+        action: "items.imported", entity: "import_batch", entityId: batchId,
         after: { fileName: request.file.name, created: summary.created, updated: summary.updated, unchanged: summary.unchanged, rejected: summary.rejected, validOnly: request.validOnly },
-      },
-      trx,
-    );
-    await trx.commit();
-    done = true;
+      });
+      return { summary, storedRejected };
+    });
+    committed = true;
     const ids = summary.created && summary.created <= TAG_SHEET_MAX ? await imports.createdItemIds(org, batchId) : [];
     return {
       status: 201,
@@ -235,9 +228,11 @@ async function commit(
         rejectedFile: storedRejected ? `/api/v1/imports/${batchId}/rejected.csv` : null,
       }),
     };
+  } catch (error) {
+    if (error instanceof Refused) return error.answer;
+    throw error;
   } finally {
-    if (!done) {
-      await trx.rollback().catch(() => undefined);
+    if (!committed) {
       await imports.deleteBatch(batchId).catch((e) => console.error("import: could not remove the batch row", e));
       await removeStored(fileKey).catch(() => undefined);
       if (rejectedStored) await removeStored(rejectedKey).catch(() => undefined);
@@ -251,8 +246,13 @@ async function commit(
   }
 }
 
+/** A commit the file's rows refuse: its answer, carried out of the transaction it rolls back. */
+class Refused {
+  constructor(readonly answer: ImportAnswer) {}
+}
+
 /** Tag codes no item has yet, drawn at random and checked in one query per chunk. */
-async function freshTagCodes(trx: Knex, count: number): Promise<string[]> {
+async function freshTagCodes(trx: Tx, count: number): Promise<string[]> {
   const codes = new Set<string>();
   for (let round = 0; codes.size < count; round++) {
     if (round > 5) throw new Error("could not draw free tag codes");
@@ -268,7 +268,7 @@ async function freshTagCodes(trx: Knex, count: number): Promise<string[]> {
 }
 
 async function writeCreates(
-  trx: Knex, actor: Principal, batchId: string, creates: PreparedCreate[], intervals: Record<ItemKind, number>, note: (line: number) => string,
+  trx: Tx, actor: Principal, batchId: string, creates: PreparedCreate[], intervals: Record<ItemKind, number>, note: (line: number) => string,
 ): Promise<number> {
   const codes = await freshTagCodes(trx, creates.length);
   const ids = await imports.insertItems(
@@ -297,7 +297,7 @@ function columnsOf(e: ExistingItem) {
   };
 }
 
-async function writeUpdates(trx: Knex, actor: Principal, batchId: string, updates: PreparedUpdate[], note: (line: number) => string): Promise<number> {
+async function writeUpdates(trx: Tx, actor: Principal, batchId: string, updates: PreparedUpdate[], note: (line: number) => string): Promise<number> {
   for (const u of updates) {
     const { kind: _kind, ...row } = u.row;
     await imports.updateItemRow(trx, actor.organisationId, u.existing.id, { ...row, details: JSON.stringify(row.details) });
@@ -331,7 +331,7 @@ async function writeUpdates(trx: Knex, actor: Principal, batchId: string, update
  */
 export async function undoImport(actor: Principal, batchId: string): Promise<{ retired: number; restored: number }> {
   if (!can(actor, "stock.import")) throw forbidden();
-  return db.transaction(async (trx) => {
+  return audited(actor, async (trx, audit) => {
     const batch = await imports.lockBatch(actor.organisationId, batchId, trx);
     if (!batch) throw notFound("No such import.");
     if (batch.status === "undone") throw conflict("This import has been undone already.");
@@ -357,7 +357,7 @@ export async function undoImport(actor: Principal, batchId: string): Promise<{ r
     }
     for (let i = 0; i < events.length; i += CHUNK) await imports.insertEvents(trx, events.slice(i, i + CHUNK));
     await imports.markUndone(trx, batchId, actor.userId);
-    await writeAudit({ organisationId: actor.organisationId, actorId: actor.userId, action: "items.import_undone", entity: "import_batch", entityId: batchId, after: { retired, restored: updates.length } }, trx);
+    await audit({ action: "items.import_undone", entity: "import_batch", entityId: batchId, after: { retired, restored: updates.length } });
     return { retired, restored: updates.length };
   });
 }
@@ -409,6 +409,26 @@ export function batchJson(b: imports.BatchRow, undo?: { canUndo: boolean; reason
   };
 }
 export type BatchJson = ReturnType<typeof batchJson>;
+
+/** Saves the owner's column choices by name, for the next file from the same supplier. */
+export async function saveMapping(actor: Principal, name: string, mapping: Record<string, string | null>): Promise<string> {
+  if (!can(actor, "stock.import")) throw forbidden();
+  return audited(actor, async (tx, audit) => {
+    const id = await imports.upsertMapping(actor.organisationId, name, mapping, actor.userId, tx);
+    await audit({ action: "import_mapping.saved", entity: "import_mapping", entityId: id, after: { name, mapping } });
+    return id;
+  });
+}
+
+/** Removes a saved mapping; answers whether there was one. */
+export async function deleteMapping(actor: Principal, id: string): Promise<boolean> {
+  if (!can(actor, "stock.import")) throw forbidden();
+  return audited(actor, async (tx, audit) => {
+    const gone = await imports.deleteMapping(actor.organisationId, id, tx);
+    if (gone) await audit({ action: "import_mapping.deleted", entity: "import_mapping", entityId: id });
+    return gone;
+  });
+}
 
 /** Download headers for a CSV file with a name people recognise. */
 export function attachment(name: string): HeadersInit {

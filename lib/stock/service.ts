@@ -1,21 +1,20 @@
 import "server-only";
-import type { Knex } from "knex";
-import { db } from "@/db";
-import { writeAudit } from "@/db/audit";
+import type { Tx } from "@/db";
+import { audited } from "@/db/audit";
 import * as items from "@/db/items";
-import { getOrganisationSettings } from "@/db/people";
 import type { Principal } from "@/lib/auth/session";
 import { can, type Permission } from "@/lib/auth/roles";
 import { config } from "@/lib/config";
 import { AppError, badRequest, conflict, fieldError, forbidden, notFound } from "@/lib/http/errors";
 import { sendMail } from "@/lib/mail/send";
+import { inspectionIntervals } from "@/lib/organisations/service";
 import { damageReportMail } from "@/lib/mail/templates";
 import { removeStored, storeUpload, type StoredFile } from "@/lib/storage/files";
 import type { FilePurpose } from "@/lib/storage/file-type";
 import { newTagCode } from "@/lib/tags/code";
 import { preUseOutcome, type CheckAnswer } from "./checklists";
 import { evaluateMeasurements, verdictProblem, type InspectionVerdict } from "./inspection";
-import { intervalsWithDefaults, nextDue } from "./intervals";
+import { nextDue } from "./intervals";
 import type { ItemKind, ItemStatus } from "./labels";
 import { itemRow } from "./row";
 import type { ItemInput } from "./schemas";
@@ -31,7 +30,7 @@ function require(actor: Principal, permission: Permission) {
 
 const today = () => new Date().toISOString().slice(0, 10);
 
-async function checkReferences(actor: Principal, input: ItemInput, exceptId: string | undefined, trx: Knex) {
+async function checkReferences(actor: Principal, input: ItemInput, exceptId: string | undefined, trx: Tx) {
   if (input.yardId && !(await items.yardBelongs(actor.organisationId, input.yardId, trx))) {
     throw fieldError("yardId", "Choose a yard from the list.");
   }
@@ -41,7 +40,7 @@ async function checkReferences(actor: Principal, input: ItemInput, exceptId: str
 }
 
 /** A tag code no item has yet (codes are random; a clash is rare but checked). */
-export async function freshTagCode(trx: Knex = db): Promise<string> {
+export async function freshTagCode(trx: Tx): Promise<string> {
   for (let i = 0; i < 5; i++) {
     const code = newTagCode();
     if (!(await items.tagCodeExists(code, trx))) return code;
@@ -51,8 +50,8 @@ export async function freshTagCode(trx: Knex = db): Promise<string> {
 
 export async function createItem(actor: Principal, input: ItemInput): Promise<string> {
   require(actor, "stock.edit");
-  const intervals = intervalsWithDefaults((await getOrganisationSettings(actor.organisationId))?.inspectionIntervalDays);
-  return db.transaction(async (trx) => {
+  const intervals = await inspectionIntervals(actor.organisationId);
+  return audited(actor, async (trx, audit) => {
     await checkReferences(actor, input, undefined, trx);
     const row = itemRow(input);
     const id = await items.insertItem(
@@ -66,14 +65,14 @@ export async function createItem(actor: Principal, input: ItemInput): Promise<st
       trx,
     );
     await items.insertEvent({ organisationId: actor.organisationId, itemId: id, type: "created", actorId: actor.userId, note: "Added to stock" }, trx);
-    await writeAudit({ organisationId: actor.organisationId, actorId: actor.userId, action: "item.created", entity: "item", entityId: id, after: row }, trx);
+    await audit({ action: "item.created", entity: "item", entityId: id, after: row });
     return id;
   });
 }
 
 export async function editItem(actor: Principal, id: string, input: ItemInput): Promise<void> {
   require(actor, "stock.edit");
-  await db.transaction(async (trx) => {
+  await audited(actor, async (trx, audit) => {
     const before = await items.getItem(actor.organisationId, id, trx);
     if (!before) throw notFound("No such item in your stock.");
     if (before.kind !== input.kind) throw fieldError("kind", "The kind of an item cannot change; add a new item instead.");
@@ -84,7 +83,7 @@ export async function editItem(actor: Principal, id: string, input: ItemInput): 
     const changes = diff(before as unknown as Record<string, unknown>, after as unknown as Record<string, unknown>);
     if (Object.keys(changes).length === 0) return;
     await items.insertEvent({ organisationId: actor.organisationId, itemId: id, type: "edited", actorId: actor.userId, changes }, trx);
-    await writeAudit({ organisationId: actor.organisationId, actorId: actor.userId, action: "item.updated", entity: "item", entityId: id, before, after }, trx);
+    await audit({ action: "item.updated", entity: "item", entityId: id, before, after });
   });
 }
 
@@ -100,9 +99,9 @@ function diff(before: Record<string, unknown>, after: Record<string, unknown> | 
 
 export async function moveItems(actor: Principal, itemIds: string[], yardId: string): Promise<number> {
   require(actor, "stock.edit");
-  return db.transaction(async (trx) => {
-    if (!(await items.yardBelongs(actor.organisationId, yardId, trx))) throw fieldError("yardId", "Choose a yard from the list.");
-    const yard = await trx("yards").where({ id: yardId }).first("name");
+  return audited(actor, async (trx, audit) => {
+    const yard = await items.getYard(actor.organisationId, yardId, trx);
+    if (!yard) throw fieldError("yardId", "Choose a yard from the list.");
     // One read and one update for the whole selection; ids of other organisations drop out here.
     const toMove = (await items.getItemsByIds(actor.organisationId, itemIds, trx)).filter((i) => i.yardId !== yardId);
     if (toMove.length) await items.setYard(actor.organisationId, toMove.map((i) => i.id), yardId, trx);
@@ -110,7 +109,7 @@ export async function moveItems(actor: Principal, itemIds: string[], yardId: str
       await items.insertEvent({ organisationId: actor.organisationId, itemId: before.id, type: "moved", actorId: actor.userId, changes: { yardName: [before.yardName, yard.name] } }, trx);
     }
     const moved = toMove.length;
-    await writeAudit({ organisationId: actor.organisationId, actorId: actor.userId, action: "items.moved", entity: "yard", entityId: yardId, after: { itemIds, moved } }, trx);
+    await audit({ action: "items.moved", entity: "yard", entityId: yardId, after: { itemIds, moved } });
     return moved;
   });
 }
@@ -135,7 +134,7 @@ async function withUpload<T>(
   }
 }
 
-async function changeStatus(trx: Knex, actor: Principal, id: string, change: StatusChange) {
+async function changeStatus(trx: Tx, actor: Principal, id: string, change: StatusChange) {
   const item = await items.lockItem(actor.organisationId, id, trx);
   if (!item) throw notFound("No such item in your stock.");
   const next = nextStatus(item.status as ItemStatus, change);
@@ -163,7 +162,7 @@ export async function recordPreUseCheck(actor: Principal, id: string, input: Pre
     throw fieldError("note", "Say what is wrong, or add a photo, so the owner can judge the damage.");
   }
   const result = await withUpload(actor, input.photo, "damage-photo", "photo", (stored) =>
-    db.transaction(async (trx) => {
+    audited(actor, async (trx, audit) => {
       const { status } = await changeStatus(trx, actor, id, outcome.outcome === "pass" ? "check_pass" : "check_fail");
       const eventId = await items.insertEvent(
         { organisationId: actor.organisationId, itemId: id, type: "check", outcome: outcome.outcome, checklist: outcome.checklist, note: input.note?.trim() || null, actorId: actor.userId },
@@ -173,8 +172,8 @@ export async function recordPreUseCheck(actor: Principal, id: string, input: Pre
         await items.insertEvent({ organisationId: actor.organisationId, itemId: id, type: "tag_out", actorId: actor.userId, note: "Tagged out by a failed pre-use check" }, trx);
       }
       if (stored) await items.insertAttachment({ organisationId: actor.organisationId, itemId: id, eventId, purpose: "damage-photo", ...stored, createdBy: actor.userId }, trx);
-      await items.updateItem(actor.organisationId, id, { status, last_checked_at: trx.fn.now() }, trx);
-      await writeAudit({ organisationId: actor.organisationId, actorId: actor.userId, action: `item.check_${outcome.outcome}`, entity: "item", entityId: id, after: { status } }, trx);
+      await items.setCheckedStatus(actor.organisationId, id, status, trx);
+      await audit({ action: `item.check_${outcome.outcome}`, entity: "item", entityId: id, after: { status } });
       return { outcome: outcome.outcome, status, defects: outcome.defects };
     }),
   );
@@ -188,12 +187,12 @@ export async function tagOut(actor: Principal, id: string, input: { note: string
   const current = await items.getItem(actor.organisationId, id);
   if (!current) throw notFound("No such item in your stock.");
   await withUpload(actor, input.photo, "damage-photo", "photo", (stored) =>
-    db.transaction(async (trx) => {
+    audited(actor, async (trx, audit) => {
       const { status } = await changeStatus(trx, actor, id, "tag_out");
       const eventId = await items.insertEvent({ organisationId: actor.organisationId, itemId: id, type: "tag_out", note: input.note, actorId: actor.userId }, trx);
       if (stored) await items.insertAttachment({ organisationId: actor.organisationId, itemId: id, eventId, purpose: "damage-photo", ...stored, createdBy: actor.userId }, trx);
       await items.updateItem(actor.organisationId, id, { status }, trx);
-      await writeAudit({ organisationId: actor.organisationId, actorId: actor.userId, action: "item.tagged_out", entity: "item", entityId: id, after: { status, note: input.note } }, trx);
+      await audit({ action: "item.tagged_out", entity: "item", entityId: id, after: { status, note: input.note } });
     }),
   );
   await notifyOwners(actor, current, [], input.note);
@@ -229,10 +228,10 @@ export async function recordInspection(actor: Principal, id: string, input: Insp
   const measured = evaluateMeasurements(kind, current.size, input.measurements);
   const problem = verdictProblem(input.verdict, outcome.defects.length, measured);
   if (problem) throw fieldError("verdict", problem);
-  const intervals = intervalsWithDefaults((await getOrganisationSettings(actor.organisationId))?.inspectionIntervalDays);
+  const intervals = await inspectionIntervals(actor.organisationId);
   const change: StatusChange = input.verdict === "in_service" ? "inspect_in_service" : input.verdict === "repair" ? "inspect_repair" : "inspect_retire";
   return withUpload(actor, input.certificate, "certificate", "certificate", (stored) =>
-    db.transaction(async (trx) => {
+    audited(actor, async (trx, audit) => {
       const { status } = await changeStatus(trx, actor, id, change);
       const eventId = await items.insertEvent(
         { organisationId: actor.organisationId, itemId: id, type: "inspection", outcome: input.verdict, checklist: outcome.checklist, measurements: measured, note: input.note?.trim() || null, actorId: actor.userId },
@@ -245,7 +244,7 @@ export async function recordInspection(actor: Principal, id: string, input: Insp
         { status, last_inspected_on: today(), next_inspection_due: input.verdict === "retire" ? null : nextDue(today(), intervals[kind]) },
         trx,
       );
-      await writeAudit({ organisationId: actor.organisationId, actorId: actor.userId, action: "item.inspected", entity: "item", entityId: id, after: { status, verdict: input.verdict } }, trx);
+      await audit({ action: "item.inspected", entity: "item", entityId: id, after: { status, verdict: input.verdict } });
       return { status, measured };
     }),
   );
@@ -266,22 +265,21 @@ export async function changeWithReason(
   };
   require(actor, permission[change]);
   const eventType = { return_to_service: "return_to_service", retire: "retired", lost: "lost", found: "found" }[change];
-  await db.transaction(async (trx) => {
+  await audited(actor, async (trx, audit) => {
     const { status } = await changeStatus(trx, actor, id, change);
     await items.insertEvent({ organisationId: actor.organisationId, itemId: id, type: eventType, note: reason, actorId: actor.userId }, trx);
     await items.updateItem(actor.organisationId, id, { status }, trx);
-    await writeAudit({ organisationId: actor.organisationId, actorId: actor.userId, action: `item.${eventType}`, entity: "item", entityId: id, after: { status, reason } }, trx);
+    await audit({ action: `item.${eventType}`, entity: "item", entityId: id, after: { status, reason } });
   });
 }
 
 /** History is never edited: a mistake is answered by a correction event that points at it. */
 export async function correctEvent(actor: Principal, itemId: string, eventId: number, note: string) {
   require(actor, "items.check");
-  await db.transaction(async (trx) => {
-    const event = await trx("item_events").where({ organisation_id: actor.organisationId, item_id: itemId, id: eventId }).first("id");
-    if (!event) throw notFound("No such event on this item.");
+  await audited(actor, async (trx, audit) => {
+    if (!(await items.eventExists(actor.organisationId, itemId, eventId, trx))) throw notFound("No such event on this item.");
     await items.insertEvent({ organisationId: actor.organisationId, itemId, type: "correction", correctsEventId: eventId, note, actorId: actor.userId }, trx);
-    await writeAudit({ organisationId: actor.organisationId, actorId: actor.userId, action: "item.event_corrected", entity: "item", entityId: itemId, after: { eventId, note } }, trx);
+    await audit({ action: "item.event_corrected", entity: "item", entityId: itemId, after: { eventId, note } });
   });
 }
 
@@ -291,9 +289,9 @@ export async function attachCertificate(actor: Principal, id: string, file: File
   if (!(await items.getItem(actor.organisationId, id))) throw notFound("No such item in your stock.");
   await withUpload(actor, file, "certificate", "certificate", async (stored) => {
     if (!stored) throw fieldError("certificate", "Choose a file.");
-    await db.transaction(async (trx) => {
+    await audited(actor, async (trx, audit) => {
       await items.insertAttachment({ organisationId: actor.organisationId, itemId: id, eventId: null, purpose: "certificate", ...stored, createdBy: actor.userId }, trx);
-      await writeAudit({ organisationId: actor.organisationId, actorId: actor.userId, action: "item.certificate_added", entity: "item", entityId: id, after: { name: stored.originalName } }, trx);
+      await audit({ action: "item.certificate_added", entity: "item", entityId: id, after: { name: stored.originalName } });
     });
   });
 }

@@ -1,23 +1,17 @@
 "use server";
 import { revalidatePath } from "next/cache";
 import { z } from "zod";
-import { db } from "@/db";
-import { writeAudit } from "@/db/audit";
-import { getOrganisation, updateOrganisation } from "@/db/people";
 import { formAction } from "@/lib/auth/action";
 import { createApiToken, revokeToken } from "@/lib/auth/api-tokens";
 import { flagField, nameField, roleField } from "@/lib/auth/schemas";
-import { ITEM_KINDS, KIND_LABELS } from "@/lib/stock/labels";
+import { saveInspectionIntervals, saveOrganisation } from "@/lib/organisations/service";
+import { ITEM_KINDS, KIND_LABELS, type ItemKind } from "@/lib/stock/labels";
 
 export const saveOrganisationAction = formAction(
   "settings.manage",
   z.object({ name: nameField, publicTagView: flagField }),
   async (input, principal) => {
-    const before = await getOrganisation(principal.organisationId);
-    await db.transaction(async (trx) => {
-      await updateOrganisation(principal.organisationId, input, trx);
-      await writeAudit({ organisationId: principal.organisationId, actorId: principal.userId, action: "organisation.updated", entity: "organisation", entityId: principal.organisationId, before, after: input }, trx);
-    });
+    await saveOrganisation(principal, input);
     revalidatePath("/", "layout");
     return { ok: true, message: "Settings saved." };
   },
@@ -58,11 +52,7 @@ const intervalsForm = z.object(
 
 /** Days between periodic inspections, per kind; applies to inspections recorded from now on. */
 export const saveIntervalsAction = formAction("settings.manage", intervalsForm, async (input, principal) => {
-  await db.transaction(async (trx) => {
-    const before = await trx("organisations").where({ id: principal.organisationId }).first("inspection_interval_days");
-    await trx("organisations").where({ id: principal.organisationId }).update({ inspection_interval_days: JSON.stringify(input) });
-    await writeAudit({ organisationId: principal.organisationId, actorId: principal.userId, action: "organisation.intervals_updated", entity: "organisation", entityId: principal.organisationId, before: before?.inspection_interval_days, after: input }, trx);
-  });
+  await saveInspectionIntervals(principal, input as Record<ItemKind, number>);
   revalidatePath("/settings");
   return { ok: true, message: "Inspection intervals saved. They apply from the next inspection of each item." };
 });

@@ -1,8 +1,8 @@
 import type { Metadata } from "next";
 import { CreateTokenForm, IntervalsForm, OrganisationForm, RevokeTokenButton } from "@/components/settings/settings-forms";
 import { listApiTokens } from "@/db/api-tokens";
-import { getOrganisation, getOrganisationSettings } from "@/db/people";
-import { intervalsWithDefaults } from "@/lib/stock/intervals";
+import { getOrganisation } from "@/db/organisations";
+import { inspectionIntervals } from "@/lib/organisations/service";
 import { ROLE_LABELS, type Role } from "@/lib/auth/roles";
 import { requirePage } from "@/lib/auth/session";
 
@@ -10,16 +10,16 @@ export const metadata: Metadata = { title: "Settings" };
 
 export default async function SettingsPage() {
   const principal = await requirePage("settings.manage");
-  const [organisation, tokens, settings] = await Promise.all([
+  const [organisation, tokens, intervals] = await Promise.all([
     getOrganisation(principal.organisationId),
     listApiTokens(principal.organisationId),
-    getOrganisationSettings(principal.organisationId),
+    inspectionIntervals(principal.organisationId),
   ]);
   return (
     <div className="flex max-w-3xl flex-col gap-6">
       <h1 className="text-3xl font-bold">Settings</h1>
       <OrganisationForm name={organisation!.name} publicTagView={organisation!.publicTagView} />
-      <IntervalsForm intervals={intervalsWithDefaults(settings?.inspectionIntervalDays)} />
+      <IntervalsForm intervals={intervals} />
       <section aria-labelledby="tokens-heading" className="flex flex-col gap-3 rounded-xl border-2 border-ink-soft p-4">
         <h2 id="tokens-heading" className="text-xl font-bold">API tokens</h2>
         <p className="text-base">

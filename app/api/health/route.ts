@@ -1,9 +1,9 @@
-import { db } from "@/db";
+import { ping } from "@/db";
 
 export const dynamic = "force-dynamic";
 
 /** Liveness for scripts: the app answers and reaches its database. */
 export async function GET() {
-  await db.raw("select 1");
+  await ping();
   return Response.json({ ok: true });
 }

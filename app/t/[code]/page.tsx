@@ -3,7 +3,7 @@ import { headers } from "next/headers";
 import { notFound, redirect } from "next/navigation";
 import { PublicTagView } from "@/components/tags/public-tag-view";
 import { findItemByTag } from "@/db/items";
-import { getOrganisation } from "@/db/people";
+import { getOrganisation } from "@/db/organisations";
 import { getPrincipal } from "@/lib/auth/session";
 import { tagCodeFromPath } from "@/lib/tags/entry";
 import { clientIp, recordLookup } from "@/lib/tags/lookups";

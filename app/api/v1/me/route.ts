@@ -1,4 +1,4 @@
-import { getOrganisation } from "@/db/people";
+import { getOrganisation } from "@/db/organisations";
 import { route } from "@/lib/http/route";
 
 export const GET = route("stock.view", {}, async ({ principal }) => {

@@ -1,6 +1,7 @@
-import { listMappings, saveMapping } from "@/db/imports";
+import { listMappings } from "@/db/imports";
 import { savedMappingSchema } from "@/lib/import/api-schemas";
 import { route } from "@/lib/http/route";
+import { saveMapping } from "@/lib/stock/import";
 
 /** Column mappings saved by name, for the next file from the same supplier. */
 export const GET = route("stock.import", {}, async ({ principal }) => {
@@ -9,6 +10,6 @@ export const GET = route("stock.import", {}, async ({ principal }) => {
 
 /** Saves a mapping by name; one of the same name is replaced. */
 export const POST = route("stock.import", { body: savedMappingSchema }, async ({ principal, body }) => {
-  const id = await saveMapping(principal.organisationId, body.name, body.mapping, principal.userId);
+  const id = await saveMapping(principal, body.name, body.mapping);
   return Response.json({ id, name: body.name, mapping: body.mapping }, { status: 201 });
 });

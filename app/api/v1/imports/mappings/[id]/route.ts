@@ -1,8 +1,8 @@
-import { deleteMapping } from "@/db/imports";
 import { notFound, uuidParam } from "@/lib/http/errors";
 import { route } from "@/lib/http/route";
+import { deleteMapping } from "@/lib/stock/import";
 
 export const DELETE = route("stock.import", {}, async ({ principal, params }) => {
-  if (!(await deleteMapping(principal.organisationId, uuidParam(params.id, "mapping"), principal.userId))) throw notFound("No such mapping.");
+  if (!(await deleteMapping(principal, uuidParam(params.id, "mapping")))) throw notFound("No such mapping.");
   return { ok: true };
 });

@@ -1,0 +1,35 @@
+import type { Knex } from "knex";
+import { db } from "./index";
+
+// The organisation itself: its name, its settings.
+
+export interface Organisation {
+  id: string;
+  name: string;
+  publicTagView: boolean;
+}
+
+export async function createOrganisation(o: { id: string; name: string }, trx: Knex = db): Promise<void> {
+  await trx("organisations").insert({ id: o.id, name: o.name });
+}
+
+export async function getOrganisation(id: string, trx: Knex = db): Promise<Organisation | undefined> {
+  return trx("organisations").where({ id }).first("id", "name", "public_tag_view as publicTagView");
+}
+
+/** The organisation's inspection intervals as stored (kinds it never set are missing). */
+export async function getInspectionIntervals(id: string, trx: Knex = db): Promise<Record<string, unknown> | null> {
+  const row = await trx("organisations").where({ id }).first("inspection_interval_days");
+  return row?.inspection_interval_days ?? null;
+}
+
+export async function updateOrganisation(id: string, patch: { name?: string; publicTagView?: boolean }, trx: Knex = db): Promise<void> {
+  await trx("organisations").where({ id }).update({
+    ...(patch.name !== undefined && { name: patch.name }),
+    ...(patch.publicTagView !== undefined && { public_tag_view: patch.publicTagView }),
+  });
+}
+
+export async function setInspectionIntervals(id: string, intervals: Record<string, number>, trx: Knex = db): Promise<void> {
+  await trx("organisations").where({ id }).update({ inspection_interval_days: JSON.stringify(intervals) });
+}
