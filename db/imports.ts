@@ -1,7 +1,6 @@
 import type { Knex } from "knex";
-import type { ExistingItem } from "@/lib/import/row";
-import type { ItemKind } from "@/lib/stock/labels";
 import { db } from "./index";
+import { fieldColumns, fieldsFromColumns, type ItemFields } from "./items";
 
 // CSV import batches, the values an import replaced, saved column mappings, and the bulk
 // writes of an import. Every function takes the organisation id and filters on it.
@@ -45,8 +44,15 @@ const BATCH_COLUMNS = [
 const batchBase = (trx: Knex = db) =>
   trx("import_batches as b").leftJoin("users as u", "u.id", "b.created_by").leftJoin("users as v", "v.id", "b.undone_by");
 
-const toBatch = (r: Record<string, unknown>): BatchRow => ({
-  ...(r as unknown as BatchRow),
+/** bigint columns come back from pg as strings. */
+type BatchColumns = Omit<BatchRow, "fileBytes" | "bytesProcessed" | "lastEventId"> & {
+  fileBytes: string | number;
+  bytesProcessed: string | number;
+  lastEventId: string | number | null;
+};
+
+const toBatch = (r: BatchColumns): BatchRow => ({
+  ...r,
   fileBytes: Number(r.fileBytes),
   bytesProcessed: Number(r.bytesProcessed),
   lastEventId: r.lastEventId == null ? null : Number(r.lastEventId),
@@ -90,12 +96,12 @@ export async function finishBatch(
 }
 
 export async function listBatches(organisationId: string, limit = 100): Promise<BatchRow[]> {
-  const rows = await batchBase().where("b.organisation_id", organisationId).orderBy("b.created_at", "desc").limit(limit).select(BATCH_COLUMNS);
+  const rows: BatchColumns[] = await batchBase().where("b.organisation_id", organisationId).orderBy("b.created_at", "desc").limit(limit).select(BATCH_COLUMNS);
   return rows.map(toBatch);
 }
 
 export async function getBatch(organisationId: string, id: string, trx: Knex = db): Promise<BatchRow | undefined> {
-  const row = await batchBase(trx).where({ "b.organisation_id": organisationId, "b.id": id }).first(BATCH_COLUMNS);
+  const row: BatchColumns | undefined = await batchBase(trx).where({ "b.organisation_id": organisationId, "b.id": id }).first(BATCH_COLUMNS);
   return row ? toBatch(row) : undefined;
 }
 
@@ -123,24 +129,7 @@ export async function laterEvent(organisationId: string, batchId: string, lastEv
     .first("e.type", "i.tag_code as tagCode");
 }
 
-// Reading stock for an import
-
-const EXISTING_COLUMNS = [
-  "id", "tag_code as tagCode", "kind", "grade", "grade_marked as gradeMarked", "size", "length_mm as lengthMm",
-  "marked_wll_lb as markedWllLb", "serial", "yard_id as yardId", db.raw("to_char(in_service_on, 'YYYY-MM-DD') as \"inServiceOn\""),
-  "cost_cents as costCents", "details", "wll_lb as wllLb", "wll_source as wllSource",
-];
-
-export async function findExisting(trx: Knex, organisationId: string, serials: string[], tagCodes: string[]): Promise<ExistingItem[]> {
-  const rows = await trx("items")
-    .where("organisation_id", organisationId)
-    .where((w) => {
-      if (serials.length) w.orWhereIn("serial", serials);
-      if (tagCodes.length) w.orWhereIn("tag_code", tagCodes);
-    })
-    .select(EXISTING_COLUMNS);
-  return rows.map((r) => ({ ...r, kind: r.kind as ItemKind }));
-}
+// Reading stock for an import (the items themselves: db/items.ts findItemsByKeys)
 
 /** A table of the keys (serials, tag codes, items) seen so far in the file, dropped with the transaction. */
 export async function createSeenTable(trx: Knex): Promise<void> {
@@ -165,33 +154,26 @@ export async function lockOrganisationImports(trx: Knex, organisationId: string)
   await trx.raw("SELECT pg_advisory_xact_lock(hashtext(?))", [`linkyard-import:${organisationId}`]);
 }
 
-export async function existingTagCodes(trx: Knex, codes: string[]): Promise<Set<string>> {
-  return new Set(await trx("items").whereIn("tag_code", codes).pluck("tag_code"));
+/** What an import replaced on an item it updated, and what it wrote, so that undo can put the item back. */
+export async function insertUpdates(trx: Knex, rows: { batchId: string; itemId: string; before: Partial<ItemFields>; after: Partial<ItemFields> }[]): Promise<void> {
+  if (!rows.length) return;
+  await trx("import_updates").insert(
+    rows.map((r) => ({
+      batch_id: r.batchId,
+      item_id: r.itemId,
+      before: JSON.stringify(fieldColumns(r.before, "object")),
+      after: JSON.stringify(fieldColumns(r.after, "object")),
+    })),
+  );
 }
 
-// Bulk writes of an import
-
-export async function insertItems(trx: Knex, rows: Record<string, unknown>[]): Promise<string[]> {
-  const out = await trx("items").insert(rows).returning("id");
-  return out.map((r: { id: string }) => r.id);
-}
-
-export async function insertEvents(trx: Knex, events: Record<string, unknown>[]): Promise<number> {
-  if (!events.length) return 0;
-  const out = await trx("item_events").insert(events).returning("id");
-  return Math.max(...out.map((r: { id: string | number }) => Number(r.id)));
-}
-
-export async function updateItemRow(trx: Knex, organisationId: string, id: string, patch: Record<string, unknown>): Promise<void> {
-  await trx("items").where({ organisation_id: organisationId, id }).update({ ...patch, updated_at: trx.fn.now() });
-}
-
-export async function insertUpdates(trx: Knex, rows: { batch_id: string; item_id: string; before: string; after: string }[]): Promise<void> {
-  if (rows.length) await trx("import_updates").insert(rows);
-}
-
-export async function updatesOf(trx: Knex, batchId: string) {
-  return trx("import_updates").where({ batch_id: batchId }).select("item_id as itemId", "before", "after");
+export async function updatesOf(trx: Knex, batchId: string): Promise<{ itemId: string; before: Partial<ItemFields>; after: Partial<ItemFields> }[]> {
+  const rows = await trx("import_updates").where({ batch_id: batchId }).select("item_id as itemId", "before", "after");
+  return rows.map((r: { itemId: string; before: Record<string, unknown>; after: Record<string, unknown> }) => ({
+    itemId: r.itemId,
+    before: fieldsFromColumns(r.before),
+    after: fieldsFromColumns(r.after),
+  }));
 }
 
 /**

@@ -5,7 +5,7 @@ import pg from "pg";
 import knexConfig from "../knexfile";
 import { config } from "../lib/config";
 
-const globalForDb = globalThis as unknown as { linkyardKnex?: Knex; linkyardPool?: pg.Pool };
+const globalForDb = globalThis as typeof globalThis & { linkyardKnex?: Knex; linkyardPool?: pg.Pool };
 
 export const db: Knex = globalForDb.linkyardKnex ?? knexFactory(knexConfig);
 export const pool: pg.Pool =

@@ -1,14 +1,45 @@
 import type { Knex } from "knex";
-import type { StoredItem } from "@/lib/stock/summary";
+import type { ItemKind, ItemStatus } from "@/lib/stock/labels";
 import { db } from "./index";
 
 // Stock queries. Every function takes the organisation id and filters on it, except the
-// tag lookup, which finds the one item a printed code names.
+// tag lookup, which finds the one item a printed code names. This file owns the shapes of
+// an item as it is read (ItemRecord) and written (ItemFields, NewItem, ItemUpdate), and
+// their mapping to the columns.
 
-/** The stored shape is declared beside the code that turns it into API answers. */
-export type ItemSummary = StoredItem;
+/** What an item's details decide: the same whether it came in by the form, the API or an import. */
+export interface ItemFields {
+  kind: ItemKind;
+  grade: number | null;
+  gradeMarked: boolean;
+  size: string | null;
+  lengthMm: number | null;
+  markedWllLb: number | null;
+  serial: string | null;
+  yardId: string | null;
+  /** YYYY-MM-DD */
+  inServiceOn: string | null;
+  costCents: number | null;
+  details: Record<string, unknown>;
+  /** The effective WLL the rated-limit engine gives the item; null when it cannot be rated. */
+  wllLb: number | null;
+  wllSource: string | null;
+}
 
-const SUMMARY_COLUMNS = [
+/** An item as every query answers it: one row per physical piece of gear, with its yard's name. */
+export interface ItemRecord extends ItemFields {
+  id: string;
+  tagCode: string;
+  status: ItemStatus;
+  yardName: string | null;
+  /** YYYY-MM-DD, or null when no periodic inspection is scheduled. */
+  nextInspectionDue: string | null;
+  lastCheckedAt: Date | null;
+  /** YYYY-MM-DD */
+  lastInspectedOn: string | null;
+}
+
+const ITEM_COLUMNS = [
   "i.id", "i.tag_code as tagCode", "i.kind", "i.grade", "i.grade_marked as gradeMarked", "i.size",
   "i.length_mm as lengthMm", "i.marked_wll_lb as markedWllLb", "i.wll_lb as wllLb", "i.wll_source as wllSource",
   "i.serial", "i.status", "i.yard_id as yardId", "y.name as yardName",
@@ -19,6 +50,33 @@ const SUMMARY_COLUMNS = [
   db.raw("to_char(i.in_service_on, 'YYYY-MM-DD') as \"inServiceOn\""),
   "i.cost_cents as costCents",
 ];
+
+/** The columns of ItemFields, by field. */
+const FIELD_COLUMN = {
+  kind: "kind", grade: "grade", gradeMarked: "grade_marked", size: "size", lengthMm: "length_mm", markedWllLb: "marked_wll_lb",
+  serial: "serial", yardId: "yard_id", inServiceOn: "in_service_on", costCents: "cost_cents", details: "details", wllLb: "wll_lb",
+  wllSource: "wll_source",
+} as const satisfies Record<keyof ItemFields, string>;
+
+/**
+ * Item fields as columns (snake case): what an insert or an update writes (details as JSON
+ * text), or what an import's undo record keeps inside its own JSON (details as an object).
+ */
+export function fieldColumns(fields: Partial<ItemFields>, details: "text" | "object" = "text"): Record<string, unknown> {
+  const out: Record<string, unknown> = {};
+  for (const [key, column] of Object.entries(FIELD_COLUMN)) {
+    const value = fields[key as keyof ItemFields];
+    if (value !== undefined) out[column] = key === "details" && details === "text" ? JSON.stringify(value) : value;
+  }
+  return out;
+}
+
+/** The reverse of {@link fieldColumns}, for values kept as JSON columns (an import's undo record). */
+export function fieldsFromColumns(columns: Record<string, unknown>): Partial<ItemFields> {
+  const out: Record<string, unknown> = {};
+  for (const [key, column] of Object.entries(FIELD_COLUMN)) if (column in columns) out[key] = columns[column];
+  return out as Partial<ItemFields>;
+}
 
 function base(trx: Knex = db) {
   return trx("items as i").leftJoin("yards as y", "y.id", "i.yard_id");
@@ -67,10 +125,10 @@ function applyFilters(query: Knex.QueryBuilder, organisationId: string, f: ItemF
 export async function listItems(
   organisationId: string,
   options: ItemFilters & { page: number; perPage: number; sort: SortKey; order: "asc" | "desc" },
-): Promise<{ data: ItemSummary[]; pageCount: number; total: number }> {
+): Promise<{ data: ItemRecord[]; pageCount: number; total: number }> {
   const counted = await applyFilters(base().count<{ count: string }[]>("i.id as count"), organisationId, options);
   const total = Number(counted[0]?.count ?? 0);
-  const data = await applyFilters(base().select(SUMMARY_COLUMNS), organisationId, options)
+  const data = await applyFilters(base().select(ITEM_COLUMNS), organisationId, options)
     .orderByRaw(`${SORTABLE[options.sort]} ${options.order} nulls last, i.tag_code asc`)
     .limit(options.perPage)
     .offset((options.page - 1) * options.perPage);
@@ -86,8 +144,8 @@ export async function* streamItems(
   organisationId: string,
   options: ItemFilters & { sort: SortKey; order: "asc" | "desc" },
   batchSize = 1000,
-): AsyncGenerator<ItemSummary[]> {
-  const { sql, bindings } = applyFilters(base().select(SUMMARY_COLUMNS), organisationId, options)
+): AsyncGenerator<ItemRecord[]> {
+  const { sql, bindings } = applyFilters(base().select(ITEM_COLUMNS), organisationId, options)
     .orderByRaw(`${SORTABLE[options.sort]} ${options.order} nulls last, i.tag_code asc`)
     .toSQL();
   const trx = await db.transaction({ readOnly: true });
@@ -96,28 +154,24 @@ export async function* streamItems(
     for (;;) {
       const { rows } = await trx.raw(`FETCH ${Math.max(1, Math.floor(batchSize))} FROM stock_export`);
       if (!rows.length) break;
-      yield rows as ItemSummary[];
+      yield rows as ItemRecord[];
     }
   } finally {
     await trx.rollback().catch(() => undefined);
   }
 }
 
-export async function getItem(organisationId: string, id: string, trx: Knex = db): Promise<ItemSummary | undefined> {
-  return base(trx).where({ "i.organisation_id": organisationId, "i.id": id }).first(SUMMARY_COLUMNS);
+export async function getItem(organisationId: string, id: string, trx: Knex = db): Promise<ItemRecord | undefined> {
+  return base(trx).where({ "i.organisation_id": organisationId, "i.id": id }).first(ITEM_COLUMNS);
 }
 
-export async function getItemsByIds(organisationId: string, ids: string[], trx: Knex = db): Promise<ItemSummary[]> {
-  return base(trx).where("i.organisation_id", organisationId).whereIn("i.id", ids).orderBy("i.tag_code").select(SUMMARY_COLUMNS);
+export async function getItemsByIds(organisationId: string, ids: string[], trx: Knex = db): Promise<ItemRecord[]> {
+  return base(trx).where("i.organisation_id", organisationId).whereIn("i.id", ids).orderBy("i.tag_code").select(ITEM_COLUMNS);
 }
 
 /** By printed tag code, in any organisation (callers check the organisation). */
-export async function findItemByTag(tagCode: string): Promise<(ItemSummary & { organisationId: string }) | undefined> {
-  return base().where("i.tag_code", tagCode).first([...SUMMARY_COLUMNS, "i.organisation_id as organisationId"]);
-}
-
-export async function tagCodeExists(tagCode: string, trx: Knex = db): Promise<boolean> {
-  return Boolean(await trx("items").where({ tag_code: tagCode }).first("id"));
+export async function findItemByTag(tagCode: string): Promise<(ItemRecord & { organisationId: string }) | undefined> {
+  return base().where("i.tag_code", tagCode).first([...ITEM_COLUMNS, "i.organisation_id as organisationId"]);
 }
 
 export async function serialTaken(organisationId: string, serial: string, exceptId?: string, trx: Knex = db): Promise<boolean> {
@@ -126,20 +180,67 @@ export async function serialTaken(organisationId: string, serial: string, except
   return Boolean(await q.first("id"));
 }
 
-export type ItemRow = Record<string, unknown>;
-
-export async function insertItem(row: ItemRow, trx: Knex): Promise<string> {
-  const [r] = await trx("items").insert(row).returning("id");
-  return r.id;
+/** Items of the organisation with any of these serials or tag codes (an import matches its rows with them). */
+export async function findItemsByKeys(organisationId: string, serials: string[], tagCodes: string[], trx: Knex = db): Promise<ItemRecord[]> {
+  return base(trx)
+    .where("i.organisation_id", organisationId)
+    .where((w) => {
+      if (serials.length) w.orWhereIn("i.serial", serials);
+      if (tagCodes.length) w.orWhereIn("i.tag_code", tagCodes);
+    })
+    .select(ITEM_COLUMNS);
 }
 
-export async function updateItem(organisationId: string, id: string, patch: ItemRow, trx: Knex): Promise<void> {
-  await trx("items").where({ organisation_id: organisationId, id }).update({ ...patch, updated_at: trx.fn.now() });
+/** Which of these tag codes an item already has, in any organisation (codes are unique). */
+export async function existingTagCodes(codes: string[], trx: Knex = db): Promise<Set<string>> {
+  return new Set(await trx("items").whereIn("tag_code", codes).pluck("tag_code"));
 }
 
-/** A pre-use check's change: the new status, and the time of the check (the database's clock). */
-export async function setCheckedStatus(organisationId: string, id: string, status: string, trx: Knex): Promise<void> {
-  await updateItem(organisationId, id, { status, last_checked_at: trx.fn.now() }, trx);
+/** A new item: its fields, its tag code, its first status and inspection date. */
+export interface NewItem extends ItemFields {
+  organisationId: string;
+  tagCode: string;
+  status: ItemStatus;
+  nextInspectionDue: string | null;
+  /** The import that added it, so that the import can be undone. */
+  importBatchId?: string;
+}
+
+/** Inserts items; answers their ids in the same order. */
+export async function insertItems(items: NewItem[], trx: Knex): Promise<string[]> {
+  if (!items.length) return [];
+  const rows = items.map((i) => ({
+    ...fieldColumns(i),
+    organisation_id: i.organisationId,
+    tag_code: i.tagCode,
+    status: i.status,
+    next_inspection_due: i.nextInspectionDue,
+    import_batch_id: i.importBatchId ?? null,
+  }));
+  const out = await trx("items").insert(rows).returning("id");
+  return out.map((r: { id: string }) => r.id);
+}
+
+/** What a change of an item may set besides its fields. `checked` stamps the check's time with the database's clock. */
+export interface ItemUpdate extends Partial<ItemFields> {
+  status?: ItemStatus;
+  lastInspectedOn?: string;
+  nextInspectionDue?: string | null;
+  checked?: true;
+}
+
+export async function updateItem(organisationId: string, id: string, update: ItemUpdate, trx: Knex): Promise<void> {
+  const { status, lastInspectedOn, nextInspectionDue, checked, ...fields } = update;
+  await trx("items")
+    .where({ organisation_id: organisationId, id })
+    .update({
+      ...fieldColumns(fields),
+      ...(status !== undefined && { status }),
+      ...(lastInspectedOn !== undefined && { last_inspected_on: lastInspectedOn }),
+      ...(nextInspectionDue !== undefined && { next_inspection_due: nextInspectionDue }),
+      ...(checked && { last_checked_at: trx.fn.now() }),
+      updated_at: trx.fn.now(),
+    });
 }
 
 export async function setYard(organisationId: string, ids: string[], yardId: string, trx: Knex): Promise<void> {
@@ -166,22 +267,27 @@ export interface ItemEventInput {
   actorId: string | null;
 }
 
-export async function insertEvent(e: ItemEventInput, trx: Knex): Promise<number> {
-  const [row] = await trx("item_events")
-    .insert({
-      organisation_id: e.organisationId,
-      item_id: e.itemId,
-      type: e.type,
-      outcome: e.outcome ?? null,
-      checklist: e.checklist === undefined ? null : JSON.stringify(e.checklist),
-      measurements: e.measurements === undefined ? null : JSON.stringify(e.measurements),
-      note: e.note ?? null,
-      changes: e.changes === undefined ? null : JSON.stringify(e.changes),
-      corrects_event_id: e.correctsEventId ?? null,
-      actor_id: e.actorId,
-    })
+/** Appends history entries (never changed afterwards); answers their ids in the same order. */
+export async function insertEvents(events: ItemEventInput[], trx: Knex): Promise<number[]> {
+  if (!events.length) return [];
+  const json = (v: unknown) => (v === undefined ? null : JSON.stringify(v));
+  const rows = await trx("item_events")
+    .insert(
+      events.map((e) => ({
+        organisation_id: e.organisationId,
+        item_id: e.itemId,
+        type: e.type,
+        outcome: e.outcome ?? null,
+        checklist: json(e.checklist),
+        measurements: json(e.measurements),
+        note: e.note ?? null,
+        changes: json(e.changes),
+        corrects_event_id: e.correctsEventId ?? null,
+        actor_id: e.actorId,
+      })),
+    )
     .returning("id");
-  return Number(row.id);
+  return rows.map((r: { id: string | number }) => Number(r.id));
 }
 
 /** Whether an item has a history entry of that id (in the organisation). */

@@ -76,7 +76,7 @@ export async function spoolMultipart(request: Request, options: { fileField: str
   });
 
   try {
-    const body = Readable.fromWeb(request.body as unknown as WebReadableStream<Uint8Array>);
+    const body = Readable.fromWeb(request.body as WebReadableStream<Uint8Array>);
     await pipeline(body, parser);
     await Promise.all(writes);
   } catch (error) {

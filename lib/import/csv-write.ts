@@ -1,7 +1,7 @@
 // Writing CSV that a spreadsheet opens without running anything: the stock export, the
 // rejected rows of an import and the template. Pure.
 import { KIND_LABELS, STATUS_LABELS, type ItemKind, type ItemStatus } from "@/lib/stock/labels";
-import type { StoredItem } from "@/lib/stock/summary";
+import type { ItemRecord } from "@/db/items";
 
 /**
  * A cell a spreadsheet would run as a formula (it starts with =, +, -, @, a tab or a carriage
@@ -42,10 +42,10 @@ export const EXPORT_HEADERS = [
 
 /** What the export reads of a stored item. */
 export type ExportItem = Pick<
-  StoredItem,
+  ItemRecord,
   | "tagCode" | "kind" | "grade" | "gradeMarked" | "size" | "lengthMm" | "markedWllLb" | "wllLb" | "serial"
   | "status" | "yardName" | "nextInspectionDue" | "inServiceOn" | "costCents"
-> & { details: StoredItem["details"] | null };
+> & { details: ItemRecord["details"] | null };
 
 const trimZeros = (n: number, decimals: number) => String(Number(n.toFixed(decimals)));
 

@@ -5,18 +5,19 @@ import type { ItemInput } from "@/lib/stock/schemas";
 import { describeItem } from "@/lib/stock/summary";
 import type { CsvFatal, CsvRecord } from "./csv";
 import { autoMap, resolveMapping, uniqueHeaders, type ColumnMapping } from "./fields";
-import { RowReader, itemChanges, storedRow, type ExistingItem, type ReadRow, type RowError, type StoredRow } from "./row";
+import type { ItemFields } from "@/db/items";
+import { RowReader, rowChanges, storedRow, type ExistingItem, type ReadRow, type RowError } from "./row";
 
 export interface PreparedCreate {
   line: number;
   input: ItemInput;
-  row: StoredRow;
+  row: ItemFields;
 }
 
 export interface PreparedUpdate {
   line: number;
   existing: ExistingItem;
-  row: StoredRow;
+  row: ItemFields;
   changes: Record<string, [unknown, unknown]>;
 }
 
@@ -134,6 +135,7 @@ export async function runImport(records: AsyncIterable<CsvRecord | CsvFatal>, op
     return summary;
   }
 
+  const yardName = (id: string | null) => (id ? (options.yards.find((y) => y.id === id)?.name ?? null) : null);
   let writing = true; // false once a row is rejected and only valid rows may not go in
   let chunk: CsvRecord[] = [];
 
@@ -207,7 +209,6 @@ export async function runImport(records: AsyncIterable<CsvRecord | CsvFatal>, op
 
     const creates: PreparedCreate[] = [];
     const updates: PreparedUpdate[] = [];
-    const yardName = (id: string | null) => (id ? (options.yards.find((y) => y.id === id)?.name ?? null) : null);
     for (let i = 0; i < read.length; i++) {
       const r = read[i];
       const existing = matched[i];
@@ -224,7 +225,7 @@ export async function runImport(records: AsyncIterable<CsvRecord | CsvFatal>, op
       }
       const row = storedRow(checked.input, existing);
       if (existing) {
-        const changes = itemChanges(existing, row, yardName);
+        const changes = rowChanges(existing, row, yardName);
         if (Object.keys(changes).length === 0) {
           summary.unchanged++;
           preview(r.line, "unchanged", row, existing.tagCode);
@@ -243,15 +244,14 @@ export async function runImport(records: AsyncIterable<CsvRecord | CsvFatal>, op
     await store.progress?.(summary.rows);
   };
 
-  const preview = (line: number, action: PreviewRow["action"], row: StoredRow, tagCode: string | null, changes?: Record<string, [unknown, unknown]>) => {
+  const preview = (line: number, action: PreviewRow["action"], row: ItemFields, tagCode: string | null, changes?: Record<string, [unknown, unknown]>) => {
     if (summary.preview.length >= previewRows) return;
     summary.preview.push({
       line, action, tagCode,
       description: describeItem({ kind: row.kind, grade: row.grade, size: row.size, details: row.details }),
-      kind: row.kind, grade: row.grade, size: row.size, markedWllLb: row.marked_wll_lb, wllLb: row.wll_lb, wllSource: row.wll_source,
-      lengthMm: row.length_mm, serial: row.serial,
-      yardName: row.yard_id ? (options.yards.find((y) => y.id === row.yard_id)?.name ?? null) : null,
-      inServiceOn: row.in_service_on, costCents: row.cost_cents, ...(changes && { changes }),
+      kind: row.kind, grade: row.grade, size: row.size, markedWllLb: row.markedWllLb, wllLb: row.wllLb, wllSource: row.wllSource,
+      lengthMm: row.lengthMm, serial: row.serial, yardName: yardName(row.yardId),
+      inServiceOn: row.inServiceOn, costCents: row.costCents, ...(changes && { changes }),
     });
   };
 

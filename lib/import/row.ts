@@ -2,6 +2,8 @@
 // stored item when the row updates one, and then go through itemInputSchema, the same rules
 // as the add-item form and the API, including the rated-limit engine. Every problem comes
 // back as { column, message } with the column as the file names it.
+import type { ItemFields, ItemRecord } from "@/db/items";
+import { itemChanges, type ItemChanges } from "@/lib/stock/changes";
 import { itemInputSchema, type ItemInput } from "@/lib/stock/schemas";
 import type { ItemKind } from "@/lib/stock/labels";
 import { itemRow, MANAGED_DETAILS } from "@/lib/stock/row";
@@ -19,24 +21,8 @@ export interface RowError {
   message: string;
 }
 
-/** An item in stock that a row may update, as the import reads and compares it. */
-export interface ExistingItem {
-  id: string;
-  tagCode: string;
-  kind: ItemKind;
-  grade: number | null;
-  gradeMarked: boolean;
-  size: string | null;
-  lengthMm: number | null;
-  markedWllLb: number | null;
-  serial: string | null;
-  yardId: string | null;
-  inServiceOn: string | null;
-  costCents: number | null;
-  details: Record<string, unknown>;
-  wllLb: number | null;
-  wllSource: string | null;
-}
+/** An item in stock that a row may update: what the import reads of the stored item. */
+export type ExistingItem = Pick<ItemRecord, "id" | "tagCode" | keyof ItemFields>;
 
 export type InputKey = keyof ItemInput;
 
@@ -218,43 +204,19 @@ export function existingToInput(e: ExistingItem): Partial<Record<InputKey, unkno
   };
 }
 
-/** The stored row for an item input; on an update, detail keys the import does not manage are kept. */
-export function storedRow(input: ItemInput, existing?: ExistingItem) {
+/** The stored fields for an item input; on an update, detail keys the import does not manage are kept. */
+export function storedRow(input: ItemInput, existing?: ExistingItem): ItemFields {
   const row = itemRow(input);
-  const details: Record<string, unknown> = JSON.parse(row.details);
   if (existing) {
-    for (const [k, v] of Object.entries(existing.details ?? {})) if (!(MANAGED_DETAILS as readonly string[]).includes(k)) details[k] = v;
+    for (const [k, v] of Object.entries(existing.details ?? {})) if (!(MANAGED_DETAILS as readonly string[]).includes(k)) row.details[k] = v;
   }
-  return { ...row, details };
+  return row;
 }
-export type StoredRow = ReturnType<typeof storedRow>;
-
-const canonical = (v: unknown): string =>
-  v && typeof v === "object" && !Array.isArray(v)
-    ? `{${Object.keys(v).sort().map((k) => `${JSON.stringify(k)}:${canonical((v as Record<string, unknown>)[k])}`).join(",")}}`
-    : JSON.stringify(v ?? null);
 
 /**
  * What an update changes, as the item's history shows edits: { field: [before, after] }.
  * Empty when the row repeats what is stored.
  */
-export function itemChanges(existing: ExistingItem, row: StoredRow, yardName: (id: string | null) => string | null): Record<string, [unknown, unknown]> {
-  const pairs: [string, unknown, unknown][] = [
-    ["grade", existing.grade, row.grade],
-    ["gradeMarked", existing.gradeMarked, row.grade_marked],
-    ["size", existing.size, row.size],
-    ["lengthMm", existing.lengthMm, row.length_mm],
-    ["markedWllLb", existing.markedWllLb, row.marked_wll_lb],
-    ["wllLb", existing.wllLb, row.wll_lb],
-    ["serial", existing.serial, row.serial],
-    ["yardName", yardName(existing.yardId), yardName(row.yard_id)],
-    ["inServiceOn", existing.inServiceOn, row.in_service_on],
-    ["costCents", existing.costCents, row.cost_cents],
-    ["details", existing.details ?? {}, row.details],
-  ];
-  const out: Record<string, [unknown, unknown]> = {};
-  for (const [k, a, b] of pairs) if (canonical(a) !== canonical(b)) out[k] = [a, b];
-  // the yard may change without its name changing only if two yards share a name: they cannot
-  if (existing.yardId !== row.yard_id && !out.yardName) out.yardName = [yardName(existing.yardId), yardName(row.yard_id)];
-  return out;
+export function rowChanges(existing: ExistingItem, row: ItemFields, yardName: (id: string | null) => string | null): ItemChanges {
+  return itemChanges({ ...existing, yardName: yardName(existing.yardId) }, { ...row, yardName: yardName(row.yardId) });
 }

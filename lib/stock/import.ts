@@ -8,21 +8,21 @@ import { finished } from "node:stream/promises";
 import { rolledBack, type Tx } from "@/db";
 import { audited } from "@/db/audit";
 import * as imports from "@/db/imports";
-import { listYards } from "@/db/items";
+import { findItemsByKeys, insertEvents, insertItems, listYards, updateItem, type ItemEventInput } from "@/db/items";
 import type { Principal } from "@/lib/auth/session";
 import { can } from "@/lib/auth/roles";
 import { csvLine } from "@/lib/import/csv-write";
 import { detectEncoding, ENCODING_WORDS, fileRefusal, MAX_IMPORT_BYTES } from "@/lib/import/file-check";
 import { commitRefusal, runImport, type ImportStore, type ImportSummary, type PreparedCreate, type PreparedUpdate } from "@/lib/import/pipeline";
-import type { ExistingItem } from "@/lib/import/row";
 import { openCsv } from "@/lib/import/source";
 import { AppError, conflict, forbidden, notFound } from "@/lib/http/errors";
 import type { SpooledFile } from "@/lib/http/multipart";
 import { inspectionIntervals } from "@/lib/organisations/service";
 import { removeStored, storeFromDisk } from "@/lib/storage/files";
-import { newTagCode } from "@/lib/tags/code";
+import { itemChanges } from "./changes";
 import { nextDue } from "./intervals";
 import type { ItemKind } from "./labels";
+import { freshTagCodes } from "./tag-codes";
 
 // The CSV import of stock. A commit is ONE transaction: every row goes in, or, when the owner
 // chose "only the valid rows", every valid row goes in and the rejected rows are kept as a
@@ -127,7 +127,7 @@ export async function importStock(actor: Principal, request: ImportRequest): Pro
 /** The store of a dry run: it reads stock and notes duplicates, and writes nothing. */
 function readingStore(trx: Tx, organisationId: string): ImportStore {
   return {
-    findExisting: ({ serials, tagCodes }) => imports.findExisting(trx, organisationId, serials, tagCodes),
+    findExisting: ({ serials, tagCodes }) => findItemsByKeys(organisationId, serials, tagCodes, trx),
     firstSeen: (entries) => imports.firstSeen(trx, entries),
   };
 }
@@ -251,70 +251,47 @@ class Refused {
   constructor(readonly answer: ImportAnswer) {}
 }
 
-/** Tag codes no item has yet, drawn at random and checked in one query per chunk. */
-async function freshTagCodes(trx: Tx, count: number): Promise<string[]> {
-  const codes = new Set<string>();
-  for (let round = 0; codes.size < count; round++) {
-    if (round > 5) throw new Error("could not draw free tag codes");
-    const drawn = new Set<string>();
-    while (drawn.size < count - codes.size) {
-      const c = newTagCode();
-      if (!codes.has(c)) drawn.add(c);
-    }
-    const taken = await imports.existingTagCodes(trx, [...drawn]);
-    for (const c of drawn) if (!taken.has(c)) codes.add(c);
-  }
-  return [...codes];
-}
-
 async function writeCreates(
   trx: Tx, actor: Principal, batchId: string, creates: PreparedCreate[], intervals: Record<ItemKind, number>, note: (line: number) => string,
 ): Promise<number> {
-  const codes = await freshTagCodes(trx, creates.length);
-  const ids = await imports.insertItems(
-    trx,
+  const codes = await freshTagCodes(creates.length, trx);
+  const ids = await insertItems(
     creates.map((c, i) => ({
       ...c.row,
-      details: JSON.stringify(c.row.details),
-      organisation_id: actor.organisationId,
-      tag_code: codes[i],
+      organisationId: actor.organisationId,
+      tagCode: codes[i],
       status: "in_service",
-      next_inspection_due: nextDue(c.input.inServiceOn ?? today(), intervals[c.input.kind]),
-      import_batch_id: batchId,
+      nextInspectionDue: nextDue(c.input.inServiceOn ?? today(), intervals[c.input.kind]),
+      importBatchId: batchId,
     })),
-  );
-  return imports.insertEvents(
     trx,
-    ids.map((id, i) => ({ organisation_id: actor.organisationId, item_id: id, type: "imported", note: note(creates[i].line), actor_id: actor.userId })),
   );
-}
-
-/** The stored columns of an item that an import may replace, as they were. */
-function columnsOf(e: ExistingItem) {
-  return {
-    grade: e.grade, grade_marked: e.gradeMarked, size: e.size, length_mm: e.lengthMm, marked_wll_lb: e.markedWllLb, serial: e.serial,
-    yard_id: e.yardId, in_service_on: e.inServiceOn, cost_cents: e.costCents, details: e.details ?? {}, wll_lb: e.wllLb, wll_source: e.wllSource,
-  };
+  const events = await insertEvents(
+    ids.map((id, i) => ({ organisationId: actor.organisationId, itemId: id, type: "imported", note: note(creates[i].line), actorId: actor.userId })),
+    trx,
+  );
+  return Math.max(...events);
 }
 
 async function writeUpdates(trx: Tx, actor: Principal, batchId: string, updates: PreparedUpdate[], note: (line: number) => string): Promise<number> {
-  for (const u of updates) {
-    const { kind: _kind, ...row } = u.row;
-    await imports.updateItemRow(trx, actor.organisationId, u.existing.id, { ...row, details: JSON.stringify(row.details) });
-  }
+  // The kind of an item never changes; everything else the row decides is written.
+  const written = updates.map((u) => {
+    const { kind: _kind, ...fields } = u.row;
+    return fields;
+  });
+  for (const [i, u] of updates.entries()) await updateItem(actor.organisationId, u.existing.id, written[i], trx);
   await imports.insertUpdates(
     trx,
-    updates.map((u) => {
-      const { kind: _kind, ...after } = u.row;
-      return { batch_id: batchId, item_id: u.existing.id, before: JSON.stringify(columnsOf(u.existing)), after: JSON.stringify(after) };
+    updates.map((u, i) => {
+      const { id: _id, tagCode: _tagCode, kind: _kind, ...before } = u.existing;
+      return { batchId, itemId: u.existing.id, before: { ...before, details: before.details ?? {} }, after: written[i] };
     }),
   );
-  return imports.insertEvents(
+  const events = await insertEvents(
+    updates.map((u) => ({ organisationId: actor.organisationId, itemId: u.existing.id, type: "edited", note: note(u.line), changes: u.changes, actorId: actor.userId })),
     trx,
-    updates.map((u) => ({
-      organisation_id: actor.organisationId, item_id: u.existing.id, type: "edited", note: note(u.line), changes: JSON.stringify(u.changes), actor_id: actor.userId,
-    })),
   );
+  return Math.max(...events);
 }
 
 /**
@@ -342,20 +319,15 @@ export async function undoImport(actor: Principal, batchId: string): Promise<{ r
     const retired = await imports.retireBatchItems(trx, actor.organisationId, batchId, actor.userId);
     const updates = await imports.updatesOf(trx, batchId);
     const yards = new Map((await listYards(actor.organisationId)).map((y) => [y.id, y.name]));
-    const events = [];
-    for (const u of updates) {
-      const before = u.before as Record<string, unknown>;
-      const after = u.after as Record<string, unknown>;
-      await imports.updateItemRow(trx, actor.organisationId, u.itemId, { ...before, details: JSON.stringify(before.details ?? {}) });
-      const changes: Record<string, [unknown, unknown]> = {};
-      for (const [k, v] of Object.entries(before)) {
-        if (k === "wll_source" || JSON.stringify(after[k]) === JSON.stringify(v)) continue;
-        if (k === "yard_id") changes.yardName = [yards.get(after[k] as string) ?? null, yards.get(v as string) ?? null];
-        else changes[k.replace(/_([a-z])/g, (_m, c: string) => c.toUpperCase())] = [after[k], v];
-      }
-      events.push({ organisation_id: actor.organisationId, item_id: u.itemId, type: "edited", note: "Import undone", changes: JSON.stringify(changes), actor_id: actor.userId });
+    const yardName = (id: string | null | undefined) => (id ? (yards.get(id) ?? null) : null);
+    const events: ItemEventInput[] = [];
+    for (const { itemId, before, after } of updates) {
+      await updateItem(actor.organisationId, itemId, { ...before, details: before.details ?? {} }, trx);
+      // from what the import wrote back to what it replaced
+      const changes = itemChanges({ ...after, yardName: yardName(after.yardId) }, { ...before, yardName: yardName(before.yardId) });
+      events.push({ organisationId: actor.organisationId, itemId, type: "edited", note: "Import undone", changes, actorId: actor.userId });
     }
-    for (let i = 0; i < events.length; i += CHUNK) await imports.insertEvents(trx, events.slice(i, i + CHUNK));
+    for (let i = 0; i < events.length; i += CHUNK) await insertEvents(events.slice(i, i + CHUNK), trx);
     await imports.markUndone(trx, batchId, actor.userId);
     await audit({ action: "items.import_undone", entity: "import_batch", entityId: batchId, after: { retired, restored: updates.length } });
     return { retired, restored: updates.length };

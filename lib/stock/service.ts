@@ -11,15 +11,16 @@ import { inspectionIntervals } from "@/lib/organisations/service";
 import { damageReportMail } from "@/lib/mail/templates";
 import { removeStored, storeUpload, type StoredFile } from "@/lib/storage/files";
 import type { FilePurpose } from "@/lib/storage/file-type";
-import { newTagCode } from "@/lib/tags/code";
 import { preUseOutcome, type CheckAnswer } from "./checklists";
 import { evaluateMeasurements, verdictProblem, type InspectionVerdict } from "./inspection";
 import { nextDue } from "./intervals";
 import type { ItemKind, ItemStatus } from "./labels";
+import { itemChanges } from "./changes";
 import { itemRow } from "./row";
 import type { ItemInput } from "./schemas";
 import { nextStatus, type StatusChange } from "./status";
 import { describeItem } from "./summary";
+import { freshTagCodes } from "./tag-codes";
 
 // Everything that changes stock goes through here: permission, organisation, business rule,
 // then one transaction that writes the item, its history event and an audit row.
@@ -39,32 +40,18 @@ async function checkReferences(actor: Principal, input: ItemInput, exceptId: str
   }
 }
 
-/** A tag code no item has yet (codes are random; a clash is rare but checked). */
-export async function freshTagCode(trx: Tx): Promise<string> {
-  for (let i = 0; i < 5; i++) {
-    const code = newTagCode();
-    if (!(await items.tagCodeExists(code, trx))) return code;
-  }
-  throw new Error("could not draw a free tag code");
-}
-
 export async function createItem(actor: Principal, input: ItemInput): Promise<string> {
   require(actor, "stock.edit");
   const intervals = await inspectionIntervals(actor.organisationId);
   return audited(actor, async (trx, audit) => {
     await checkReferences(actor, input, undefined, trx);
     const row = itemRow(input);
-    const id = await items.insertItem(
-      {
-        ...row,
-        organisation_id: actor.organisationId,
-        tag_code: await freshTagCode(trx),
-        status: "in_service",
-        next_inspection_due: nextDue(input.inServiceOn ?? today(), intervals[input.kind]),
-      },
+    const [tagCode] = await freshTagCodes(1, trx);
+    const [id] = await items.insertItems(
+      [{ ...row, organisationId: actor.organisationId, tagCode, status: "in_service", nextInspectionDue: nextDue(input.inServiceOn ?? today(), intervals[input.kind]) }],
       trx,
     );
-    await items.insertEvent({ organisationId: actor.organisationId, itemId: id, type: "created", actorId: actor.userId, note: "Added to stock" }, trx);
+    await items.insertEvents([{ organisationId: actor.organisationId, itemId: id, type: "created", actorId: actor.userId, note: "Added to stock" }], trx);
     await audit({ action: "item.created", entity: "item", entityId: id, after: row });
     return id;
   });
@@ -79,22 +66,12 @@ export async function editItem(actor: Principal, id: string, input: ItemInput): 
     await checkReferences(actor, input, id, trx);
     const row = itemRow(input);
     await items.updateItem(actor.organisationId, id, row, trx);
-    const after = await items.getItem(actor.organisationId, id, trx);
-    const changes = diff(before as unknown as Record<string, unknown>, after as unknown as Record<string, unknown>);
+    const after = (await items.getItem(actor.organisationId, id, trx))!;
+    const changes = itemChanges(before, after);
     if (Object.keys(changes).length === 0) return;
-    await items.insertEvent({ organisationId: actor.organisationId, itemId: id, type: "edited", actorId: actor.userId, changes }, trx);
+    await items.insertEvents([{ organisationId: actor.organisationId, itemId: id, type: "edited", actorId: actor.userId, changes }], trx);
     await audit({ action: "item.updated", entity: "item", entityId: id, before, after });
   });
-}
-
-const TRACKED = ["grade", "gradeMarked", "size", "lengthMm", "markedWllLb", "wllLb", "serial", "yardName", "details"] as const;
-
-function diff(before: Record<string, unknown>, after: Record<string, unknown> | undefined) {
-  const out: Record<string, [unknown, unknown]> = {};
-  for (const key of TRACKED) {
-    if (JSON.stringify(before[key]) !== JSON.stringify(after?.[key])) out[key] = [before[key], after?.[key]];
-  }
-  return out;
 }
 
 export async function moveItems(actor: Principal, itemIds: string[], yardId: string): Promise<number> {
@@ -105,9 +82,10 @@ export async function moveItems(actor: Principal, itemIds: string[], yardId: str
     // One read and one update for the whole selection; ids of other organisations drop out here.
     const toMove = (await items.getItemsByIds(actor.organisationId, itemIds, trx)).filter((i) => i.yardId !== yardId);
     if (toMove.length) await items.setYard(actor.organisationId, toMove.map((i) => i.id), yardId, trx);
-    for (const before of toMove) {
-      await items.insertEvent({ organisationId: actor.organisationId, itemId: before.id, type: "moved", actorId: actor.userId, changes: { yardName: [before.yardName, yard.name] } }, trx);
-    }
+    await items.insertEvents(
+      toMove.map((before) => ({ organisationId: actor.organisationId, itemId: before.id, type: "moved", actorId: actor.userId, changes: { yardName: [before.yardName, yard.name] } })),
+      trx,
+    );
     const moved = toMove.length;
     await audit({ action: "items.moved", entity: "yard", entityId: yardId, after: { itemIds, moved } });
     return moved;
@@ -137,7 +115,7 @@ async function withUpload<T>(
 async function changeStatus(trx: Tx, actor: Principal, id: string, change: StatusChange) {
   const item = await items.lockItem(actor.organisationId, id, trx);
   if (!item) throw notFound("No such item in your stock.");
-  const next = nextStatus(item.status as ItemStatus, change);
+  const next = nextStatus(item.status, change);
   if ("error" in next) throw new AppError(409, next.error);
   return { item, status: next.status };
 }
@@ -156,7 +134,7 @@ export async function recordPreUseCheck(actor: Principal, id: string, input: Pre
   require(actor, "items.check");
   const current = await items.getItem(actor.organisationId, id);
   if (!current) throw notFound("No such item in your stock.");
-  const outcome = preUseOutcome(current.kind as ItemKind, input.answers);
+  const outcome = preUseOutcome(current.kind, input.answers);
   if ("error" in outcome) throw badRequest(outcome.error, [{ path: "answers", message: outcome.error }]);
   if (outcome.outcome === "fail" && !input.note?.trim() && !(input.photo && input.photo.size > 0)) {
     throw fieldError("note", "Say what is wrong, or add a photo, so the owner can judge the damage.");
@@ -164,15 +142,11 @@ export async function recordPreUseCheck(actor: Principal, id: string, input: Pre
   const result = await withUpload(actor, input.photo, "damage-photo", "photo", (stored) =>
     audited(actor, async (trx, audit) => {
       const { status } = await changeStatus(trx, actor, id, outcome.outcome === "pass" ? "check_pass" : "check_fail");
-      const eventId = await items.insertEvent(
-        { organisationId: actor.organisationId, itemId: id, type: "check", outcome: outcome.outcome, checklist: outcome.checklist, note: input.note?.trim() || null, actorId: actor.userId },
-        trx,
-      );
-      if (outcome.outcome === "fail") {
-        await items.insertEvent({ organisationId: actor.organisationId, itemId: id, type: "tag_out", actorId: actor.userId, note: "Tagged out by a failed pre-use check" }, trx);
-      }
+      const check = { organisationId: actor.organisationId, itemId: id, type: "check", outcome: outcome.outcome, checklist: outcome.checklist, note: input.note?.trim() || null, actorId: actor.userId };
+      const tagOut = { organisationId: actor.organisationId, itemId: id, type: "tag_out", actorId: actor.userId, note: "Tagged out by a failed pre-use check" };
+      const [eventId] = await items.insertEvents(outcome.outcome === "fail" ? [check, tagOut] : [check], trx);
       if (stored) await items.insertAttachment({ organisationId: actor.organisationId, itemId: id, eventId, purpose: "damage-photo", ...stored, createdBy: actor.userId }, trx);
-      await items.setCheckedStatus(actor.organisationId, id, status, trx);
+      await items.updateItem(actor.organisationId, id, { status, checked: true }, trx);
       await audit({ action: `item.check_${outcome.outcome}`, entity: "item", entityId: id, after: { status } });
       return { outcome: outcome.outcome, status, defects: outcome.defects };
     }),
@@ -189,7 +163,7 @@ export async function tagOut(actor: Principal, id: string, input: { note: string
   await withUpload(actor, input.photo, "damage-photo", "photo", (stored) =>
     audited(actor, async (trx, audit) => {
       const { status } = await changeStatus(trx, actor, id, "tag_out");
-      const eventId = await items.insertEvent({ organisationId: actor.organisationId, itemId: id, type: "tag_out", note: input.note, actorId: actor.userId }, trx);
+      const [eventId] = await items.insertEvents([{ organisationId: actor.organisationId, itemId: id, type: "tag_out", note: input.note, actorId: actor.userId }], trx);
       if (stored) await items.insertAttachment({ organisationId: actor.organisationId, itemId: id, eventId, purpose: "damage-photo", ...stored, createdBy: actor.userId }, trx);
       await items.updateItem(actor.organisationId, id, { status }, trx);
       await audit({ action: "item.tagged_out", entity: "item", entityId: id, after: { status, note: input.note } });
@@ -198,7 +172,7 @@ export async function tagOut(actor: Principal, id: string, input: { note: string
   await notifyOwners(actor, current, [], input.note);
 }
 
-async function notifyOwners(actor: Principal, item: items.ItemSummary, defects: string[], note: string | null) {
+async function notifyOwners(actor: Principal, item: items.ItemRecord, defects: string[], note: string | null) {
   const owners = await items.ownersOf(actor.organisationId);
   await Promise.all(
     owners.map((o) =>
@@ -222,7 +196,7 @@ export async function recordInspection(actor: Principal, id: string, input: Insp
   require(actor, "items.inspect");
   const current = await items.getItem(actor.organisationId, id);
   if (!current) throw notFound("No such item in your stock.");
-  const kind = current.kind as ItemKind;
+  const kind = current.kind;
   const outcome = preUseOutcome(kind, input.answers);
   if ("error" in outcome) throw badRequest(outcome.error, [{ path: "answers", message: outcome.error }]);
   const measured = evaluateMeasurements(kind, current.size, input.measurements);
@@ -233,15 +207,15 @@ export async function recordInspection(actor: Principal, id: string, input: Insp
   return withUpload(actor, input.certificate, "certificate", "certificate", (stored) =>
     audited(actor, async (trx, audit) => {
       const { status } = await changeStatus(trx, actor, id, change);
-      const eventId = await items.insertEvent(
-        { organisationId: actor.organisationId, itemId: id, type: "inspection", outcome: input.verdict, checklist: outcome.checklist, measurements: measured, note: input.note?.trim() || null, actorId: actor.userId },
+      const [eventId] = await items.insertEvents(
+        [{ organisationId: actor.organisationId, itemId: id, type: "inspection", outcome: input.verdict, checklist: outcome.checklist, measurements: measured, note: input.note?.trim() || null, actorId: actor.userId }],
         trx,
       );
       if (stored) await items.insertAttachment({ organisationId: actor.organisationId, itemId: id, eventId, purpose: "certificate", ...stored, createdBy: actor.userId }, trx);
       await items.updateItem(
         actor.organisationId,
         id,
-        { status, last_inspected_on: today(), next_inspection_due: input.verdict === "retire" ? null : nextDue(today(), intervals[kind]) },
+        { status, lastInspectedOn: today(), nextInspectionDue: input.verdict === "retire" ? null : nextDue(today(), intervals[kind]) },
         trx,
       );
       await audit({ action: "item.inspected", entity: "item", entityId: id, after: { status, verdict: input.verdict } });
@@ -267,7 +241,7 @@ export async function changeWithReason(
   const eventType = { return_to_service: "return_to_service", retire: "retired", lost: "lost", found: "found" }[change];
   await audited(actor, async (trx, audit) => {
     const { status } = await changeStatus(trx, actor, id, change);
-    await items.insertEvent({ organisationId: actor.organisationId, itemId: id, type: eventType, note: reason, actorId: actor.userId }, trx);
+    await items.insertEvents([{ organisationId: actor.organisationId, itemId: id, type: eventType, note: reason, actorId: actor.userId }], trx);
     await items.updateItem(actor.organisationId, id, { status }, trx);
     await audit({ action: `item.${eventType}`, entity: "item", entityId: id, after: { status, reason } });
   });
@@ -278,7 +252,7 @@ export async function correctEvent(actor: Principal, itemId: string, eventId: nu
   require(actor, "items.check");
   await audited(actor, async (trx, audit) => {
     if (!(await items.eventExists(actor.organisationId, itemId, eventId, trx))) throw notFound("No such event on this item.");
-    await items.insertEvent({ organisationId: actor.organisationId, itemId, type: "correction", correctsEventId: eventId, note, actorId: actor.userId }, trx);
+    await items.insertEvents([{ organisationId: actor.organisationId, itemId, type: "correction", correctsEventId: eventId, note, actorId: actor.userId }], trx);
     await audit({ action: "item.event_corrected", entity: "item", entityId: itemId, after: { eventId, note } });
   });
 }

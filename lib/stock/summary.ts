@@ -1,3 +1,4 @@
+import type { ItemRecord } from "@/db/items";
 import { KIND_LABELS, STATUS_LABELS, type ItemKind, type ItemStatus } from "./labels";
 
 const KG_PER_LB = 0.45359237; // exact, by the 1959 international agreement
@@ -23,32 +24,8 @@ export function describeItem(item: { kind: string; grade: number | null; size: s
   return parts.join(", ");
 }
 
-/** An item as the data layer reads it (db/items.ts), one row per physical piece of gear. */
-export interface StoredItem {
-  id: string;
-  tagCode: string;
-  kind: string;
-  grade: number | null;
-  gradeMarked: boolean;
-  size: string | null;
-  lengthMm: number | null;
-  markedWllLb: number | null;
-  wllLb: number | null;
-  wllSource: string | null;
-  serial: string | null;
-  status: string;
-  yardId: string | null;
-  yardName: string | null;
-  nextInspectionDue: string | null;
-  lastCheckedAt: Date | string | null;
-  lastInspectedOn: string | null;
-  details: Record<string, unknown>;
-  inServiceOn: string | null;
-  costCents: number | null;
-}
-
 /** The item as every API and scan screen answers it. */
-export function toItemSummary(row: StoredItem) {
+export function toItemSummary(row: ItemRecord) {
   return {
     id: row.id,
     tagCode: row.tagCode,

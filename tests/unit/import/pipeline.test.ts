@@ -14,7 +14,7 @@ describe("importing rows", () => {
     const store = new MemoryStore();
     const s = await run("Type,Grade,Size,WLL (lb),Takes chain,Serial,Yard,Length (ft)\nchain,G70,3/8\",,,A1,home yard,20\nratchet binder,,,5400,5/16-3/8,B1,,\n", store);
     expect(s).toMatchObject({ rows: 2, created: 2, updated: 0, rejected: 0, errors: [], fatal: false });
-    expect(store.creates.map((c) => [c.line, c.row.kind, c.row.grade, c.row.size, c.row.wll_lb, c.row.marked_wll_lb, c.row.serial, c.row.yard_id, c.row.length_mm])).toEqual([
+    expect(store.creates.map((c) => [c.line, c.row.kind, c.row.grade, c.row.size, c.row.wllLb, c.row.markedWllLb, c.row.serial, c.row.yardId, c.row.lengthMm])).toEqual([
       [2, "chain", 70, "3/8", 6600, null, "A1", yards[0].id, 6096],
       [3, "binder", null, "3/8", 5400, 5400, "B1", null, null],
     ]);
@@ -24,7 +24,7 @@ describe("importing rows", () => {
   it("derives the marking: a WLL means WLL marked, a grade means grade only, else none", async () => {
     const store = new MemoryStore();
     await run("Kind,Grade,Size,WLL lb\nchain,70,3/8,7000\nchain,70,3/8,\nchain,,3/8,\n", store);
-    expect(store.creates.map((c) => [c.input.marking, c.row.wll_lb, c.row.grade_marked])).toEqual([
+    expect(store.creates.map((c) => [c.input.marking, c.row.wllLb, c.row.gradeMarked])).toEqual([
       ["wll", 7000, true],
       ["grade", 6600, true],
       ["none", 2650, false], // 49 CFR 393.108(d): chain without a legible grade mark is rated as grade 30
