@@ -6,7 +6,7 @@ import { useId, useRef, useState } from "react";
 import { buttonClass } from "@/components/ui/button-class";
 import { FIELD_LABELS, IMPORT_FIELDS, type ColumnMapping, type ImportField } from "@/lib/import/fields";
 import { MAX_IMPORT_BYTES } from "@/lib/import/file-check";
-import type { BatchJson, ImportBody } from "@/lib/stock/import";
+import type { BatchJson, ImportBody } from "@/lib/import/answers";
 import { ErrorTable, PreviewTable } from "./import-tables";
 
 type Step = "upload" | "mapping" | "preview";

@@ -4,7 +4,8 @@ import { MAX_IMPORT_BYTES } from "@/lib/import/file-check";
 import { badRequest, fieldError, zodIssues } from "@/lib/http/errors";
 import { spoolMultipart } from "@/lib/http/multipart";
 import { route } from "@/lib/http/route";
-import { batchJson, importStock } from "@/lib/stock/import";
+import { batchJson } from "@/lib/import/answers";
+import { importStock } from "@/lib/import/commit";
 
 /** The organisation's imports, newest first. */
 export const GET = route("stock.import", {}, async ({ principal }) => {

@@ -6,7 +6,7 @@ import { buttonClass } from "@/components/ui/button-class";
 import { createdItemIds, getBatch } from "@/db/imports";
 import { requirePage } from "@/lib/auth/session";
 import { isUuid } from "@/lib/http/ids";
-import { undoState } from "@/lib/stock/import";
+import { undoState } from "@/lib/import/undo";
 
 export const metadata: Metadata = { title: "Import" };
 

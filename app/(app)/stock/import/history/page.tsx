@@ -3,7 +3,7 @@ import Link from "next/link";
 import { UndoImportButton } from "@/components/import/undo-import";
 import { listBatches } from "@/db/imports";
 import { requirePage } from "@/lib/auth/session";
-import { undoState } from "@/lib/stock/import";
+import { undoState } from "@/lib/import/undo";
 
 export const metadata: Metadata = { title: "Import history" };
 

@@ -1,7 +1,8 @@
 import { getBatch } from "@/db/imports";
 import { notFound, uuidParam } from "@/lib/http/errors";
 import { route } from "@/lib/http/route";
-import { batchJson, undoState } from "@/lib/stock/import";
+import { batchJson } from "@/lib/import/answers";
+import { undoState } from "@/lib/import/undo";
 
 /** One import: counts, and its progress while it runs (the import page polls this). */
 export const GET = route("stock.import", {}, async ({ principal, params }) => {

@@ -1,7 +1,7 @@
 import { listMappings } from "@/db/imports";
 import { savedMappingSchema } from "@/lib/import/api-schemas";
 import { route } from "@/lib/http/route";
-import { saveMapping } from "@/lib/stock/import";
+import { saveMapping } from "@/lib/import/mappings";
 
 /** Column mappings saved by name, for the next file from the same supplier. */
 export const GET = route("stock.import", {}, async ({ principal }) => {

@@ -2,7 +2,7 @@ import { streamItems } from "@/db/items";
 import { csvLine, EXPORT_HEADERS, exportRow } from "@/lib/import/csv-write";
 import { route } from "@/lib/http/route";
 import { itemListQuerySchema } from "@/lib/stock/api-schemas";
-import { attachment } from "@/lib/stock/import";
+import { csvDownloadHeaders } from "@/lib/http/download";
 
 /**
  * The stock as CSV, with the stock table's filters and sort (kind, status, yardId, due, q,
@@ -36,5 +36,5 @@ export const GET = route("stock.edit", { query: itemListQuerySchema }, async ({ 
     },
   });
   const day = new Date().toISOString().slice(0, 10);
-  return new Response(stream, { headers: attachment(`linkyard-stock-${day}.csv`) });
+  return new Response(stream, { headers: csvDownloadHeaders(`linkyard-stock-${day}.csv`) });
 });

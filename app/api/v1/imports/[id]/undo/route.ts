@@ -1,6 +1,6 @@
 import { uuidParam } from "@/lib/http/errors";
 import { route } from "@/lib/http/route";
-import { undoImport } from "@/lib/stock/import";
+import { undoImport } from "@/lib/import/undo";
 
 /** Undoes an import whose items have not been used since (see undoImport for what that means). */
 export const POST = route("stock.import", {}, async ({ principal, params }) => {

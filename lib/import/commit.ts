@@ -8,23 +8,24 @@ import { finished } from "node:stream/promises";
 import { rolledBack, type Tx } from "@/db";
 import { audited } from "@/db/audit";
 import * as imports from "@/db/imports";
-import { findItemsByKeys, insertEvents, insertItems, listYards, updateItem, type ItemEventInput } from "@/db/items";
+import { findItemsByKeys, insertEvents, insertItems, listYards, updateItem } from "@/db/items";
 import type { Principal } from "@/lib/auth/session";
 import { can } from "@/lib/auth/roles";
-import { csvLine } from "@/lib/import/csv-write";
-import { detectEncoding, ENCODING_WORDS, fileRefusal, MAX_IMPORT_BYTES } from "@/lib/import/file-check";
-import { commitRefusal, runImport, type ImportStore, type ImportSummary, type PreparedCreate, type PreparedUpdate } from "@/lib/import/pipeline";
-import { openCsv } from "@/lib/import/source";
-import { AppError, conflict, forbidden, notFound } from "@/lib/http/errors";
+import { AppError, conflict, forbidden } from "@/lib/http/errors";
 import type { SpooledFile } from "@/lib/http/multipart";
 import { inspectionIntervals } from "@/lib/organisations/service";
+import { nextDue } from "@/lib/stock/intervals";
+import type { ItemKind } from "@/lib/stock/labels";
+import { freshTagCodes } from "@/lib/stock/tag-codes";
 import { removeStored, storeFromDisk } from "@/lib/storage/files";
-import { itemChanges } from "./changes";
-import { nextDue } from "./intervals";
-import type { ItemKind } from "./labels";
-import { freshTagCodes } from "./tag-codes";
+import { emptySummary, importBody, type ImportBody } from "./answers";
+import { csvLine } from "./csv-write";
+import { detectEncoding, ENCODING_WORDS, fileRefusal, MAX_IMPORT_BYTES } from "./file-check";
+import { commitRefusal, runImport, type ImportStore, type PreparedCreate, type PreparedUpdate } from "./pipeline";
+import { openCsv } from "./source";
 
-// The CSV import of stock. A commit is ONE transaction: every row goes in, or, when the owner
+// The CSV import of stock, from the uploaded file to the database and the file store (the
+// reading and checking of rows is pipeline.ts; undo is undo.ts). A commit is ONE transaction: every row goes in, or, when the owner
 // chose "only the valid rows", every valid row goes in and the rejected rows are kept as a
 // file to fix and upload again; on any refusal or failure nothing of the file is left behind.
 // The upload is read from disk as a stream and written in chunks of 1,000 rows, so memory
@@ -44,19 +45,8 @@ export interface ImportAnswer {
   body: ImportBody;
 }
 
-export type ImportBody = ImportSummary & {
-  error?: string;
-  batchId: string | null;
-  dryRun: boolean;
-  validOnly: boolean;
-  fileName: string;
-  delimiter: string | null;
-  encoding: string;
-  tagSheet: string | null;
-  rejectedFile: string | null;
-};
-
-const CHUNK = 1000;
+/** Rows read and written at a time: memory holds one chunk, whatever the file's size. */
+export const IMPORT_CHUNK_ROWS = 1000;
 const TAG_SHEET_MAX = 200;
 const today = () => new Date().toISOString().slice(0, 10);
 
@@ -67,31 +57,6 @@ async function* counted(source: AsyncIterable<Buffer>, into: { bytes: number }) 
     yield chunk as Uint8Array;
   }
 }
-
-function body(summary: ImportSummary, extra: Partial<ImportBody> & Pick<ImportBody, "fileName" | "encoding" | "delimiter" | "dryRun" | "validOnly">): ImportBody {
-  const s = summary;
-  // the counts and the errors first: what a caller reads
-  return {
-    ...(extra.error && { error: extra.error }),
-    batchId: extra.batchId ?? null,
-    dryRun: extra.dryRun,
-    validOnly: extra.validOnly,
-    fileName: extra.fileName,
-    delimiter: extra.delimiter,
-    encoding: extra.encoding,
-    rows: s.rows, created: s.created, updated: s.updated, unchanged: s.unchanged, rejected: s.rejected,
-    errors: s.errors, errorCount: s.errorCount, fatal: s.fatal,
-    headers: s.headers, mapping: s.mapping, autoMapping: s.autoMapping, unknownColumns: s.unknownColumns, setByLinkyard: s.setByLinkyard,
-    sample: s.sample, preview: s.preview,
-    tagSheet: extra.tagSheet ?? null,
-    rejectedFile: extra.rejectedFile ?? null,
-  };
-}
-
-const emptySummary = (): ImportSummary => ({
-  headers: [], mapping: {}, autoMapping: {}, unknownColumns: [], setByLinkyard: [], sample: [], rows: 0,
-  created: 0, updated: 0, unchanged: 0, rejected: 0, errors: [], errorCount: 0, fatal: true, preview: [],
-});
 
 /** Checks a file (a dry run, nothing written) or commits it. */
 export async function importStock(actor: Principal, request: ImportRequest): Promise<ImportAnswer> {
@@ -108,10 +73,10 @@ export async function importStock(actor: Principal, request: ImportRequest): Pro
     const summary = emptySummary();
     summary.errors.push({ line: 1, column: null, message: csv.error });
     summary.errorCount = 1;
-    return { status: request.dryRun ? 200 : 422, body: body(summary, { ...common, delimiter: null, error: request.dryRun ? undefined : commitRefusal(summary, request.validOnly)! }) };
+    return { status: request.dryRun ? 200 : 422, body: importBody(summary, { ...common, delimiter: null, error: request.dryRun ? undefined : commitRefusal(summary, request.validOnly)! }) };
   }
   const yards = await listYards(actor.organisationId);
-  const options = { mapping: request.mapping, yards, validOnly: request.validOnly, chunkSize: CHUNK };
+  const options = { mapping: request.mapping, yards, validOnly: request.validOnly, chunkSize: IMPORT_CHUNK_ROWS };
   const withDelimiter = { ...common, delimiter: csv.delimiterName };
 
   if (request.dryRun) {
@@ -119,7 +84,7 @@ export async function importStock(actor: Principal, request: ImportRequest): Pro
       await imports.createSeenTable(tx);
       return runImport(csv.records, options, readingStore(tx, actor.organisationId));
     });
-    return { status: 200, body: body(summary, withDelimiter) };
+    return { status: 200, body: importBody(summary, withDelimiter) };
   }
   return commit(actor, request, csv.records, options, withDelimiter, read);
 }
@@ -198,7 +163,7 @@ async function commit(
       const summary = await runImport(withHeaders, options, store);
       const refusal = commitRefusal(summary, request.validOnly);
       // Thrown, so that the transaction rolls back; answered below as a 422.
-      if (refusal) throw new Refused({ status: 422, body: body(summary, { ...common, error: refusal }) });
+      if (refusal) throw new Refused({ status: 422, body: importBody(summary, { ...common, error: refusal }) });
       let storedRejected: string | null = null;
       if (rejectedOut) {
         const out = rejectedOut as WriteStream;
@@ -222,7 +187,7 @@ async function commit(
     const ids = summary.created && summary.created <= TAG_SHEET_MAX ? await imports.createdItemIds(org, batchId) : [];
     return {
       status: 201,
-      body: body(summary, {
+      body: importBody(summary, {
         ...common, batchId,
         tagSheet: ids.length ? `/tags/sheet?ids=${ids.join(",")}` : null,
         rejectedFile: storedRejected ? `/api/v1/imports/${batchId}/rejected.csv` : null,
@@ -292,122 +257,4 @@ async function writeUpdates(trx: Tx, actor: Principal, batchId: string, updates:
     trx,
   );
   return Math.max(...events);
-}
-
-/**
- * Undoes an import while none of its items has been used since (no history entry after the
- * import's own).
- *
- * Why items are retired, not deleted: item history is append-only (a trigger refuses any
- * UPDATE or DELETE on item_events), so an item's 'imported' entry can never be removed, and an
- * item with history cannot be deleted either. Undo therefore retires every item the import
- * added, with a 'retired' entry noting "Import undone", and frees its serial so that the
- * corrected file can be imported again; the tags were never used, and the record of what
- * happened stays. Items the import updated get their previous values back, with an 'edited'
- * entry.
- */
-export async function undoImport(actor: Principal, batchId: string): Promise<{ retired: number; restored: number }> {
-  if (!can(actor, "stock.import")) throw forbidden();
-  return audited(actor, async (trx, audit) => {
-    const batch = await imports.lockBatch(actor.organisationId, batchId, trx);
-    if (!batch) throw notFound("No such import.");
-    if (batch.status === "undone") throw conflict("This import has been undone already.");
-    if (batch.status !== "committed") throw conflict("This import is still running.");
-    if (Number(batch.created) + Number(batch.updated) === 0) throw conflict("Nothing to undo: the import changed no items.");
-    const later = batch.lastEventId == null ? undefined : await imports.laterEvent(actor.organisationId, batchId, Number(batch.lastEventId), trx);
-    if (later) throw conflict(undoBlockedMessage(later));
-    const retired = await imports.retireBatchItems(trx, actor.organisationId, batchId, actor.userId);
-    const updates = await imports.updatesOf(trx, batchId);
-    const yards = new Map((await listYards(actor.organisationId)).map((y) => [y.id, y.name]));
-    const yardName = (id: string | null | undefined) => (id ? (yards.get(id) ?? null) : null);
-    const events: ItemEventInput[] = [];
-    for (const { itemId, before, after } of updates) {
-      await updateItem(actor.organisationId, itemId, { ...before, details: before.details ?? {} }, trx);
-      // from what the import wrote back to what it replaced
-      const changes = itemChanges({ ...after, yardName: yardName(after.yardId) }, { ...before, yardName: yardName(before.yardId) });
-      events.push({ organisationId: actor.organisationId, itemId, type: "edited", note: "Import undone", changes, actorId: actor.userId });
-    }
-    for (let i = 0; i < events.length; i += CHUNK) await insertEvents(events.slice(i, i + CHUNK), trx);
-    await imports.markUndone(trx, batchId, actor.userId);
-    await audit({ action: "items.import_undone", entity: "import_batch", entityId: batchId, after: { retired, restored: updates.length } });
-    return { retired, restored: updates.length };
-  });
-}
-
-const EVENT_WORDS: Record<string, string> = {
-  check: "a pre-use check", inspection: "an inspection", tag_out: "a tag-out", moved: "a move", edited: "an edit",
-  retired: "a retirement", lost: "a loss report", found: "a found report", correction: "a correction", return_to_service: "a return to service", imported: "another import",
-};
-
-export function undoBlockedMessage(later: { type: string; tagCode: string }): string {
-  return `Item ${later.tagCode} has ${EVENT_WORDS[later.type] ?? "a history entry"} recorded since this import, so the import can no longer be undone. Change or retire its items one by one instead.`;
-}
-
-/** Whether a batch can be undone now, and if not, why in words. */
-export async function undoState(organisationId: string, batch: imports.BatchRow): Promise<{ canUndo: boolean; reason: string | null }> {
-  if (batch.status === "undone") return { canUndo: false, reason: "Undone." };
-  if (batch.status === "running") return { canUndo: false, reason: "Still running." };
-  if (batch.created + batch.updated === 0) return { canUndo: false, reason: "Nothing to undo: the import changed no items." };
-  const later = batch.lastEventId == null ? undefined : await imports.laterEvent(organisationId, batch.id, batch.lastEventId);
-  return later ? { canUndo: false, reason: undoBlockedMessage(later) } : { canUndo: true, reason: null };
-}
-
-/** An import as the API answers it. */
-export function batchJson(b: imports.BatchRow, undo?: { canUndo: boolean; reason: string | null }) {
-  return {
-    id: b.id,
-    status: b.status,
-    fileName: b.fileName,
-    fileBytes: b.fileBytes,
-    createdAt: new Date(b.createdAt).toISOString(),
-    finishedAt: b.finishedAt ? new Date(b.finishedAt).toISOString() : null,
-    createdBy: b.createdByName,
-    validOnly: b.validOnly,
-    delimiter: b.delimiter,
-    encoding: b.encoding,
-    mapping: b.mapping,
-    rowsProcessed: b.rowsProcessed,
-    progress: b.status === "running" ? (b.fileBytes ? Math.min(1, b.bytesProcessed / b.fileBytes) : 0) : 1,
-    rows: b.rowsTotal,
-    created: b.created,
-    updated: b.updated,
-    unchanged: b.unchanged,
-    rejected: b.rejected,
-    undoneAt: b.undoneAt ? new Date(b.undoneAt).toISOString() : null,
-    undoneBy: b.undoneByName,
-    file: b.fileKey ? `/api/v1/imports/${b.id}/file` : null,
-    rejectedFile: b.rejectedKey ? `/api/v1/imports/${b.id}/rejected.csv` : null,
-    ...(undo && { canUndo: undo.canUndo, undoBlockedBecause: undo.reason }),
-  };
-}
-export type BatchJson = ReturnType<typeof batchJson>;
-
-/** Saves the owner's column choices by name, for the next file from the same supplier. */
-export async function saveMapping(actor: Principal, name: string, mapping: Record<string, string | null>): Promise<string> {
-  if (!can(actor, "stock.import")) throw forbidden();
-  return audited(actor, async (tx, audit) => {
-    const id = await imports.upsertMapping(actor.organisationId, name, mapping, actor.userId, tx);
-    await audit({ action: "import_mapping.saved", entity: "import_mapping", entityId: id, after: { name, mapping } });
-    return id;
-  });
-}
-
-/** Removes a saved mapping; answers whether there was one. */
-export async function deleteMapping(actor: Principal, id: string): Promise<boolean> {
-  if (!can(actor, "stock.import")) throw forbidden();
-  return audited(actor, async (tx, audit) => {
-    const gone = await imports.deleteMapping(actor.organisationId, id, tx);
-    if (gone) await audit({ action: "import_mapping.deleted", entity: "import_mapping", entityId: id });
-    return gone;
-  });
-}
-
-/** Download headers for a CSV file with a name people recognise. */
-export function attachment(name: string): HeadersInit {
-  const plain = name.replace(/[^\w.\- ]/g, "_").slice(0, 120) || "file.csv";
-  return {
-    "Content-Type": "text/csv; charset=utf-8",
-    "Content-Disposition": `attachment; filename="${plain}"; filename*=UTF-8''${encodeURIComponent(name.slice(0, 120))}`,
-    "Cache-Control": "private, no-store",
-  };
 }

@@ -1,0 +1,18 @@
+import { describe, expect, it } from "vitest";
+import { csvDownloadHeaders } from "@/lib/http/download";
+
+describe("csvDownloadHeaders", () => {
+  it("saves a CSV under a plain name, with the UTF-8 name beside it, never cached", () => {
+    expect(csvDownloadHeaders("stock é.csv")).toEqual({
+      "Content-Type": "text/csv; charset=utf-8",
+      "Content-Disposition": "attachment; filename=\"stock _.csv\"; filename*=UTF-8''stock%20%C3%A9.csv",
+      "Cache-Control": "private, no-store",
+    });
+  });
+
+  it("keeps quotes and line breaks out of the header", () => {
+    const disposition = csvDownloadHeaders('a"b\r\nc.csv')["Content-Disposition"];
+    expect(disposition).toMatch(/^attachment; filename="a_b__c\.csv"; /);
+    expect(disposition).not.toMatch(/[\r\n]/);
+  });
+});
