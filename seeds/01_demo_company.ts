@@ -2,6 +2,7 @@ import type { Knex } from "knex";
 import { hash } from "@node-rs/argon2";
 import { itemRating } from "../lib/stock/rating";
 import type { ItemKind } from "../lib/stock/labels";
+import { toWholeMm } from "../lib/stock/schemas";
 import { newTagCode } from "../lib/tags/code";
 
 // The demo scenario: an invented groundworks outfit with one person per role, two yards
@@ -90,7 +91,7 @@ export async function seed(knex: Knex): Promise<void> {
           kind: item.kind,
           grade: item.grade ?? null,
           size: item.size ?? null,
-          length_mm: item.lengthFt ? Math.round(item.lengthFt * 304.8) : null,
+          length_mm: item.lengthFt ? toWholeMm({ value: item.lengthFt, unit: "ft" }) : null,
           marked_wll_lb: item.markedWllLb ?? null,
           serial: `${item.serialPrefix}-${String(i).padStart(3, "0")}`,
           status,

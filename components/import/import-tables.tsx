@@ -1,5 +1,6 @@
 import type { RowError } from "@/lib/import/row";
 import type { PreviewRow } from "@/lib/import/pipeline";
+import { toFeet } from "@/lib/securement/units";
 
 const lb = (n: number | null) => (n == null ? "not rated" : `${n.toLocaleString("en-US")} lb`);
 
@@ -65,7 +66,7 @@ export function PreviewTable({ rows }: { rows: PreviewRow[] }) {
               </td>
               <td className="px-3 py-2">{r.description}{r.markedWllLb != null && <span className="block text-sm text-ink-soft">marked {lb(r.markedWllLb)}</span>}</td>
               <td className="px-3 py-2 font-bold">{lb(r.wllLb)}</td>
-              <td className="px-3 py-2">{r.lengthMm != null ? `${Number((r.lengthMm / 304.8).toFixed(1))} ft` : ""}</td>
+              <td className="px-3 py-2">{r.lengthMm != null ? `${Number(toFeet({ value: r.lengthMm, unit: "mm" }).value.toFixed(1))} ft` : ""}</td>
               <td className="px-3 py-2">{r.serial ?? ""}</td>
               <td className="px-3 py-2">{r.yardName ?? ""}</td>
               <td className="px-3 py-2">{r.inServiceOn ?? ""}</td>

@@ -2,6 +2,7 @@
 // rejected rows of an import and the template. Pure.
 import { KIND_LABELS, STATUS_LABELS, type ItemKind, type ItemStatus } from "@/lib/stock/labels";
 import type { ItemRecord } from "@/db/items";
+import { toFeet } from "@/lib/securement/units";
 
 /**
  * A cell a spreadsheet would run as a formula (it starts with =, +, -, @, a tab or a carriage
@@ -65,7 +66,7 @@ export function exportRow(item: ExportItem): (string | number | null)[] {
     item.markedWllLb,
     typeof d.mechanism === "string" ? d.mechanism : null,
     range ? `${range[0]}-${range[1]}` : null,
-    item.lengthMm != null ? trimZeros(item.lengthMm / 304.8, 3) : null,
+    item.lengthMm != null ? trimZeros(toFeet({ value: item.lengthMm, unit: "mm" }).value, 3) : null,
     typeof d.ends === "string" ? d.ends : null,
     item.serial,
     item.yardName,

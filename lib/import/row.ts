@@ -3,6 +3,7 @@
 // as the add-item form and the API, including the rated-limit engine. Every problem comes
 // back as { column, message } with the column as the file names it.
 import type { ItemFields, ItemRecord } from "@/db/items";
+import { toFeet } from "@/lib/securement/units";
 import { itemChanges, type ItemChanges } from "@/lib/stock/changes";
 import { itemInputSchema, type ItemInput } from "@/lib/stock/schemas";
 import type { ItemKind } from "@/lib/stock/labels";
@@ -196,7 +197,7 @@ export function existingToInput(e: ExistingItem): Partial<Record<InputKey, unkno
     chainSizeRange: Array.isArray(d.chainSizeRange) ? d.chainSizeRange : undefined,
     mechanism: typeof d.mechanism === "string" ? d.mechanism : undefined,
     ends: typeof d.ends === "string" ? d.ends : undefined,
-    length: e.lengthMm != null ? { value: e.lengthMm / 304.8, unit: "ft" } : undefined,
+    length: e.lengthMm != null ? { value: toFeet({ value: e.lengthMm, unit: "mm" }).value, unit: "ft" } : undefined,
     serial: e.serial ?? undefined,
     yardId: e.yardId ?? undefined,
     inServiceOn: e.inServiceOn ?? undefined,

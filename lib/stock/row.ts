@@ -1,6 +1,6 @@
 import type { ItemFields } from "@/db/items";
 import { itemRating } from "./rating";
-import { toMillimetres, toRatable, type ItemInput } from "./schemas";
+import { toRatable, toWholeMm, type ItemInput } from "./schemas";
 
 /**
  * The stored fields of an item that its input decides, with the effective WLL the rated-limit
@@ -16,7 +16,7 @@ export function itemRow(input: ItemInput): ItemFields {
     grade: ratable.grade,
     gradeMarked: ratable.gradeMarked,
     size: input.size ?? (input.kind === "binder" ? (input.chainSizeRange?.[1] ?? null) : null),
-    lengthMm: input.length ? toMillimetres(input.length) : null,
+    lengthMm: input.length ? toWholeMm(input.length) : null,
     markedWllLb: ratable.markedWllLb,
     serial: input.serial ?? null,
     yardId: input.yardId ?? null,

@@ -1,5 +1,6 @@
 import { z } from "zod";
 import { parseGrade, tryParseSize } from "@/lib/securement";
+import { toLb, toMillimetres } from "@/lib/securement/units";
 import { ITEM_KINDS, type ItemKind } from "./labels";
 import { itemRating } from "./rating";
 
@@ -29,9 +30,6 @@ const length = z.object({
   value: z.coerce.number({ error: "Enter the length as a number." }).positive("The length must be more than 0.").max(200, "That length is too long for a tiedown; check the figure."),
   unit: z.enum(["ft", "m", "in", "mm"], { error: "The length unit is ft, m, in or mm." }),
 });
-
-const MM_PER = { ft: 304.8, m: 1000, in: 25.4, mm: 1 } as const;
-const KG_PER_LB = 0.45359237; // exact, by the 1959 international agreement
 
 export const itemInputSchema = z
   .object({
@@ -95,13 +93,20 @@ export function toRatable(v: Pick<ItemInput, "kind" | "marking" | "markedWll" | 
   };
 }
 
-/** Pounds as stored (whole pounds). A kilogram marking is converted with the exact factor. */
+/**
+ * Pounds as stored (whole pounds). A kilogram marking is converted with the exact factor.
+ * @example toWholeLb({ value: 2000, unit: "kg" }) // 4409
+ */
 export function toWholeLb(w: { value: number; unit: "lb" | "kg" }): number {
-  return Math.round(w.unit === "lb" ? w.value : w.value / KG_PER_LB);
+  return Math.round(toLb(w).value);
 }
 
-export function toMillimetres(l: { value: number; unit: keyof typeof MM_PER }): number {
-  return Math.round(l.value * MM_PER[l.unit]);
+/**
+ * A length as stored (whole millimetres).
+ * @example toWholeMm({ value: 20, unit: "ft" }) // 6096
+ */
+export function toWholeMm(l: { value: number; unit: "ft" | "m" | "in" | "mm" }): number {
+  return Math.round(toMillimetres(l).value);
 }
 
 /** Flat form fields (FormData) to the nested shape the schema reads. */

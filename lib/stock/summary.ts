@@ -1,7 +1,7 @@
 import type { ItemRecord } from "@/db/items";
+import { toKg } from "@/lib/securement/units";
 import { KIND_LABELS, STATUS_LABELS, type ItemKind, type ItemStatus } from "./labels";
 
-const KG_PER_LB = 0.45359237; // exact, by the 1959 international agreement
 
 /**
  * "3/8 in", "10 mm", or null: sizes are stored as the trade label without the inch unit.
@@ -37,7 +37,7 @@ export function toItemSummary(row: ItemRecord) {
     status: row.status,
     statusLabel: STATUS_LABELS[row.status as ItemStatus]?.label ?? row.status,
     wllLb: row.wllLb,
-    wllKg: row.wllLb == null ? null : Math.round(row.wllLb * KG_PER_LB),
+    wllKg: row.wllLb == null ? null : Math.round(toKg({ value: row.wllLb, unit: "lb" }).value),
     wllSource: row.wllSource,
     markedWllLb: row.markedWllLb,
     serial: row.serial,

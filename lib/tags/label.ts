@@ -1,4 +1,5 @@
 import { KIND_LABELS, type ItemKind } from "@/lib/stock/labels";
+import { toFeet } from "@/lib/securement/units";
 import { sizeLabel } from "@/lib/stock/summary";
 
 // The words printed on a tag and shown on the public tag view: what the item is, its grade,
@@ -28,7 +29,6 @@ export interface TagLabelText {
   hasWll: boolean;
 }
 
-const FEET_PER_MM = 1 / 304.8; // 1 ft = 304.8 mm exactly
 
 /**
  * WLL in words, as printed.
@@ -60,7 +60,7 @@ export function tagLabelText(item: TagLabelItem): TagLabelText {
   if (item.kind === "binder" && Array.isArray(range) && range.length === 2) size = `For ${range[0]}–${sizeLabel(String(range[1]))} chain`;
   else if (item.kind === "web-strap" && size) size = `${size} wide`;
 
-  const length = item.lengthMm ? `${formatFeet(item.lengthMm * FEET_PER_MM)} ft` : null;
+  const length = item.lengthMm ? `${formatFeet(toFeet({ value: item.lengthMm, unit: "mm" }).value)} ft` : null;
 
   return { title, grade, size, length, wll: wllText(item.wllLb), hasWll: item.wllLb != null };
 }

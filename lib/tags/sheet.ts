@@ -4,7 +4,8 @@
 // margins and pitches below are the usual die-cut positions for these formats, from memory:
 // print one sheet on plain paper and hold it against a label sheet before a big run.
 
-export const MM_PER_INCH = 25.4; // exact, by definition of the inch
+import { MM_PER_IN } from "@/lib/securement/units";
+
 export const LETTER = { widthIn: 8.5, heightIn: 11 } as const;
 
 export interface SheetLayout {
@@ -86,7 +87,7 @@ export interface CellBox {
   heightMm: number;
 }
 
-const mm = (inches: number) => Math.round(inches * MM_PER_INCH * 100) / 100;
+const mm = (inches: number) => Math.round(inches * MM_PER_IN * 100) / 100;
 
 /**
  * Where the label at a position sits on its sheet.

@@ -8,11 +8,11 @@ import {
   labelsPerSheet,
   layoutSheets,
   MAX_SHEET_ITEMS,
-  MM_PER_INCH,
   parseSheetIds,
   SHEET_LAYOUTS,
   sheetLayout,
 } from "@/lib/tags/sheet";
+import { MM_PER_IN } from "@/lib/securement/units";
 
 const EPS = 1e-9;
 
@@ -74,7 +74,7 @@ describe("sheet layouts", () => {
       });
 
       it("gives the same box in millimetres, to 0.01 mm", () => {
-        const near = (mm: number, inches: number) => expect(Math.abs(mm - inches * MM_PER_INCH)).toBeLessThanOrEqual(0.005 + EPS);
+        const near = (mm: number, inches: number) => expect(Math.abs(mm - inches * MM_PER_IN)).toBeLessThanOrEqual(0.005 + EPS);
         for (const c of cells) {
           near(c.xMm, c.xIn);
           near(c.yMm, c.yIn);

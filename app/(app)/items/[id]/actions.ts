@@ -6,6 +6,7 @@ import { itemEventSchema } from "@/lib/stock/api-schemas";
 import { recordItemEvent } from "@/lib/stock/events";
 import { attachCertificate } from "@/lib/stock/service";
 import { uuidParam } from "@/lib/http/errors";
+import { toInches } from "@/lib/securement/units";
 
 // Form fields → the API's event body, so forms and API share one schema and one service.
 function answersFrom(form: Record<string, unknown>) {
@@ -20,7 +21,7 @@ function measurementsFrom(form: Record<string, unknown>) {
     if (!k.startsWith("m_") || typeof v !== "string" || v.trim() === "") continue;
     const unitMm = form[`unit_${k.slice(2)}`] === "mm";
     const n = Number(v.replace(",", "."));
-    out[k.slice(2)] = Number.isFinite(n) ? (unitMm ? n / 25.4 : n) : Number.NaN;
+    out[k.slice(2)] = Number.isFinite(n) ? (unitMm ? toInches({ value: n, unit: "mm" }).value : n) : Number.NaN;
   }
   return out;
 }

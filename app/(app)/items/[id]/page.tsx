@@ -6,6 +6,7 @@ import { UsabilityBanner } from "@/components/items/usability-banner";
 import { StatusBadge } from "@/components/ui/status-badge";
 import { listEvents } from "@/db/items";
 import { can } from "@/lib/auth/roles";
+import { toFeet, toKg } from "@/lib/securement/units";
 import { requireItemPage } from "@/lib/stock/page-item";
 import type { ItemKind, ItemStatus } from "@/lib/stock/labels";
 import { itemRating } from "@/lib/stock/rating";
@@ -14,7 +15,7 @@ import { describeItem, sizeLabel } from "@/lib/stock/summary";
 export const metadata: Metadata = { title: "Item" };
 
 const lb = (n: number) => `${n.toLocaleString("en-US")} lb`;
-const kg = (n: number) => `${Math.round(n * 0.45359237).toLocaleString("en-US")} kg`;
+const kg = (n: number) => `${Math.round(toKg({ value: n, unit: "lb" }).value).toLocaleString("en-US")} kg`;
 
 function Fact({ label, children }: { label: string; children: React.ReactNode }) {
   return (
@@ -88,7 +89,7 @@ export default async function ItemPage({ params }: { params: Promise<{ id: strin
           {item.size && item.kind !== "binder" && <Fact label={item.kind === "web-strap" ? "Width" : "Size"}>{sizeLabel(item.size)}</Fact>}
           {details.chainSizeRange && <Fact label="Takes chain">{details.chainSizeRange[0]} to {sizeLabel(details.chainSizeRange[1])}</Fact>}
           {details.mechanism && <Fact label="Binder">{details.mechanism}</Fact>}
-          {item.lengthMm && <Fact label="Length">{(item.lengthMm / 304.8).toFixed(1)} ft ({(item.lengthMm / 1000).toFixed(2)} m)</Fact>}
+          {item.lengthMm && <Fact label="Length">{toFeet({ value: item.lengthMm, unit: "mm" }).value.toFixed(1)} ft ({(item.lengthMm / 1000).toFixed(2)} m)</Fact>}
           <Fact label="Marking">{item.markedWllLb ? `WLL ${lb(item.markedWllLb)}` : item.gradeMarked && item.grade ? "grade only" : "none"}</Fact>
           {details.ends && <Fact label="End fittings">{details.ends}</Fact>}
           <Fact label="Serial or lot">{item.serial ?? "none"}</Fact>

@@ -2,6 +2,7 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { ItemForm, type ItemFormValues } from "@/components/items/item-form";
 import { listYards } from "@/db/items";
+import { toFeet } from "@/lib/securement/units";
 import { requireItemPage } from "@/lib/stock/page-item";
 import type { ItemKind } from "@/lib/stock/labels";
 
@@ -19,7 +20,7 @@ export default async function EditItemPage({ params }: { params: Promise<{ id: s
     rangeMin: d.chainSizeRange?.[0],
     rangeMax: d.chainSizeRange?.[1],
     mechanism: d.mechanism,
-    lengthValue: item.lengthMm ? (item.lengthMm / 304.8).toFixed(1) : undefined,
+    lengthValue: item.lengthMm ? toFeet({ value: item.lengthMm, unit: "mm" }).value.toFixed(1) : undefined,
     ends: d.ends,
     serial: item.serial ?? undefined,
     yardId: item.yardId ?? "",
