@@ -12,6 +12,7 @@ import {
   signUpSchema,
 } from "@/lib/auth/schemas";
 import { currentSessionId, endSession, startSession } from "@/lib/auth/session";
+import { clientIp } from "@/lib/http/client-ip";
 import { safeNextPath } from "@/lib/http/next-path";
 
 async function setSessionCookie(userId: string) {
@@ -19,12 +20,8 @@ async function setSessionCookie(userId: string) {
   (await cookies()).set(cookie.name, cookie.value, cookie.attributes);
 }
 
-async function clientIp() {
-  return (await headers()).get("x-forwarded-for")?.split(",")[0]?.trim() || "local";
-}
-
 export const signInAction = publicFormAction(signInSchema, async (input) => {
-  const userId = await accounts.signIn({ email: input.email, password: input.password, ip: await clientIp() });
+  const userId = await accounts.signIn({ email: input.email, password: input.password, ip: clientIp(await headers()) });
   await setSessionCookie(userId);
   redirect(safeNextPath(input.next) ?? "/");
 });

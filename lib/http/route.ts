@@ -4,6 +4,7 @@ import { config } from "@/lib/config";
 import { can, type Permission } from "@/lib/auth/roles";
 import { principalFromRequest, type Principal } from "@/lib/auth/session";
 import { AppError, badRequest, forbidden, unauthorized, zodIssues } from "./errors";
+import { clientIp } from "./client-ip";
 import { isCrossSite } from "./csrf";
 
 // Every route handler goes through `route`: CSRF, who, may they, what input, then the
@@ -73,7 +74,7 @@ function wrap<B, Q>(
       const query = options.query ? parse(options.query, Object.fromEntries(url.searchParams)) : (undefined as Q);
       const body = options.body ? parse(options.body, await readBody(request)) : (undefined as B);
       const params = context ? await context.params : {};
-      const ip = request.headers.get("x-forwarded-for")?.split(",")[0]?.trim() || "local";
+      const ip = clientIp(request.headers);
 
       const result = await handler({ principal, body, query, params, request, ip });
       if (result instanceof Response) return result;

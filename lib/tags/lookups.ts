@@ -11,15 +11,6 @@ export const TAG_MISS_LIMIT = 20;
 /** Length of the window, in minutes. */
 export const TAG_MISS_WINDOW_MINUTES = 10;
 
-/**
- * The client's address as the reverse proxy reports it: the first x-forwarded-for entry,
- * else "local" (a direct connection in development and tests).
- * @example clientIp(new Headers({ "x-forwarded-for": "203.0.113.9, 10.0.0.1" })) // "203.0.113.9"
- */
-export function clientIp(headers: Pick<Headers, "get">): string {
-  return headers.get("x-forwarded-for")?.split(",")[0]?.trim() || "local";
-}
-
 /** Whether this address has used up its misses. */
 export async function tagLookupsExhausted(ip: string, now = new Date()): Promise<boolean> {
   const since = new Date(now.getTime() - TAG_MISS_WINDOW_MINUTES * 60_000);

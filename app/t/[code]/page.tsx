@@ -6,7 +6,8 @@ import { findItemByTag } from "@/db/items";
 import { getOrganisation } from "@/db/organisations";
 import { getPrincipal } from "@/lib/auth/session";
 import { tagCodeFromPath } from "@/lib/tags/entry";
-import { clientIp, recordLookup } from "@/lib/tags/lookups";
+import { clientIp } from "@/lib/http/client-ip";
+import { recordLookup } from "@/lib/tags/lookups";
 
 export const metadata: Metadata = { title: "Tag", robots: { index: false, follow: false } };
 
