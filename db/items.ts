@@ -86,7 +86,10 @@ export interface ItemFilters {
   kind?: string;
   status?: string;
   yardId?: string;
-  due?: "overdue" | "30d";
+  /** Inspection due before this date (YYYY-MM-DD): overdue, when it is the organisation's today. */
+  dueBefore?: string;
+  /** Inspection due on or before this date (YYYY-MM-DD). */
+  dueBy?: string;
   q?: string;
 }
 
@@ -108,8 +111,8 @@ function applyFilters(query: Knex.QueryBuilder, organisationId: string, f: ItemF
   if (f.kind) query.where("i.kind", f.kind);
   if (f.status) query.where("i.status", f.status);
   if (f.yardId) query.where("i.yard_id", f.yardId);
-  if (f.due === "overdue") query.where("i.next_inspection_due", "<", db.raw("current_date"));
-  if (f.due === "30d") query.where("i.next_inspection_due", "<=", db.raw("current_date + 30"));
+  if (f.dueBefore) query.where("i.next_inspection_due", "<", f.dueBefore);
+  if (f.dueBy) query.where("i.next_inspection_due", "<=", f.dueBy);
   if (f.q) {
     const q = f.q.trim().toUpperCase();
     const compact = q.replace(/[\s-]/g, "");
@@ -362,10 +365,11 @@ export async function countItemsByStatus(organisationId: string) {
   return Object.fromEntries(rows.map((r) => [r.status, Number(r.count)])) as Record<string, number>;
 }
 
-export async function countInspectionsDue(organisationId: string, within = 30) {
+/** In-service items whose inspection falls due on or before a date (YYYY-MM-DD), overdue ones included. */
+export async function countInspectionsDue(organisationId: string, dueBy: string) {
   const row = await db("items")
     .where({ organisation_id: organisationId, status: "in_service" })
-    .where("next_inspection_due", "<=", db.raw(`current_date + ?::int`, [within]))
+    .where("next_inspection_due", "<=", dueBy)
     .count<{ count: string }>("id as count")
     .first();
   return Number(row?.count ?? 0);

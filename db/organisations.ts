@@ -7,14 +7,16 @@ export interface Organisation {
   id: string;
   name: string;
   publicTagView: boolean;
+  /** IANA name, e.g. "America/Chicago": "today" and every date shown to its people. */
+  timeZone: string;
 }
 
-export async function createOrganisation(o: { id: string; name: string }, trx: Knex = db): Promise<void> {
-  await trx("organisations").insert({ id: o.id, name: o.name });
+export async function createOrganisation(o: { id: string; name: string; timeZone: string }, trx: Knex = db): Promise<void> {
+  await trx("organisations").insert({ id: o.id, name: o.name, time_zone: o.timeZone });
 }
 
 export async function getOrganisation(id: string, trx: Knex = db): Promise<Organisation | undefined> {
-  return trx("organisations").where({ id }).first("id", "name", "public_tag_view as publicTagView");
+  return trx("organisations").where({ id }).first("id", "name", "public_tag_view as publicTagView", "time_zone as timeZone");
 }
 
 /** The organisation's inspection intervals as stored (kinds it never set are missing). */
@@ -23,10 +25,17 @@ export async function getInspectionIntervals(id: string, trx: Knex = db): Promis
   return row?.inspection_interval_days ?? null;
 }
 
-export async function updateOrganisation(id: string, patch: { name?: string; publicTagView?: boolean }, trx: Knex = db): Promise<void> {
+/** The organisation's time zone alone (services that need "today"). */
+export async function getTimeZone(id: string, trx: Knex = db): Promise<string | undefined> {
+  const row = await trx("organisations").where({ id }).first("time_zone");
+  return row?.time_zone;
+}
+
+export async function updateOrganisation(id: string, patch: { name?: string; publicTagView?: boolean; timeZone?: string }, trx: Knex = db): Promise<void> {
   await trx("organisations").where({ id }).update({
     ...(patch.name !== undefined && { name: patch.name }),
     ...(patch.publicTagView !== undefined && { public_tag_view: patch.publicTagView }),
+    ...(patch.timeZone !== undefined && { time_zone: patch.timeZone }),
   });
 }
 

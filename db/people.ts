@@ -46,9 +46,13 @@ export async function findCredentials(email: string) {
     .first("id", "password_hash as passwordHash", "disabled_at as disabledAt", "organisation_id as organisationId");
 }
 
-export async function findUserIdByEmail(email: string): Promise<string | undefined> {
-  const row = await db("users").where({ email }).whereNull("disabled_at").first("id");
-  return row?.id;
+/** An active person by e-mail, with their organisation's time zone (for the dates in their e-mail). */
+export async function findActiveUserByEmail(email: string): Promise<{ id: string; timeZone: string } | undefined> {
+  return db("users as u")
+    .join("organisations as o", "o.id", "u.organisation_id")
+    .where("u.email", email)
+    .whereNull("u.disabled_at")
+    .first("u.id", "o.time_zone as timeZone");
 }
 
 export async function listPeople(organisationId: string): Promise<Person[]> {

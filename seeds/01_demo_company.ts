@@ -52,7 +52,7 @@ export async function seed(knex: Knex): Promise<void> {
 
   const passwordHash = await hash(DEMO_PASSWORD);
   await knex.transaction(async (trx) => {
-    const [org] = await trx("organisations").insert({ name: "Corvid Hollow Groundworks" }).returning("id");
+    const [org] = await trx("organisations").insert({ name: "Corvid Hollow Groundworks", time_zone: "America/Chicago" }).returning("id");
     const organisationId: string = org.id;
     const people = [
       { id: "demo-owner-olive", name: "Olive Marchetti", email: `olive@${DEMO_DOMAIN}`, role: "owner", designated: true },

@@ -3,12 +3,16 @@ import { countInspectionsDue, countItemsByStatus } from "@/db/items";
 import { listOpenInvites } from "@/db/people";
 import { can } from "@/lib/auth/roles";
 import { requirePage } from "@/lib/auth/session";
+import { organisationClock } from "@/lib/organisations/service";
+import { DUE_SOON_DAYS } from "@/lib/stock/api-schemas";
+import { addDays } from "@/lib/time";
 
 export default async function TodayPage() {
   const principal = await requirePage();
+  const { today } = await organisationClock(principal.organisationId);
   const [byStatus, due] = await Promise.all([
     countItemsByStatus(principal.organisationId),
-    countInspectionsDue(principal.organisationId),
+    countInspectionsDue(principal.organisationId, addDays(today, DUE_SOON_DAYS)),
   ]);
   const invites = can(principal, "people.manage") ? await listOpenInvites(principal.organisationId) : [];
   const tiles = [

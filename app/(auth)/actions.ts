@@ -9,7 +9,7 @@ import {
   resetPasswordSchema,
   resetRequestSchema,
   signInSchema,
-  signUpSchema,
+  signUpFormSchema,
 } from "@/lib/auth/schemas";
 import { currentSessionId, endSession, startSession } from "@/lib/auth/session";
 import { clientIp } from "@/lib/http/client-ip";
@@ -26,7 +26,7 @@ export const signInAction = publicFormAction(signInSchema, async (input) => {
   redirect(safeNextPath(input.next) ?? "/");
 });
 
-export const signUpAction = publicFormAction(signUpSchema, async (input) => {
+export const signUpAction = publicFormAction(signUpFormSchema, async (input) => {
   const userId = await accounts.signUp(input);
   await setSessionCookie(userId);
   redirect("/");

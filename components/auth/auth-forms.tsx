@@ -1,6 +1,6 @@
 "use client";
 import Link from "next/link";
-import { useActionState } from "react";
+import { useActionState, useSyncExternalStore } from "react";
 import {
   acceptInviteAction,
   requestResetAction,
@@ -30,11 +30,18 @@ export function SignInForm({ next }: { next?: string }) {
   );
 }
 
+const noChanges = () => () => {};
+const browserTimeZone = () => Intl.DateTimeFormat().resolvedOptions().timeZone;
+
 export function SignUpForm() {
   const [state, action] = useActionState(signUpAction, initialFormState);
+  // The company's time zone starts as this browser's (it can be changed in Settings); the
+  // server renders it empty and the browser fills it in.
+  const timeZone = useSyncExternalStore(noChanges, browserTimeZone, () => "");
   return (
     <form action={action} className="flex flex-col gap-2" noValidate>
       <FormAlert state={state} />
+      <input type="hidden" name="timeZone" value={timeZone} readOnly />
       <Field label="Company name" name="organisationName" autoComplete="organization" defaultValue={state.values?.organisationName} error={state.fieldErrors?.organisationName} />
       <Field label="Your name" name="name" autoComplete="name" defaultValue={state.values?.name} error={state.fieldErrors?.name} />
       <Field label="E-mail" name="email" type="email" autoComplete="email" defaultValue={state.values?.email} error={state.fieldErrors?.email} />

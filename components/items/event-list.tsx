@@ -1,3 +1,4 @@
+import { formatDateTime } from "@/lib/time";
 import { CorrectionForm } from "./item-forms";
 
 const TYPE_WORDS: Record<string, string> = {
@@ -42,8 +43,8 @@ function show(v: unknown) {
   return typeof v === "object" ? JSON.stringify(v) : String(v);
 }
 
-/** The service history, newest first. Entries are never edited; a correction points back. */
-export function EventList({ itemId, events, canCorrect }: { itemId: string; events: EventRow[]; canCorrect: boolean }) {
+/** The service history, newest first, with times in the organisation's zone. Entries are never edited; a correction points back. */
+export function EventList({ itemId, events, canCorrect, timeZone }: { itemId: string; events: EventRow[]; canCorrect: boolean; timeZone: string }) {
   return (
     <ol className="flex flex-col gap-3">
       {events.map((e) => (
@@ -53,7 +54,7 @@ export function EventList({ itemId, events, canCorrect }: { itemId: string; even
             {e.outcome && <span className="font-normal">: {OUTCOME_WORDS[e.outcome] ?? e.outcome}</span>}
           </p>
           <p className="text-base text-ink-soft">
-            {new Date(e.at).toISOString().slice(0, 16).replace("T", " ")} UTC · {e.actorName ?? "system"} · entry #{e.id}
+            <time dateTime={new Date(e.at).toISOString()}>{formatDateTime(e.at, timeZone)}</time> · {e.actorName ?? "system"} · entry #{e.id}
           </p>
           {e.correctsEventId && <p className="text-base">Corrects entry <a className="underline" href={`#event-${e.correctsEventId}`}>#{e.correctsEventId}</a></p>}
           {e.note && <p className="text-base">“{e.note}”</p>}

@@ -1,9 +1,12 @@
 import type { ItemStatus } from "@/lib/stock/labels";
 import { usability } from "@/lib/stock/status";
 
-/** The answer to "may I use this?", in words and colour, big enough to read at arm's length. */
-export function UsabilityBanner({ status, nextInspectionDue }: { status: ItemStatus; nextInspectionDue: string | null }) {
-  const { usable, reason } = usability(status, nextInspectionDue, new Date().toISOString().slice(0, 10));
+/**
+ * The answer to "may I use this?", in words and colour, big enough to read at arm's length.
+ * `today` is the organisation's date (YYYY-MM-DD).
+ */
+export function UsabilityBanner({ status, nextInspectionDue, today }: { status: ItemStatus; nextInspectionDue: string | null; today: string }) {
+  const { usable, reason } = usability(status, nextInspectionDue, today);
   return (
     <div
       role="status"

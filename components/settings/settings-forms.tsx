@@ -8,13 +8,21 @@ import { ROLE_LABELS, ROLES } from "@/lib/auth/roles";
 import { initialFormState } from "@/lib/forms/state";
 import { ITEM_KINDS, KIND_LABELS, type ItemKind } from "@/lib/stock/labels";
 
-export function OrganisationForm({ name, publicTagView }: { name: string; publicTagView: boolean }) {
+export function OrganisationForm({ name, publicTagView, timeZone, timeZones }: { name: string; publicTagView: boolean; timeZone: string; timeZones: string[] }) {
   const [state, action] = useActionState(saveOrganisationAction, initialFormState);
   return (
     <form action={action} className="flex flex-col gap-2 rounded-xl border-2 border-ink-soft p-4" noValidate>
       <h2 className="text-xl font-bold">Company</h2>
       <FormAlert state={state} />
       <Field label="Company name" name="name" defaultValue={state.values?.name ?? name} error={state.fieldErrors?.name} />
+      <SelectField
+        label="Time zone"
+        name="timeZone"
+        defaultValue={state.values?.timeZone ?? timeZone}
+        options={timeZones.map((z) => ({ value: z, label: z.replaceAll("_", " ") }))}
+        error={state.fieldErrors?.timeZone}
+      />
+      <p className="-mt-4 mb-2 text-sm text-ink-soft">Today, overdue inspections and every date and time in Linkyard follow it.</p>
       <label className="flex min-h-tap items-start gap-3 text-lg">
         <input type="checkbox" name="publicTagView" defaultChecked={publicTagView} className="mt-1 h-6 w-6 shrink-0" />
         <span>

@@ -27,6 +27,11 @@ const FILTER_KEYS = ["kind", "status", "yardId", "due", "q"] as const;
 
 const lb = (n: number | null) => (n == null ? "not rated" : `${n.toLocaleString("en-US")} lb`);
 
+/** What the cells read besides their row: the organisation's today (YYYY-MM-DD). */
+interface TableMeta {
+  today: string;
+}
+
 const columns: ColumnDef<ItemSummaryJson>[] = [
   {
     id: "select",
@@ -49,18 +54,18 @@ const columns: ColumnDef<ItemSummaryJson>[] = [
   { id: "wllLb", header: "WLL", cell: ({ row }) => <span className="font-bold">{lb(row.original.wllLb)}</span> },
   { id: "status", header: "Status", cell: ({ row }) => <StatusBadge status={row.original.status as ItemStatus} /> },
   { id: "yardName", header: "Lives at", cell: ({ row }) => row.original.yard?.name ?? "" },
-  { id: "nextInspectionDue", header: "Inspection due", cell: ({ row }) => <DueDate date={row.original.nextInspectionDue} /> },
+  { id: "nextInspectionDue", header: "Inspection due", cell: ({ row, table }) => <DueDate date={row.original.nextInspectionDue} today={(table.options.meta as TableMeta).today} /> },
   { id: "serial", header: "Serial", cell: ({ row }) => row.original.serial ?? "" },
 ];
 
-function DueDate({ date }: { date: string | null }) {
+function DueDate({ date, today }: { date: string | null; today: string }) {
   if (!date) return <span>not set</span>;
-  const overdue = date < new Date().toISOString().slice(0, 10);
+  const overdue = date < today;
   return overdue ? <strong className="text-stop">{date} overdue</strong> : <span>{date}</span>;
 }
 
-/** The stock list: paged, sorted and filtered on the server, with bulk actions. */
-export function StockTable({ yards, canEdit, canExport = false }: { yards: { id: string; name: string }[]; canEdit: boolean; canExport?: boolean }) {
+/** The stock list: paged, sorted and filtered on the server, with bulk actions. `today` is the organisation's date. */
+export function StockTable({ yards, canEdit, canExport = false, today }: { yards: { id: string; name: string }[]; canEdit: boolean; canExport?: boolean; today: string }) {
   const params = useSearchParams();
   const router = useRouter();
   const pathname = usePathname();
@@ -105,6 +110,7 @@ export function StockTable({ yards, canEdit, canExport = false }: { yards: { id:
       setParams({ sort: next[0]?.id ?? null, order: next[0]?.desc ? "desc" : null });
     },
     getCoreRowModel: getCoreRowModel(),
+    meta: { today } satisfies TableMeta,
   });
 
   const selected = Object.keys(rowSelection);
@@ -171,7 +177,7 @@ export function StockTable({ yards, canEdit, canExport = false }: { yards: { id:
               <span className="text-lg font-bold">WLL {lb(row.original.wllLb)}</span>
               <StatusBadge status={row.original.status as ItemStatus} />
               <span className="text-base text-ink-soft">
-                {row.original.yard?.name ?? "no yard"} · inspection due <DueDate date={row.original.nextInspectionDue} />
+                {row.original.yard?.name ?? "no yard"} · inspection due <DueDate date={row.original.nextInspectionDue} today={today} />
               </span>
             </div>
           </li>

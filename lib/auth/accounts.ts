@@ -8,6 +8,7 @@ import { config } from "@/lib/config";
 import { conflict, fieldError, forbidden, gone, notFound, tooManyRequests, unauthorized } from "@/lib/http/errors";
 import { inviteMail, passwordResetMail } from "@/lib/mail/templates";
 import { sendMail } from "@/lib/mail/send";
+import { DEFAULT_TIME_ZONE } from "@/lib/time";
 import { capTokensOf, revokeTokensOf } from "./api-tokens";
 import type { Role } from "./roles";
 import { can } from "./roles";
@@ -23,7 +24,7 @@ export const RESET_HOURS = 2;
 // A fixed hash to verify against when the e-mail is unknown, so both cases take as long.
 let decoyHash: Promise<string> | undefined;
 
-export async function signUp(input: { organisationName: string; name: string; email: string; password: string }) {
+export async function signUp(input: { organisationName: string; name: string; email: string; password: string; timeZone?: string }) {
   if (await people.emailTaken(input.email)) {
     throw conflict("An account with this e-mail already exists. Sign in, or reset the password.", [
       { path: "email", message: "An account with this e-mail already exists." },
@@ -33,9 +34,9 @@ export async function signUp(input: { organisationName: string; name: string; em
   const userId = generateIdFromEntropySize(10);
   const organisationId = randomUUID();
   await audited({ organisationId, userId }, async (tx, audit) => {
-    await createOrganisation({ id: organisationId, name: input.organisationName }, tx);
+    await createOrganisation({ id: organisationId, name: input.organisationName, timeZone: input.timeZone ?? DEFAULT_TIME_ZONE }, tx);
     await people.insertUser({ id: userId, organisationId, email: input.email, name: input.name, role: "owner", passwordHash }, tx);
-    await audit({ action: "organisation.created", entity: "organisation", entityId: organisationId, after: { name: input.organisationName } });
+    await audit({ action: "organisation.created", entity: "organisation", entityId: organisationId, after: { name: input.organisationName, timeZone: input.timeZone ?? DEFAULT_TIME_ZONE } });
   });
   return userId;
 }
@@ -89,6 +90,7 @@ export async function invitePerson(actor: Principal, input: { email: string; rol
       role: input.role,
       link: `${config.APP_URL}/invite/${secret}`,
       expiresAt,
+      timeZone: organisation!.timeZone,
     }),
   );
   return { id, expiresAt };
@@ -138,12 +140,12 @@ export async function withdrawInvite(actor: Principal, inviteId: string) {
 
 /** Always answers the same way, so the form does not reveal which e-mails have accounts. */
 export async function requestPasswordReset(email: string): Promise<void> {
-  const userId = await people.findUserIdByEmail(email);
-  if (!userId) return;
+  const user = await people.findActiveUserByEmail(email);
+  if (!user) return;
   const secret = newSecret();
   const expiresAt = new Date(Date.now() + RESET_HOURS * 3_600_000);
-  await people.insertPasswordReset(userId, hashSecret(secret), expiresAt);
-  await sendMail(passwordResetMail({ to: email, link: `${config.APP_URL}/reset-password/${secret}`, expiresAt }));
+  await people.insertPasswordReset(user.id, hashSecret(secret), expiresAt);
+  await sendMail(passwordResetMail({ to: email, link: `${config.APP_URL}/reset-password/${secret}`, expiresAt, timeZone: user.timeZone }));
 }
 
 export async function resetPassword(input: { token: string; password: string }): Promise<string> {

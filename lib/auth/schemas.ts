@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { canonicalTimeZone } from "@/lib/time";
 import { ROLES } from "./roles";
 
 // Shared by forms (server actions) and the JSON API, so both refuse the same input.
@@ -34,11 +35,31 @@ export const signInSchema = z.object({
   next: z.string().optional(), // where the form came from (a scanned tag); checked before use
 });
 
+/** An IANA time zone name that Intl knows, taken under Intl's own spelling. */
+export const timeZoneField = z.string({ error: "Choose a time zone." }).transform((v, ctx) => {
+  const zone = canonicalTimeZone(v.trim());
+  if (!zone) {
+    ctx.addIssue({ code: "custom", message: "Choose a time zone from the list, e.g. America/Chicago." });
+    return z.NEVER;
+  }
+  return zone;
+});
+
 export const signUpSchema = z.object({
   organisationName: nameField,
   name: nameField,
   email: emailField,
   password: passwordField,
+  /** The organisation's time zone; UTC when missing. */
+  timeZone: timeZoneField.optional(),
+});
+
+/**
+ * The sign-up form: its hidden time zone is the browser's own, which a person cannot correct
+ * on that form, so one Intl does not know here falls back to UTC instead of refusing.
+ */
+export const signUpFormSchema = signUpSchema.extend({
+  timeZone: z.string().optional().transform((v) => (v ? (canonicalTimeZone(v) ?? undefined) : undefined)),
 });
 
 export const inviteSchema = z.object({ email: emailField, role: roleField, designated: flagField });

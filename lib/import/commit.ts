@@ -13,7 +13,7 @@ import type { Principal } from "@/lib/auth/session";
 import { can } from "@/lib/auth/roles";
 import { AppError, conflict, forbidden } from "@/lib/http/errors";
 import type { SpooledFile } from "@/lib/http/multipart";
-import { inspectionIntervals } from "@/lib/organisations/service";
+import { inspectionIntervals, organisationClock } from "@/lib/organisations/service";
 import { nextDue } from "@/lib/stock/intervals";
 import type { ItemKind } from "@/lib/stock/labels";
 import { freshTagCodes } from "@/lib/stock/tag-codes";
@@ -48,7 +48,6 @@ export interface ImportAnswer {
 /** Rows read and written at a time: memory holds one chunk, whatever the file's size. */
 export const IMPORT_CHUNK_ROWS = 1000;
 const TAG_SHEET_MAX = 200;
-const today = () => new Date().toISOString().slice(0, 10);
 
 /** Counts the bytes read from the file, for the progress of a large import. */
 async function* counted(source: AsyncIterable<Buffer>, into: { bytes: number }) {
@@ -114,6 +113,7 @@ async function commit(
   let rejectedOut: WriteStream | null = null;
   let rejectedStored = false;
   const intervals = await inspectionIntervals(org);
+  const { today } = await organisationClock(org);
 
   await storeFromDisk(fileKey, request.file.path, request.file.size, "text/csv");
   await imports.insertBatch({
@@ -133,7 +133,7 @@ async function commit(
       const store: ImportStore = {
         ...readingStore(trx, org),
         async write(creates, updates) {
-          if (creates.length) lastEventId = Math.max(lastEventId ?? 0, await writeCreates(trx, actor, batchId, creates, intervals, note));
+          if (creates.length) lastEventId = Math.max(lastEventId ?? 0, await writeCreates(trx, actor, batchId, creates, { intervals, today }, note));
           if (updates.length) lastEventId = Math.max(lastEventId ?? 0, await writeUpdates(trx, actor, batchId, updates, note));
         },
         async progress(rows) {
@@ -217,7 +217,7 @@ class Refused {
 }
 
 async function writeCreates(
-  trx: Tx, actor: Principal, batchId: string, creates: PreparedCreate[], intervals: Record<ItemKind, number>, note: (line: number) => string,
+  trx: Tx, actor: Principal, batchId: string, creates: PreparedCreate[], due: { intervals: Record<ItemKind, number>; today: string }, note: (line: number) => string,
 ): Promise<number> {
   const codes = await freshTagCodes(creates.length, trx);
   const ids = await insertItems(
@@ -226,7 +226,7 @@ async function writeCreates(
       organisationId: actor.organisationId,
       tagCode: codes[i],
       status: "in_service",
-      nextInspectionDue: nextDue(c.input.inServiceOn ?? today(), intervals[c.input.kind]),
+      nextInspectionDue: nextDue(c.input.inServiceOn ?? due.today, due.intervals[c.input.kind]),
       importBatchId: batchId,
     })),
     trx,

@@ -1,6 +1,10 @@
 // Plain-text first: yard phones and shop PCs read these. Pure functions, tested in
 // tests/unit/mail/templates.test.ts.
 import { ROLE_LABELS, type Role } from "@/lib/auth/roles";
+import { formatDateTime } from "@/lib/time";
+
+/** When a link stops working, on the organisation's clock, with the zone named. */
+const until = (at: Date, timeZone: string) => `${formatDateTime(at, timeZone)} (${timeZone.replaceAll("_", " ")} time)`;
 
 export interface MailMessage {
   to: string;
@@ -9,7 +13,7 @@ export interface MailMessage {
 }
 
 /**
- * @example inviteMail({ to: "a@b.example", organisationName: "Acme", inviterName: "Ann", role: "planner", link, expiresAt })
+ * @example inviteMail({ to: "a@b.example", organisationName: "Acme", inviterName: "Ann", role: "planner", link, expiresAt, timeZone: "America/Chicago" })
  */
 export function inviteMail(p: {
   to: string;
@@ -18,6 +22,7 @@ export function inviteMail(p: {
   role: Role;
   link: string;
   expiresAt: Date;
+  timeZone: string;
 }): MailMessage {
   return {
     to: p.to,
@@ -28,13 +33,13 @@ export function inviteMail(p: {
       `Accept the invite and choose your password here:`,
       p.link,
       "",
-      `The link works once and expires on ${p.expiresAt.toUTCString()}.`,
+      `The link works once and expires on ${until(p.expiresAt, p.timeZone)}.`,
       "If you did not expect this e-mail, ignore it.",
     ].join("\n"),
   };
 }
 
-export function passwordResetMail(p: { to: string; link: string; expiresAt: Date }): MailMessage {
+export function passwordResetMail(p: { to: string; link: string; expiresAt: Date; timeZone: string }): MailMessage {
   return {
     to: p.to,
     subject: "Reset your Linkyard password",
@@ -44,7 +49,7 @@ export function passwordResetMail(p: { to: string; link: string; expiresAt: Date
       "Choose a new password here:",
       p.link,
       "",
-      `The link works once and expires on ${p.expiresAt.toUTCString()}.`,
+      `The link works once and expires on ${until(p.expiresAt, p.timeZone)}.`,
       "If it was not you, ignore this e-mail: your password stays as it is.",
     ].join("\n"),
   };

@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { addDays } from "@/lib/time";
 import { ITEM_KINDS, ITEM_STATUSES } from "./labels";
 
 // Query and body shapes of the stock API, shared by the route handlers and the table.
@@ -19,6 +20,21 @@ export const itemListQuerySchema = z.object({
   q: z.preprocess(blank, z.string().trim().max(60).optional()),
 });
 export type ItemListQuery = z.output<typeof itemListQuerySchema>;
+
+/** Days ahead that "due soon" looks (the list's "30d" filter and the home page's tile). */
+export const DUE_SOON_DAYS = 30;
+
+/**
+ * The list query with its inspection filter as dates, counted from the organisation's today.
+ * @example listFilters({ due: "overdue", page: 1, perPage: 25, sort: "tagCode", order: "asc" }, "2026-12-01").dueBefore // "2026-12-01"
+ */
+export function listFilters<Q extends { due?: "overdue" | "30d" }>({ due, ...query }: Q, today: string) {
+  return {
+    ...query,
+    ...(due === "overdue" && { dueBefore: today }),
+    ...(due === "30d" && { dueBy: addDays(today, DUE_SOON_DAYS) }),
+  };
+}
 
 const answers = z
   .array(z.object({ id: z.string().min(1), defect: z.boolean({ error: "defect is true or false" }) }), { error: "answers lists every checklist point" })

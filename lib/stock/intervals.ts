@@ -1,3 +1,4 @@
+import { addDays } from "@/lib/time";
 import { ITEM_KINDS, type ItemKind } from "./labels";
 
 /**
@@ -27,11 +28,9 @@ export function intervalsWithDefaults(saved: Partial<Record<string, unknown>> | 
 }
 
 /**
- * The next due date after an inspection on `from` (YYYY-MM-DD), in UTC days.
+ * The next due date after an inspection on `from` (YYYY-MM-DD): calendar days later.
  * @example nextDue("2026-01-31", 30) // "2026-03-02"
  */
 export function nextDue(from: string, days: number): string {
-  const d = new Date(`${from}T00:00:00Z`);
-  d.setUTCDate(d.getUTCDate() + days);
-  return d.toISOString().slice(0, 10);
+  return addDays(from, days);
 }

@@ -4,10 +4,12 @@ import { getItem } from "@/db/items";
 import type { Permission } from "@/lib/auth/roles";
 import { requirePage } from "@/lib/auth/session";
 import { isUuid } from "@/lib/http/ids";
+import { organisationClock } from "@/lib/organisations/service";
 
 /**
  * For the item pages: the signed-in person (sign-in or 403 otherwise) and the item of their
- * organisation named by the path, or a 404 for a malformed id or another organisation's.
+ * organisation named by the path, or a 404 for a malformed id or another organisation's;
+ * with the organisation's clock (its time zone and today), for the dates the page shows.
  */
 export async function requireItemPage(permission: Permission, params: Promise<{ id: string }>) {
   const principal = await requirePage(permission);
@@ -15,5 +17,5 @@ export async function requireItemPage(permission: Permission, params: Promise<{ 
   if (!isUuid(id)) notFound();
   const item = await getItem(principal.organisationId, id);
   if (!item) notFound();
-  return { principal, id, item };
+  return { principal, id, item, clock: await organisationClock(principal.organisationId) };
 }

@@ -7,7 +7,7 @@ import { can, type Permission } from "@/lib/auth/roles";
 import { config } from "@/lib/config";
 import { AppError, badRequest, conflict, fieldError, forbidden, notFound } from "@/lib/http/errors";
 import { sendMail } from "@/lib/mail/send";
-import { inspectionIntervals } from "@/lib/organisations/service";
+import { inspectionIntervals, organisationClock } from "@/lib/organisations/service";
 import { damageReportMail } from "@/lib/mail/templates";
 import { removeStored, storeUpload, type StoredFile } from "@/lib/storage/files";
 import type { FilePurpose } from "@/lib/storage/file-type";
@@ -29,8 +29,6 @@ function require(actor: Principal, permission: Permission) {
   if (!can(actor, permission)) throw forbidden();
 }
 
-const today = () => new Date().toISOString().slice(0, 10);
-
 async function checkReferences(actor: Principal, input: ItemInput, exceptId: string | undefined, trx: Tx) {
   if (input.yardId && !(await items.yardBelongs(actor.organisationId, input.yardId, trx))) {
     throw fieldError("yardId", "Choose a yard from the list.");
@@ -43,12 +41,13 @@ async function checkReferences(actor: Principal, input: ItemInput, exceptId: str
 export async function createItem(actor: Principal, input: ItemInput): Promise<string> {
   require(actor, "stock.edit");
   const intervals = await inspectionIntervals(actor.organisationId);
+  const { today } = await organisationClock(actor.organisationId);
   return audited(actor, async (trx, audit) => {
     await checkReferences(actor, input, undefined, trx);
     const row = itemRow(input);
     const [tagCode] = await freshTagCodes(1, trx);
     const [id] = await items.insertItems(
-      [{ ...row, organisationId: actor.organisationId, tagCode, status: "in_service", nextInspectionDue: nextDue(input.inServiceOn ?? today(), intervals[input.kind]) }],
+      [{ ...row, organisationId: actor.organisationId, tagCode, status: "in_service", nextInspectionDue: nextDue(input.inServiceOn ?? today, intervals[input.kind]) }],
       trx,
     );
     await items.insertEvents([{ organisationId: actor.organisationId, itemId: id, type: "created", actorId: actor.userId, note: "Added to stock" }], trx);
@@ -203,6 +202,7 @@ export async function recordInspection(actor: Principal, id: string, input: Insp
   const problem = verdictProblem(input.verdict, outcome.defects.length, measured);
   if (problem) throw fieldError("verdict", problem);
   const intervals = await inspectionIntervals(actor.organisationId);
+  const { today } = await organisationClock(actor.organisationId);
   const change: StatusChange = input.verdict === "in_service" ? "inspect_in_service" : input.verdict === "repair" ? "inspect_repair" : "inspect_retire";
   return withUpload(actor, input.certificate, "certificate", "certificate", (stored) =>
     audited(actor, async (trx, audit) => {
@@ -215,7 +215,7 @@ export async function recordInspection(actor: Principal, id: string, input: Insp
       await items.updateItem(
         actor.organisationId,
         id,
-        { status, lastInspectedOn: today(), nextInspectionDue: input.verdict === "retire" ? null : nextDue(today(), intervals[kind]) },
+        { status, lastInspectedOn: today, nextInspectionDue: input.verdict === "retire" ? null : nextDue(today, intervals[kind]) },
         trx,
       );
       await audit({ action: "item.inspected", entity: "item", entityId: id, after: { status, verdict: input.verdict } });

@@ -3,14 +3,17 @@ import { InviteForm, PersonRow, WithdrawInviteButton } from "@/components/people
 import { listOpenInvites, listPeople } from "@/db/people";
 import { ROLE_LABELS, type Role } from "@/lib/auth/roles";
 import { requirePage } from "@/lib/auth/session";
+import { organisationClock } from "@/lib/organisations/service";
+import { formatDay } from "@/lib/time";
 
 export const metadata: Metadata = { title: "People" };
 
 export default async function PeoplePage() {
   const principal = await requirePage("people.manage");
-  const [people, invites] = await Promise.all([
+  const [people, invites, { timeZone }] = await Promise.all([
     listPeople(principal.organisationId),
     listOpenInvites(principal.organisationId),
+    organisationClock(principal.organisationId),
   ]);
   return (
     <div className="flex max-w-3xl flex-col gap-6">
@@ -24,7 +27,7 @@ export default async function PeoplePage() {
               <li key={i.id} className="flex flex-wrap items-center justify-between gap-2 rounded-xl border-2 border-ink-soft p-3">
                 <span className="text-lg">
                   <strong>{i.email}</strong> as {ROLE_LABELS[i.role as Role].toLowerCase()}, until{" "}
-                  {new Date(i.expiresAt).toLocaleDateString("en-CA")}
+                  {formatDay(i.expiresAt, timeZone)}
                 </span>
                 <WithdrawInviteButton inviteId={i.id} email={i.email} />
               </li>

@@ -3,13 +3,13 @@ import { revalidatePath } from "next/cache";
 import { z } from "zod";
 import { formAction } from "@/lib/auth/action";
 import { createApiToken, revokeToken } from "@/lib/auth/api-tokens";
-import { flagField, nameField, roleField } from "@/lib/auth/schemas";
+import { flagField, nameField, roleField, timeZoneField } from "@/lib/auth/schemas";
 import { saveInspectionIntervals, saveOrganisation } from "@/lib/organisations/service";
 import { ITEM_KINDS, KIND_LABELS, type ItemKind } from "@/lib/stock/labels";
 
 export const saveOrganisationAction = formAction(
   "settings.manage",
-  z.object({ name: nameField, publicTagView: flagField }),
+  z.object({ name: nameField, publicTagView: flagField, timeZone: timeZoneField }),
   async (input, principal) => {
     await saveOrganisation(principal, input);
     revalidatePath("/", "layout");

@@ -5,6 +5,7 @@ import { getOrganisation } from "@/db/organisations";
 import { inspectionIntervals } from "@/lib/organisations/service";
 import { ROLE_LABELS, type Role } from "@/lib/auth/roles";
 import { requirePage } from "@/lib/auth/session";
+import { formatDay, timeZones } from "@/lib/time";
 
 export const metadata: Metadata = { title: "Settings" };
 
@@ -18,7 +19,7 @@ export default async function SettingsPage() {
   return (
     <div className="flex max-w-3xl flex-col gap-6">
       <h1 className="text-3xl font-bold">Settings</h1>
-      <OrganisationForm name={organisation!.name} publicTagView={organisation!.publicTagView} />
+      <OrganisationForm name={organisation!.name} publicTagView={organisation!.publicTagView} timeZone={organisation!.timeZone} timeZones={timeZones()} />
       <IntervalsForm intervals={intervals} />
       <section aria-labelledby="tokens-heading" className="flex flex-col gap-3 rounded-xl border-2 border-ink-soft p-4">
         <h2 id="tokens-heading" className="text-xl font-bold">API tokens</h2>
@@ -31,7 +32,7 @@ export default async function SettingsPage() {
             <li key={t.id} className="flex flex-wrap items-center justify-between gap-2 rounded-lg border-2 border-idle p-3">
               <span className="text-lg">
                 <strong>{t.name}</strong> · {ROLE_LABELS[t.role as Role]} ·{" "}
-                {t.lastUsedAt ? `last used ${new Date(t.lastUsedAt).toLocaleDateString("en-CA")}` : "never used"}
+                {t.lastUsedAt ? `last used ${formatDay(t.lastUsedAt, organisation!.timeZone)}` : "never used"}
               </span>
               <RevokeTokenButton tokenId={t.id} name={t.name} />
             </li>

@@ -11,6 +11,7 @@ import { requireItemPage } from "@/lib/stock/page-item";
 import type { ItemKind, ItemStatus } from "@/lib/stock/labels";
 import { itemRating } from "@/lib/stock/rating";
 import { describeItem, sizeLabel } from "@/lib/stock/summary";
+import { formatDay } from "@/lib/time";
 
 export const metadata: Metadata = { title: "Item" };
 
@@ -27,14 +28,13 @@ function Fact({ label, children }: { label: string; children: React.ReactNode })
 }
 
 export default async function ItemPage({ params }: { params: Promise<{ id: string }> }) {
-  const { principal, id, item } = await requireItemPage("stock.view", params);
+  const { principal, id, item, clock } = await requireItemPage("stock.view", params);
   const events = await listEvents(principal.organisationId, id);
   const status = item.status as ItemStatus;
   const rating = itemRating({ kind: item.kind as ItemKind, grade: item.grade, gradeMarked: item.gradeMarked, size: item.size, markedWllLb: item.markedWllLb, details: item.details });
   const lastCheck = events.find((e) => e.type === "check");
   const details = item.details as { mechanism?: string; chainSizeRange?: [string, string]; ends?: string };
-  const today = new Date().toISOString().slice(0, 10);
-  const overdue = item.nextInspectionDue !== null && item.nextInspectionDue < today;
+  const overdue = item.nextInspectionDue !== null && item.nextInspectionDue < clock.today;
 
   return (
     <div className="flex max-w-3xl flex-col gap-5">
@@ -44,7 +44,7 @@ export default async function ItemPage({ params }: { params: Promise<{ id: strin
         <div><StatusBadge status={status} /></div>
       </header>
 
-      <UsabilityBanner status={status} nextInspectionDue={item.nextInspectionDue} />
+      <UsabilityBanner status={status} nextInspectionDue={item.nextInspectionDue} today={clock.today} />
 
       <section aria-labelledby="wll-heading" className="rounded-xl border-2 border-ink p-4">
         <h2 id="wll-heading" className="text-base font-bold text-ink-soft">Working load limit</h2>
@@ -95,7 +95,7 @@ export default async function ItemPage({ params }: { params: Promise<{ id: strin
           <Fact label="Serial or lot">{item.serial ?? "none"}</Fact>
           <Fact label="Lives at">{item.yardName ?? "no yard set"}</Fact>
           <Fact label="Last pre-use check">
-            {lastCheck ? `${new Date(lastCheck.at).toISOString().slice(0, 10)}, ${lastCheck.outcome === "pass" ? "no defects" : "defects found"}` : "none recorded"}
+            {lastCheck ? `${formatDay(lastCheck.at, clock.timeZone)}, ${lastCheck.outcome === "pass" ? "no defects" : "defects found"}` : "none recorded"}
           </Fact>
           <Fact label="Last periodic inspection">{item.lastInspectedOn ?? "none recorded"}</Fact>
           <Fact label="Next inspection due">
@@ -143,8 +143,8 @@ export default async function ItemPage({ params }: { params: Promise<{ id: strin
 
       <section aria-labelledby="history-heading" className="flex flex-col gap-2">
         <h2 id="history-heading" className="text-xl font-bold">Service history</h2>
-        <p className="text-base text-ink-soft">Entries are never changed or deleted. A mistake is answered by a correction.</p>
-        <EventList itemId={id} events={events} canCorrect={can(principal, "items.check")} />
+        <p className="text-base text-ink-soft">Entries are never changed or deleted. A mistake is answered by a correction. Times are in {clock.timeZone.replaceAll("_", " ")}.</p>
+        <EventList itemId={id} events={events} canCorrect={can(principal, "items.check")} timeZone={clock.timeZone} />
       </section>
     </div>
   );

@@ -1,13 +1,15 @@
 import { getItem, listItems } from "@/db/items";
 import { route } from "@/lib/http/route";
-import { itemListQuerySchema } from "@/lib/stock/api-schemas";
+import { organisationClock } from "@/lib/organisations/service";
+import { itemListQuerySchema, listFilters } from "@/lib/stock/api-schemas";
 import { itemInputSchema } from "@/lib/stock/schemas";
 import { createItem } from "@/lib/stock/service";
 import { toItemSummary } from "@/lib/stock/summary";
 
 /** A page of stock: filters kind, status, yardId, due (overdue | 30d), q (tag code or serial). */
 export const GET = route("stock.view", { query: itemListQuerySchema }, async ({ principal, query }) => {
-  const page = await listItems(principal.organisationId, query);
+  const { today } = await organisationClock(principal.organisationId);
+  const page = await listItems(principal.organisationId, listFilters(query, today));
   return { data: page.data.map(toItemSummary), pageCount: page.pageCount, total: page.total };
 });
 

@@ -4,13 +4,13 @@ import { PreUseCheckForm } from "@/components/items/item-forms";
 import { UsabilityBanner } from "@/components/items/usability-banner";
 import { requireItemPage } from "@/lib/stock/page-item";
 import { PRE_USE_CHECKLISTS } from "@/lib/stock/checklists";
-import type { ItemKind, ItemStatus } from "@/lib/stock/labels";
+import type { ItemKind } from "@/lib/stock/labels";
 import { describeItem } from "@/lib/stock/summary";
 
 export const metadata: Metadata = { title: "Pre-use check" };
 
 export default async function PreUseCheckPage({ params }: { params: Promise<{ id: string }> }) {
-  const { id, item } = await requireItemPage("items.check", params);
+  const { id, item, clock } = await requireItemPage("items.check", params);
   return (
     <div className="flex max-w-xl flex-col gap-4">
       <Link href={`/items/${id}`} className="text-lg underline">← {item.tagCode}</Link>
@@ -19,7 +19,7 @@ export default async function PreUseCheckPage({ params }: { params: Promise<{ id
       <PreUseCheckForm
         itemId={id}
         points={PRE_USE_CHECKLISTS[item.kind as ItemKind]}
-        notUsable={item.status === "in_service" ? undefined : <UsabilityBanner status={item.status as ItemStatus} nextInspectionDue={item.nextInspectionDue} />}
+        notUsable={item.status === "in_service" ? undefined : <UsabilityBanner status={item.status} nextInspectionDue={item.nextInspectionDue} today={clock.today} />}
       />
     </div>
   );

@@ -5,6 +5,8 @@ import { UndoImportButton } from "@/components/import/undo-import";
 import { buttonClass } from "@/components/ui/button-class";
 import { createdItemIds, getBatch } from "@/db/imports";
 import { requirePage } from "@/lib/auth/session";
+import { organisationClock } from "@/lib/organisations/service";
+import { formatDateTime } from "@/lib/time";
 import { isUuid } from "@/lib/http/ids";
 import { undoState } from "@/lib/import/undo";
 
@@ -20,9 +22,10 @@ export default async function ImportResultPage({ params }: { params: Promise<{ b
   if (!isUuid(batchId)) notFound();
   const batch = await getBatch(principal.organisationId, batchId);
   if (!batch) notFound();
-  const [ids, undo] = await Promise.all([
+  const [ids, undo, { timeZone }] = await Promise.all([
     batch.status === "committed" ? createdItemIds(principal.organisationId, batchId, SHEET * MAX_SHEETS) : Promise.resolve([]),
     undoState(principal.organisationId, batch),
+    organisationClock(principal.organisationId),
   ]);
   const sheets: string[][] = [];
   for (let i = 0; i < ids.length; i += SHEET) sheets.push(ids.slice(i, i + SHEET));
@@ -32,7 +35,7 @@ export default async function ImportResultPage({ params }: { params: Promise<{ b
       <header className="flex flex-col gap-1">
         <h1 className="text-3xl font-bold">{batch.status === "undone" ? "Import undone" : batch.status === "running" ? "Import running" : "Import done"}</h1>
         <p className="text-lg">
-          <strong>{batch.fileName}</strong> · {new Date(batch.createdAt).toISOString().slice(0, 16).replace("T", " ")} UTC by {batch.createdByName}
+          <strong>{batch.fileName}</strong> · {formatDateTime(batch.createdAt, timeZone)} by {batch.createdByName}
         </p>
       </header>
 

@@ -3,16 +3,18 @@ import Link from "next/link";
 import { UndoImportButton } from "@/components/import/undo-import";
 import { listBatches } from "@/db/imports";
 import { requirePage } from "@/lib/auth/session";
+import { organisationClock } from "@/lib/organisations/service";
+import { formatDateTime } from "@/lib/time";
 import { undoState } from "@/lib/import/undo";
 
 export const metadata: Metadata = { title: "Import history" };
 
-const when = (d: Date) => new Date(d).toISOString().slice(0, 16).replace("T", " ") + " UTC";
 const n = (v: number) => v.toLocaleString("en-US");
 
 export default async function ImportHistoryPage() {
   const principal = await requirePage("stock.import");
-  const batches = await listBatches(principal.organisationId);
+  const [batches, { timeZone }] = await Promise.all([listBatches(principal.organisationId), organisationClock(principal.organisationId)]);
+  const when = (d: Date) => formatDateTime(d, timeZone);
   const undo = await Promise.all(batches.map((b) => undoState(principal.organisationId, b)));
   return (
     <div className="flex max-w-5xl flex-col gap-4">

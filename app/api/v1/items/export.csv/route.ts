@@ -1,7 +1,8 @@
 import { streamItems } from "@/db/items";
 import { csvLine, EXPORT_HEADERS, exportRow } from "@/lib/import/csv-write";
 import { route } from "@/lib/http/route";
-import { itemListQuerySchema } from "@/lib/stock/api-schemas";
+import { organisationClock } from "@/lib/organisations/service";
+import { itemListQuerySchema, listFilters } from "@/lib/stock/api-schemas";
 import { csvDownloadHeaders } from "@/lib/http/download";
 
 /**
@@ -12,7 +13,8 @@ import { csvDownloadHeaders } from "@/lib/http/download";
  * a yard hand reads the stock on screen.
  */
 export const GET = route("stock.edit", { query: itemListQuerySchema }, async ({ principal, query }) => {
-  const batches = streamItems(principal.organisationId, query);
+  const { today } = await organisationClock(principal.organisationId);
+  const batches = streamItems(principal.organisationId, listFilters(query, today));
   const encoder = new TextEncoder();
   let started = false;
   const stream = new ReadableStream<Uint8Array>({
@@ -35,6 +37,5 @@ export const GET = route("stock.edit", { query: itemListQuerySchema }, async ({ 
       await batches.return(undefined);
     },
   });
-  const day = new Date().toISOString().slice(0, 10);
-  return new Response(stream, { headers: csvDownloadHeaders(`linkyard-stock-${day}.csv`) });
+  return new Response(stream, { headers: csvDownloadHeaders(`linkyard-stock-${today}.csv`) });
 });

@@ -1,0 +1,63 @@
+import { describe, expect, it } from "vitest";
+import { addDays, canonicalTimeZone, formatDateTime, formatDay, isTimeZone, timeZones, todayIn } from "@/lib/time";
+
+describe("todayIn", () => {
+  it("a US yard (America/Chicago) at 7 pm local on 2026-12-01 sees 2026-12-01, not 12-02", () => {
+    const sevenPm = new Date("2026-12-02T01:00:00Z"); // 19:00 CST (UTC-6)
+    expect(todayIn("America/Chicago", sevenPm)).toBe("2026-12-01");
+    expect(todayIn("UTC", sevenPm)).toBe("2026-12-02");
+  });
+
+  it("turns the day at local midnight, on either side of a daylight-saving change", () => {
+    expect(todayIn("America/Chicago", new Date("2026-03-08T05:59:00Z"))).toBe("2026-03-07"); // 23:59 CST
+    expect(todayIn("America/Chicago", new Date("2026-03-08T06:00:00Z"))).toBe("2026-03-08"); // 00:00 CST
+    expect(todayIn("America/Chicago", new Date("2026-11-01T04:59:00Z"))).toBe("2026-10-31"); // 23:59 CDT
+    expect(todayIn("America/Chicago", new Date("2026-11-01T05:00:00Z"))).toBe("2026-11-01"); // 00:00 CDT
+  });
+
+  it("is ahead of UTC east of Greenwich", () => {
+    expect(todayIn("Pacific/Auckland", new Date("2026-12-01T12:00:00Z"))).toBe("2026-12-02");
+  });
+});
+
+describe("formatDay and formatDateTime", () => {
+  it("show an instant on the organisation's wall clock, not UTC's", () => {
+    const at = new Date("2026-12-02T01:04:00Z");
+    expect(formatDateTime(at, "America/Chicago")).toBe("2026-12-01 19:04");
+    expect(formatDay(at, "America/Chicago")).toBe("2026-12-01");
+    expect(formatDateTime(at.toISOString(), "America/New_York")).toBe("2026-12-01 20:04");
+    expect(formatDateTime(new Date("2026-07-01T12:00:00Z"), "America/Chicago")).toBe("2026-07-01 07:00"); // CDT
+  });
+});
+
+describe("addDays", () => {
+  it("adds calendar days across months, leap days and daylight-saving changes", () => {
+    expect(addDays("2026-01-31", 30)).toBe("2026-03-02");
+    expect(addDays("2028-02-28", 1)).toBe("2028-02-29");
+    expect(addDays("2026-03-07", 1)).toBe("2026-03-08");
+    expect(addDays("2026-12-01", 365)).toBe("2027-12-01");
+    expect(addDays("2026-12-01", -1)).toBe("2026-11-30");
+  });
+});
+
+describe("time zone names", () => {
+  it("knows the IANA names of Intl's list, and UTC", () => {
+    expect(timeZones()[0]).toBe("UTC");
+    expect(timeZones()).toContain("America/Chicago");
+    expect(isTimeZone("America/Chicago")).toBe(true);
+    expect(isTimeZone("UTC")).toBe(true);
+  });
+
+  it("refuses a name Intl does not know", () => {
+    expect(isTimeZone("Mars/Olympus")).toBe(false);
+    expect(isTimeZone("")).toBe(false);
+    expect(canonicalTimeZone("not a zone")).toBeNull();
+  });
+
+  it("takes an alias under the list's own name", () => {
+    const kolkata = canonicalTimeZone("Asia/Kolkata");
+    expect(kolkata).not.toBeNull();
+    expect(timeZones()).toContain(kolkata);
+    expect(canonicalTimeZone("Etc/UTC")).toBe("UTC");
+  });
+});
