@@ -7,6 +7,7 @@ import { buttonClass } from "@/components/ui/button-class";
 import { FIELD_LABELS, IMPORT_FIELDS, type ColumnMapping, type ImportField } from "@/lib/import/fields";
 import { MAX_IMPORT_BYTES } from "@/lib/import/file-check";
 import type { BatchJson, ImportBody } from "@/lib/import/answers";
+import { ApiError, apiJson } from "@/lib/http/client";
 import { ErrorTable, PreviewTable } from "./import-tables";
 
 type Step = "upload" | "mapping" | "preview";
@@ -14,12 +15,6 @@ interface SavedMapping {
   id: string;
   name: string;
   mapping: Record<string, string | null>;
-}
-
-class ImportRequestError extends Error {
-  constructor(message: string, readonly body?: ImportBody) {
-    super(message);
-  }
 }
 
 /** A random v4 UUID, also where the page is not served over https (crypto.randomUUID needs that). */
@@ -39,11 +34,7 @@ async function postImport(file: File, options: { mapping?: ColumnMapping; dryRun
   if (options.validOnly) form.append("validOnly", "true");
   if (options.batchId) form.append("batchId", options.batchId);
   form.append("file", file); // last, so the small fields are read before the file streams in
-  const res = await fetch("/api/v1/imports", { method: "POST", body: form });
-  const body = await res.json().catch(() => ({}));
-  if (res.status === 422) throw new ImportRequestError(body.error ?? "Nothing was imported.", body as ImportBody);
-  if (!res.ok) throw new ImportRequestError(body.error ?? `The server answered ${res.status}.`);
-  return body as ImportBody;
+  return apiJson<ImportBody>("/api/v1/imports", { method: "POST", body: form });
 }
 
 const count = (n: number, one: string, many = `${one}s`) => `${n.toLocaleString("en-US")} ${n === 1 ? one : many}`;
@@ -81,7 +72,8 @@ export function ImportWizard({ savedMappings }: { savedMappings: SavedMapping[] 
     onError: (e) => {
       setBatchId(null);
       setProblem(e.message);
-      if (e instanceof ImportRequestError && e.body) setCheck(e.body);
+      // a 422 carries the report of the rows that stopped the import
+      if (e instanceof ApiError && e.status === 422 && e.body) setCheck(e.body as ImportBody);
     },
   });
 
@@ -90,10 +82,7 @@ export function ImportWizard({ savedMappings }: { savedMappings: SavedMapping[] 
     enabled: Boolean(batchId) && commit.isPending,
     refetchInterval: 1000,
     retry: false,
-    queryFn: async (): Promise<BatchJson | null> => {
-      const res = await fetch(`/api/v1/imports/${batchId}`);
-      return res.ok ? ((await res.json()) as BatchJson) : null;
-    },
+    queryFn: (): Promise<BatchJson | null> => apiJson<BatchJson>(`/api/v1/imports/${batchId}`).catch(() => null),
   });
 
   function choose(f: File | undefined) {
@@ -227,12 +216,11 @@ function MappingStep(props: {
   const [note, setNote] = useState<{ ok: boolean; text: string } | null>(null);
   const headerErrors = check.fatal ? check.errors.slice(0, 5) : [];
   const save = useMutation({
-    mutationFn: async () => {
-      const res = await fetch("/api/v1/imports/mappings", { method: "POST", headers: { "content-type": "application/json" }, body: JSON.stringify({ name, mapping }) });
-      const body = await res.json().catch(() => ({}));
-      if (!res.ok) throw new Error(body.issues?.[0]?.message ?? body.error ?? `The server answered ${res.status}.`);
-      return body as SavedMapping;
-    },
+    mutationFn: () =>
+      apiJson<SavedMapping>("/api/v1/imports/mappings", { method: "POST", body: JSON.stringify({ name, mapping }) }).catch((e: unknown) => {
+        // the field's own words (e.g. "Enter a name") say more than "Some fields need fixing"
+        throw e instanceof ApiError && e.issues[0] ? new Error(e.issues[0].message) : e;
+      }),
     onSuccess: (m) => {
       props.onSaved(m);
       setNote({ ok: true, text: `Saved as "${m.name}".` });

@@ -3,18 +3,14 @@ import { useMutation } from "@tanstack/react-query";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { buttonClass } from "@/components/ui/button-class";
+import { apiJson } from "@/lib/http/client";
 
 /** Undo an import, after saying what undo does. */
 export function UndoImportButton({ batchId, created, updated }: { batchId: string; created: number; updated: number }) {
   const router = useRouter();
   const [asking, setAsking] = useState(false);
   const undo = useMutation({
-    mutationFn: async () => {
-      const res = await fetch(`/api/v1/imports/${batchId}/undo`, { method: "POST" });
-      const body = await res.json().catch(() => ({}));
-      if (!res.ok) throw new Error(body.error ?? `The server answered ${res.status}.`);
-      return body as { retired: number; restored: number };
-    },
+    mutationFn: () => apiJson<{ retired: number; restored: number }>(`/api/v1/imports/${batchId}/undo`, { method: "POST" }),
     onSuccess: () => {
       setAsking(false);
       router.refresh();

@@ -1,6 +1,7 @@
 "use client";
 import { useRouter } from "next/navigation";
 import { useCallback, useRef, useState } from "react";
+import { ApiError, apiJson } from "@/lib/http/client";
 import type { ItemSummaryJson } from "@/lib/stock/summary";
 
 /** Where the code came from: the result is shown beside it. */
@@ -26,30 +27,27 @@ export function useTagLookup(before?: () => Promise<void> | void) {
       if (busy.current) return false;
       busy.current = true;
       setState({ step: "looking", code, source });
+      let item: ItemSummaryJson;
       try {
-        const res = await fetch(`/api/v1/tags/${encodeURIComponent(code)}`, { headers: { accept: "application/json" } });
-        const body = await res.json().catch(() => ({}));
-        if (res.ok) {
-          const item = body as ItemSummaryJson;
-          setState({ step: "found", code, source, item });
-          await before?.();
-          router.push(item.url);
-          return true;
-        }
+        item = await apiJson<ItemSummaryJson>(`/api/v1/tags/${encodeURIComponent(code)}`);
+      } catch (error) {
+        const status = error instanceof ApiError ? error.status : -1;
         const message =
-          res.status === 404
+          status === 404
             ? `No item in your company has the tag code ${code}.`
-            : res.status === 401
+            : status === 401
               ? "Your session has ended. Sign in again, then scan."
-              : (body.error as string | undefined) ?? "The lookup failed. Try again.";
-        setState({ step: "failed", code, source, message, unknown: res.status === 404 });
-        busy.current = false;
-        return false;
-      } catch {
-        setState({ step: "failed", code, source, message: "No connection to Linkyard. Check the signal and try again.", unknown: false });
+              : error instanceof ApiError
+                ? error.message
+                : "The lookup failed. Try again.";
+        setState({ step: "failed", code, source, message, unknown: status === 404 });
         busy.current = false;
         return false;
       }
+      setState({ step: "found", code, source, item });
+      await before?.();
+      router.push(item.url);
+      return true;
     },
     [before, router],
   );
