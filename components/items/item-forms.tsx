@@ -2,7 +2,7 @@
 import Link from "next/link";
 import { useActionState, useState } from "react";
 import { certificateAction, itemEventAction } from "@/app/(app)/items/[id]/actions";
-import { SubmitButton, type ButtonVariant } from "@/components/ui/button";
+import { buttonClass, SubmitButton, type ButtonVariant } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
 import { FormAlert } from "@/components/ui/form-alert";
 import { initialFormState } from "@/lib/forms/state";
@@ -80,8 +80,8 @@ export function PreUseCheckForm({ itemId, points, notUsable }: { itemId: string;
     return (
       <div className="flex flex-col gap-4">
         <FormAlert state={state} />
-        <Link href={`/items/${itemId}`} className="flex min-h-tap items-center justify-center rounded-lg border-2 border-ink bg-signal text-lg font-bold">Back to the item</Link>
-        <Link href="/scan" className="flex min-h-tap items-center justify-center rounded-lg border-2 border-ink text-lg font-bold">Scan the next tag</Link>
+        <Link href={`/items/${itemId}`} className={buttonClass("primary")}>Back to the item</Link>
+        <Link href="/scan" className={buttonClass("secondary")}>Scan the next tag</Link>
       </div>
     );
   }
@@ -104,7 +104,7 @@ export function InspectionForm({ itemId, points, measurements }: { itemId: strin
     return (
       <div className="flex flex-col gap-4">
         <FormAlert state={state} />
-        <Link href={`/items/${itemId}`} className="flex min-h-tap items-center justify-center rounded-lg border-2 border-ink bg-signal text-lg font-bold">Back to the item</Link>
+        <Link href={`/items/${itemId}`} className={buttonClass("primary")}>Back to the item</Link>
       </div>
     );
   }

@@ -51,7 +51,7 @@ export function ManualEntry({ onCode, busy, children }: { onCode: (code: string)
         {error}
       </p>
       {children}
-      <button type="submit" disabled={busy} className={buttonClass("primary", "min-h-16 w-full text-xl")}>
+      <button type="submit" disabled={busy} className={buttonClass("primary", "w-full", "large")}>
         {busy ? "Looking up…" : "Open item"}
       </button>
     </form>

@@ -11,6 +11,7 @@ import {
 import Link from "next/link";
 import { usePathname, useRouter, useSearchParams } from "next/navigation";
 import { useMemo, useState } from "react";
+import { buttonClass } from "@/components/ui/button-class";
 import { StatusBadge } from "@/components/ui/status-badge";
 import { apiJson } from "@/lib/http/client";
 import { ITEM_KINDS, ITEM_STATUSES, KIND_LABELS, STATUS_LABELS, type ItemStatus } from "@/lib/stock/labels";
@@ -133,7 +134,7 @@ export function StockTable({ yards, canEdit, canExport = false, today }: { yards
           Tag code or serial
           <input name="q" defaultValue={params.get("q") ?? ""} className="min-h-tap rounded-lg border-2 border-ink-soft px-3 text-lg" autoCapitalize="characters" />
         </label>
-        <button type="submit" className="min-h-tap rounded-lg border-2 border-ink bg-signal px-4 text-lg font-bold">Search</button>
+        <button type="submit" className={buttonClass("primary")}>Search</button>
       </form>
       <div className="grid grid-cols-2 gap-2 md:grid-cols-4">
         <Filter label="Kind" value={params.get("kind")} onChange={(v) => setParams({ kind: v })} options={ITEM_KINDS.map((k) => [k, KIND_LABELS[k]])} />
@@ -157,9 +158,9 @@ export function StockTable({ yards, canEdit, canExport = false, today }: { yards
         <div className="flex flex-col gap-2 rounded-xl border-2 border-ink bg-signal/20 p-3">
           <p className="text-lg font-bold">{selected.length} selected</p>
           <div className="flex flex-wrap gap-2">
-            <Link href={`/tags/sheet?ids=${selected.join(",")}`} className="flex min-h-tap items-center rounded-lg border-2 border-ink bg-white px-4 text-lg font-bold">Print tags</Link>
-            {canEdit && <button type="button" onClick={() => setBulk("move")} className="min-h-tap rounded-lg border-2 border-ink bg-white px-4 text-lg font-bold">Move</button>}
-            <button type="button" onClick={() => setBulk("tag_out")} className="min-h-tap rounded-lg border-2 border-stop bg-white px-4 text-lg font-bold text-stop">Tag out</button>
+            <Link href={`/tags/sheet?ids=${selected.join(",")}`} className={buttonClass("secondary")}>Print tags</Link>
+            {canEdit && <button type="button" onClick={() => setBulk("move")} className={buttonClass("secondary")}>Move</button>}
+            <button type="button" onClick={() => setBulk("tag_out")} className={buttonClass("danger-outline")}>Tag out</button>
           </div>
           {bulk === "move" && <BulkMove ids={selected} yards={yards} onDone={() => { setBulk(null); setRowSelection({}); refresh(); }} />}
           {bulk === "tag_out" && <BulkTagOut ids={selected} onDone={() => { setBulk(null); setRowSelection({}); refresh(); }} />}
@@ -216,9 +217,9 @@ export function StockTable({ yards, canEdit, canExport = false, today }: { yards
       </table>
 
       <nav aria-label="Pages" className="flex items-center justify-between gap-2">
-        <button type="button" disabled={page <= 1} onClick={() => setParams({ page: String(page - 1) })} className="min-h-tap rounded-lg border-2 border-ink px-4 text-lg font-bold disabled:opacity-40">← Previous</button>
+        <button type="button" disabled={page <= 1} onClick={() => setParams({ page: String(page - 1) })} className={buttonClass("secondary")}>← Previous</button>
         <span className="text-lg">Page {page} of {data?.pageCount ?? 1}</span>
-        <button type="button" disabled={page >= (data?.pageCount ?? 1)} onClick={() => setParams({ page: String(page + 1) })} className="min-h-tap rounded-lg border-2 border-ink px-4 text-lg font-bold disabled:opacity-40">Next →</button>
+        <button type="button" disabled={page >= (data?.pageCount ?? 1)} onClick={() => setParams({ page: String(page + 1) })} className={buttonClass("secondary")}>Next →</button>
       </nav>
     </div>
   );
@@ -247,7 +248,7 @@ function BulkMove({ ids, yards, onDone }: { ids: string[]; yards: { id: string; 
           {yards.map((y) => <option key={y.id} value={y.id}>{y.name}</option>)}
         </select>
       </label>
-      <button type="button" disabled={move.isPending} onClick={() => move.mutate()} className="min-h-tap rounded-lg border-2 border-ink bg-signal px-4 text-lg font-bold">Move {ids.length}</button>
+      <button type="button" disabled={move.isPending} onClick={() => move.mutate()} className={buttonClass("primary")}>Move {ids.length}</button>
       {move.error && <p role="alert" className="font-bold text-stop">{move.error.message}</p>}
     </div>
   );
@@ -274,7 +275,7 @@ function BulkTagOut({ ids, onDone }: { ids: string[]; onDone: () => void }) {
     <div className="flex flex-col gap-2">
       <label htmlFor="bulk-note" className="text-base font-bold">What is wrong with them?</label>
       <textarea id="bulk-note" value={note} onChange={(e) => setNote(e.target.value)} rows={2} className="rounded-lg border-2 border-ink-soft p-2 text-lg" />
-      <button type="button" disabled={tagOut.isPending || note.trim().length < 3} onClick={() => tagOut.mutate()} className="min-h-tap rounded-lg border-2 border-stop bg-stop px-4 text-lg font-bold text-white disabled:opacity-50">
+      <button type="button" disabled={tagOut.isPending || note.trim().length < 3} onClick={() => tagOut.mutate()} className={buttonClass("danger")}>
         Tag out {ids.length}
       </button>
       {problems.length > 0 && <ul role="alert" className="list-disc pl-6 font-bold text-stop">{problems.map((p, i) => <li key={i}>{p}</li>)}</ul>}

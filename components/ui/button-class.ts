@@ -1,13 +1,36 @@
-// Button looks, usable from server and client components alike.
+import { cva, type VariantProps } from "class-variance-authority";
 
-const variants = {
-  primary: "bg-signal text-ink hover:bg-signal-dark border-2 border-ink",
-  secondary: "bg-white text-ink border-2 border-ink hover:bg-idle-bg",
-  danger: "bg-stop text-white border-2 border-stop hover:opacity-90",
-};
+// The one look of a button, for <button>s and for links that act as buttons, usable from
+// server and client components alike. Tap targets are at least 48 px (min-h-tap) for gloves.
 
-export type ButtonVariant = keyof typeof variants;
+export const buttonVariants = cva("inline-flex items-center justify-center gap-2 border-2 font-bold disabled:opacity-60", {
+  variants: {
+    variant: {
+      primary: "border-ink bg-signal text-ink hover:bg-signal-dark",
+      secondary: "border-ink bg-white text-ink hover:bg-idle-bg",
+      danger: "border-stop bg-stop text-white hover:opacity-90",
+      /** A harmful action offered beside others (tag out): red words on white. */
+      "danger-outline": "border-stop bg-white text-stop hover:bg-stop-bg",
+      /** On the dark app bar. */
+      "on-dark": "border-white bg-transparent text-white hover:bg-deck-light",
+    },
+    size: {
+      normal: "min-h-tap min-w-tap rounded-lg px-5 text-lg",
+      /** The one main action of a screen (start a check). */
+      large: "min-h-16 rounded-xl px-5 text-xl",
+      small: "min-h-tap rounded-lg px-3 text-base",
+    },
+  },
+  defaultVariants: { variant: "primary", size: "normal" },
+});
 
-export function buttonClass(variant: ButtonVariant = "primary", extra = "") {
-  return `inline-flex min-h-tap min-w-tap items-center justify-center rounded-lg px-5 text-lg font-bold disabled:opacity-60 ${variants[variant]} ${extra}`;
+export type ButtonVariant = NonNullable<VariantProps<typeof buttonVariants>["variant"]>;
+export type ButtonSize = NonNullable<VariantProps<typeof buttonVariants>["size"]>;
+
+/**
+ * The classes of a button, with extra classes (layout: width, alignment) after them.
+ * @example buttonClass("secondary", "w-full") // "inline-flex … border-ink bg-white … w-full"
+ */
+export function buttonClass(variant: ButtonVariant = "primary", extra = "", size: ButtonSize = "normal"): string {
+  return buttonVariants({ variant, size, className: extra });
 }

@@ -1,6 +1,7 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { NavIcon } from "@/components/shell/nav-icon";
+import { buttonClass } from "@/components/ui/button-class";
 import { requirePage } from "@/lib/auth/session";
 import { navFor } from "@/lib/shell/nav";
 
@@ -15,7 +16,7 @@ export default async function MorePage() {
       <ul className="flex flex-col gap-2">
         {navFor(principal).map((e) => (
           <li key={e.href}>
-            <Link href={e.href} className="flex min-h-16 items-center gap-3 rounded-xl border-2 border-ink px-4 text-xl font-bold">
+            <Link href={e.href} className={buttonClass("secondary", "w-full justify-start gap-3", "large")}>
               <NavIcon icon={e.icon} />
               {e.label}
             </Link>

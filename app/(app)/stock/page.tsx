@@ -2,6 +2,7 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { Suspense } from "react";
 import { StockTable } from "@/components/stock/stock-table";
+import { buttonClass } from "@/components/ui/button-class";
 import { listYards } from "@/db/items";
 import { can } from "@/lib/auth/roles";
 import { requirePage } from "@/lib/auth/session";
@@ -18,10 +19,10 @@ export default async function StockPage() {
         <h1 className="text-3xl font-bold">Stock</h1>
         <div className="flex flex-wrap gap-2">
           {can(principal, "stock.import") && (
-            <Link href="/stock/import" className="flex min-h-tap items-center rounded-lg border-2 border-ink bg-white px-4 text-lg font-bold">Import CSV</Link>
+            <Link href="/stock/import" className={buttonClass("secondary")}>Import CSV</Link>
           )}
           {can(principal, "stock.edit") && (
-            <Link href="/stock/new" className="flex min-h-tap items-center rounded-lg border-2 border-ink bg-signal px-4 text-lg font-bold">Add an item</Link>
+            <Link href="/stock/new" className={buttonClass("primary")}>Add an item</Link>
           )}
         </div>
       </div>

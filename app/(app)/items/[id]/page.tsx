@@ -4,6 +4,7 @@ import { EventList } from "@/components/items/event-list";
 import { CertificateForm, ReasonForm, TagOutForm } from "@/components/items/item-forms";
 import { UsabilityBanner } from "@/components/items/usability-banner";
 import { StatusBadge } from "@/components/ui/status-badge";
+import { buttonClass } from "@/components/ui/button-class";
 import { listEvents } from "@/db/items";
 import { can } from "@/lib/auth/roles";
 import { toFeet, toKg } from "@/lib/securement/units";
@@ -64,20 +65,20 @@ export default async function ItemPage({ params }: { params: Promise<{ id: strin
       <section aria-labelledby="actions-heading" className="flex flex-col gap-3">
         <h2 id="actions-heading" className="sr-only">What you can do</h2>
         {status === "in_service" && can(principal, "items.check") && (
-          <Link href={`/items/${id}/check`} className="flex min-h-16 items-center justify-center rounded-xl border-2 border-ink bg-signal text-xl font-bold">
+          <Link href={`/items/${id}/check`} className={buttonClass("primary", "", "large")}>
             Pre-use check
           </Link>
         )}
         {can(principal, "items.inspect") && (status === "in_service" || status === "tagged_out") && (
-          <Link href={`/items/${id}/inspect`} className="flex min-h-tap items-center justify-center rounded-xl border-2 border-ink text-lg font-bold">
+          <Link href={`/items/${id}/inspect`} className={buttonClass("secondary")}>
             Periodic inspection
           </Link>
         )}
         <div className="flex flex-wrap gap-3">
           {can(principal, "stock.edit") && status !== "retired" && (
-            <Link href={`/items/${id}/edit`} className="flex min-h-tap items-center rounded-lg border-2 border-ink px-4 text-lg font-bold">Edit details</Link>
+            <Link href={`/items/${id}/edit`} className={buttonClass("secondary")}>Edit details</Link>
           )}
-          <Link href={`/tags/sheet?ids=${id}`} className="flex min-h-tap items-center rounded-lg border-2 border-ink px-4 text-lg font-bold">Print its tag</Link>
+          <Link href={`/tags/sheet?ids=${id}`} className={buttonClass("secondary")}>Print its tag</Link>
         </div>
       </section>
 

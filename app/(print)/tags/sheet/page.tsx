@@ -1,5 +1,6 @@
 import type { Metadata } from "next";
 import { SheetToolbar } from "@/components/tags/sheet-toolbar";
+import { buttonClass } from "@/components/ui/button-class";
 import { TagLabel, type SheetItem } from "@/components/tags/tag-label";
 import { StatusBadge } from "@/components/ui/status-badge";
 import { getItemsByIds, listItems } from "@/db/items";
@@ -120,9 +121,6 @@ function sheetCss(layout: SheetLayout): string {
 }`;
 }
 
-// The primary button's look (components/ui/button.tsx is a client module; this page is not).
-const MAKE_BUTTON = "inline-flex min-h-tap items-center justify-center rounded-lg border-2 border-ink bg-signal px-5 text-lg font-bold text-ink hover:bg-signal-dark";
-
 async function ItemPicker({ organisationId, layoutId }: { organisationId: string; layoutId: string }) {
   const { data: items } = await listItems(organisationId, { page: 1, perPage: MAX_SHEET_ITEMS, sort: "tagCode", order: "asc" });
   return (
@@ -139,7 +137,7 @@ async function ItemPicker({ organisationId, layoutId }: { organisationId: string
               ))}
             </select>
           </label>
-          <button type="submit" className={MAKE_BUTTON}>Make the tag sheet</button>
+          <button type="submit" className={buttonClass("primary")}>Make the tag sheet</button>
           <a href="/stock" className="min-h-tap content-center text-lg font-bold underline">Back to stock</a>
         </div>
         <ul className="flex flex-col gap-2">
@@ -154,7 +152,7 @@ async function ItemPicker({ organisationId, layoutId }: { organisationId: string
             </li>
           ))}
         </ul>
-        <button type="submit" className={`${MAKE_BUTTON} self-start`}>Make the tag sheet</button>
+        <button type="submit" className={buttonClass("primary", "self-start")}>Make the tag sheet</button>
       </form>
     </main>
   );

@@ -1,6 +1,7 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { UndoImportButton } from "@/components/import/undo-import";
+import { buttonClass } from "@/components/ui/button-class";
 import { listBatches } from "@/db/imports";
 import { requirePage } from "@/lib/auth/session";
 import { organisationClock } from "@/lib/organisations/service";
@@ -20,7 +21,7 @@ export default async function ImportHistoryPage() {
     <div className="flex max-w-5xl flex-col gap-4">
       <div className="flex flex-wrap items-center justify-between gap-2">
         <h1 className="text-3xl font-bold">Import history</h1>
-        <Link href="/stock/import" className="flex min-h-tap items-center rounded-lg border-2 border-ink bg-signal px-4 text-lg font-bold">Import a file</Link>
+        <Link href="/stock/import" className={buttonClass("primary")}>Import a file</Link>
       </div>
       {batches.length === 0 ? (
         <p className="text-lg">No imports yet.</p>
