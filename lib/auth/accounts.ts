@@ -1,6 +1,5 @@
 import "server-only";
 import { randomUUID } from "node:crypto";
-import { generateIdFromEntropySize } from "lucia";
 import { audited } from "@/db/audit";
 import { createOrganisation, getOrganisation } from "@/db/organisations";
 import * as people from "@/db/people";
@@ -10,6 +9,7 @@ import { inviteMail, passwordResetMail } from "@/lib/mail/templates";
 import { sendMail } from "@/lib/mail/send";
 import { DEFAULT_TIME_ZONE } from "@/lib/time";
 import { capTokensOf, revokeTokensOf } from "./api-tokens";
+import { newUserId } from "./lucia";
 import type { Role } from "./roles";
 import { can } from "./roles";
 import { hashPassword, hashSecret, newSecret, verifyPassword } from "./secrets";
@@ -31,7 +31,7 @@ export async function signUp(input: { organisationName: string; name: string; em
     ]);
   }
   const passwordHash = await hashPassword(input.password);
-  const userId = generateIdFromEntropySize(10);
+  const userId = newUserId();
   const organisationId = randomUUID();
   await audited({ organisationId, userId }, async (tx, audit) => {
     await createOrganisation({ id: organisationId, name: input.organisationName, timeZone: input.timeZone ?? DEFAULT_TIME_ZONE }, tx);
@@ -111,7 +111,7 @@ function inviteProblem(invite: { acceptedAt: Date | null; revokedAt: Date | null
 
 export async function acceptInvite(input: { token: string; name: string; password: string }): Promise<string> {
   const passwordHash = await hashPassword(input.password);
-  const userId = generateIdFromEntropySize(10);
+  const userId = newUserId();
   // The organisation is the invite's, known once the invite is read inside the transaction.
   return audited(null, async (tx, audit) => {
     const invite = await people.lockInviteByTokenHash(hashSecret(input.token), tx);

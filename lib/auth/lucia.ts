@@ -1,12 +1,12 @@
 import "server-only";
-import { Lucia } from "lucia";
+import { generateIdFromEntropySize, Lucia } from "lucia";
 import { NodePostgresAdapter } from "@lucia-auth/adapter-postgresql";
 import { pool } from "@/db";
 import { cookieSecure } from "@/lib/config";
 import type { Role } from "./roles";
 
-// lucia v3 is in maintenance; everything else talks to lib/auth/session.ts, so it can be
-// swapped here without touching routes.
+// lucia v3 is in maintenance; only lib/auth imports this file (everything else talks to
+// lib/auth/session.ts), so it can be swapped here without touching routes.
 const adapter = new NodePostgresAdapter(pool, { user: "users", session: "user_sessions" });
 
 export const lucia = new Lucia(adapter, {
@@ -37,4 +37,9 @@ declare module "lucia" {
       disabled_at: Date | null;
     };
   }
+}
+
+/** A new person's id, in the form the session tables use. */
+export function newUserId(): string {
+  return generateIdFromEntropySize(10);
 }

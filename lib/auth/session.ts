@@ -55,8 +55,7 @@ export async function principalFromRequest(request: Request): Promise<Principal 
   if (header?.toLowerCase().startsWith("bearer ")) {
     return principalFromApiToken(header.slice(7).trim());
   }
-  const cookie = request.headers.get("cookie") ?? "";
-  return principalFromSessionId(lucia.readSessionCookie(cookie) ?? undefined);
+  return principalFromSessionId(sessionIdFromRequest(request) ?? undefined);
 }
 
 async function principalFromApiToken(secret: string): Promise<Principal | null> {
@@ -76,15 +75,29 @@ async function principalFromApiToken(secret: string): Promise<Principal | null> 
   };
 }
 
+/** A cookie to set: for a route's Set-Cookie header (`serialize`) or for next/headers' cookies(). */
+export interface SessionCookie {
+  name: string;
+  value: string;
+  attributes: { secure?: boolean; path?: string; domain?: string; sameSite?: "lax" | "strict" | "none"; httpOnly?: boolean; maxAge?: number; expires?: Date };
+  serialize(): string;
+}
+
 /** Starts a session and returns the cookie to set. */
-export async function startSession(userId: string) {
+export async function startSession(userId: string): Promise<SessionCookie> {
   const session = await lucia.createSession(userId, {});
   return lucia.createSessionCookie(session.id);
 }
 
-export async function endSession(sessionId: string) {
+/** Ends a session and returns the blank cookie that removes it from the browser. */
+export async function endSession(sessionId: string): Promise<SessionCookie> {
   await lucia.invalidateSession(sessionId);
   return lucia.createBlankSessionCookie();
+}
+
+/** The session id a request's Cookie header carries, or null. */
+export function sessionIdFromRequest(request: Request): string | null {
+  return lucia.readSessionCookie(request.headers.get("cookie") ?? "");
 }
 
 export async function currentSessionId(): Promise<string | undefined> {

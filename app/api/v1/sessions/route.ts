@@ -1,7 +1,6 @@
-import { lucia } from "@/lib/auth/lucia";
 import { signIn } from "@/lib/auth/accounts";
 import { signInSchema } from "@/lib/auth/schemas";
-import { endSession, startSession } from "@/lib/auth/session";
+import { endSession, sessionIdFromRequest, startSession } from "@/lib/auth/session";
 import { jsonWithCookie } from "@/lib/http/cookies";
 import { publicRoute } from "@/lib/http/route";
 
@@ -13,7 +12,7 @@ export const POST = publicRoute({ body: signInSchema }, async ({ body, ip }) => 
 
 /** Sign out this session. */
 export const DELETE = publicRoute({}, async ({ request }) => {
-  const sessionId = lucia.readSessionCookie(request.headers.get("cookie") ?? "");
+  const sessionId = sessionIdFromRequest(request);
   if (!sessionId) return new Response(null, { status: 204 });
   const blank = await endSession(sessionId);
   return new Response(null, { status: 204, headers: { "Set-Cookie": blank.serialize() } });
