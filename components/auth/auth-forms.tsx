@@ -1,20 +1,13 @@
 "use client";
 import Link from "next/link";
 import { useActionState, useSyncExternalStore } from "react";
-import {
-  acceptInviteAction,
-  requestResetAction,
-  resetPasswordAction,
-  signInAction,
-  signUpAction,
-} from "@/app/(auth)/actions";
 import { SubmitButton } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
 import { FormAlert } from "@/components/ui/form-alert";
-import { initialFormState } from "@/lib/forms/state";
+import { initialFormState, type FormAction } from "@/lib/forms/state";
 
-export function SignInForm({ next }: { next?: string }) {
-  const [state, action] = useActionState(signInAction, initialFormState);
+export function SignInForm({ next, action: signIn }: { next?: string; action: FormAction }) {
+  const [state, action] = useActionState(signIn, initialFormState);
   return (
     <form action={action} className="flex flex-col gap-2" noValidate>
       <FormAlert state={state} />
@@ -33,8 +26,8 @@ export function SignInForm({ next }: { next?: string }) {
 const noChanges = () => () => {};
 const browserTimeZone = () => Intl.DateTimeFormat().resolvedOptions().timeZone;
 
-export function SignUpForm() {
-  const [state, action] = useActionState(signUpAction, initialFormState);
+export function SignUpForm({ action: signUp }: { action: FormAction }) {
+  const [state, action] = useActionState(signUp, initialFormState);
   // The company's time zone starts as this browser's (it can be changed in Settings); the
   // server renders it empty and the browser fills it in.
   const timeZone = useSyncExternalStore(noChanges, browserTimeZone, () => "");
@@ -52,8 +45,8 @@ export function SignUpForm() {
   );
 }
 
-export function ForgotPasswordForm() {
-  const [state, action] = useActionState(requestResetAction, initialFormState);
+export function ForgotPasswordForm({ action: requestReset }: { action: FormAction }) {
+  const [state, action] = useActionState(requestReset, initialFormState);
   return (
     <form action={action} className="flex flex-col gap-2" noValidate>
       <FormAlert state={state} />
@@ -64,8 +57,8 @@ export function ForgotPasswordForm() {
   );
 }
 
-export function ResetPasswordForm({ token }: { token: string }) {
-  const [state, action] = useActionState(resetPasswordAction, initialFormState);
+export function ResetPasswordForm({ token, action: resetPassword }: { token: string; action: FormAction }) {
+  const [state, action] = useActionState(resetPassword, initialFormState);
   return (
     <form action={action} className="flex flex-col gap-2" noValidate>
       <FormAlert state={state} />
@@ -76,8 +69,8 @@ export function ResetPasswordForm({ token }: { token: string }) {
   );
 }
 
-export function AcceptInviteForm({ token, email }: { token: string; email: string }) {
-  const [state, action] = useActionState(acceptInviteAction, initialFormState);
+export function AcceptInviteForm({ token, email, action: accept }: { token: string; email: string; action: FormAction }) {
+  const [state, action] = useActionState(accept, initialFormState);
   return (
     <form action={action} className="flex flex-col gap-2" noValidate>
       <FormAlert state={state} />

@@ -1,3 +1,4 @@
+import type { FormAction } from "@/lib/forms/state";
 import { formatDateTime } from "@/lib/time";
 import { CorrectionForm } from "./item-forms";
 
@@ -44,7 +45,7 @@ function show(v: unknown) {
 }
 
 /** The service history, newest first, with times in the organisation's zone. Entries are never edited; a correction points back. */
-export function EventList({ itemId, events, canCorrect, timeZone }: { itemId: string; events: EventRow[]; canCorrect: boolean; timeZone: string }) {
+export function EventList({ itemId, events, correct, timeZone }: { itemId: string; events: EventRow[]; correct: FormAction | null; timeZone: string }) {
   return (
     <ol className="flex flex-col gap-3">
       {events.map((e) => (
@@ -88,7 +89,7 @@ export function EventList({ itemId, events, canCorrect, timeZone }: { itemId: st
               ))}
             </p>
           )}
-          {canCorrect && e.type !== "correction" && <CorrectionForm itemId={itemId} eventId={e.id} />}
+          {correct && e.type !== "correction" && <CorrectionForm itemId={itemId} eventId={e.id} action={correct} />}
         </li>
       ))}
     </ol>

@@ -1,10 +1,9 @@
 "use client";
 import { useActionState, useState } from "react";
-import { createItemAction, editItemAction } from "@/app/(app)/stock/actions";
 import { SubmitButton } from "@/components/ui/button";
 import { Field, SelectField } from "@/components/ui/field";
 import { FormAlert } from "@/components/ui/form-alert";
-import { initialFormState } from "@/lib/forms/state";
+import { initialFormState, type FormAction } from "@/lib/forms/state";
 import { ITEM_KINDS, KIND_LABELS, type ItemKind } from "@/lib/stock/labels";
 
 export interface ItemFormValues {
@@ -29,8 +28,8 @@ const CHAIN_SIZES = ["1/4", "5/16", "3/8", "7/16", "1/2", "5/8"];
 const WEB_WIDTHS = ["1 3/4", "2", "3", "4"];
 
 /** Add or edit an item. The fields shown follow the kind; the server validates everything again. */
-export function ItemForm({ yards, initial, itemId }: { yards: { id: string; name: string }[]; initial?: ItemFormValues; itemId?: string }) {
-  const [state, action] = useActionState(itemId ? editItemAction : createItemAction, initialFormState);
+export function ItemForm({ yards, initial, itemId, action: save }: { yards: { id: string; name: string }[]; initial?: ItemFormValues; itemId?: string; action: FormAction }) {
+  const [state, action] = useActionState(save, initialFormState);
   const v = { ...initial, ...state.values } as Partial<ItemFormValues>;
   const [kind, setKind] = useState<ItemKind>((v.kind as ItemKind) ?? "chain");
   const [marking, setMarking] = useState(v.marking ?? "grade");

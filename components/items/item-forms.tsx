@@ -1,11 +1,10 @@
 "use client";
 import Link from "next/link";
 import { useActionState, useState } from "react";
-import { certificateAction, itemEventAction } from "@/app/(app)/items/[id]/actions";
 import { buttonClass, SubmitButton, type ButtonVariant } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
 import { FormAlert } from "@/components/ui/form-alert";
-import { initialFormState } from "@/lib/forms/state";
+import { initialFormState, type FormAction } from "@/lib/forms/state";
 import type { CheckPoint } from "@/lib/stock/checklists";
 import type { MeasurementSpec } from "@/lib/stock/inspection";
 
@@ -73,8 +72,8 @@ function Checklist({ points, errors }: { points: readonly CheckPoint[]; errors?:
  * The checklist, then the result. The page re-renders with the item's new status after the
  * action; this component keeps showing the result the yard hand just got.
  */
-export function PreUseCheckForm({ itemId, points, notUsable }: { itemId: string; points: readonly CheckPoint[]; notUsable?: React.ReactNode }) {
-  const [state, action] = useActionState(itemEventAction, initialFormState);
+export function PreUseCheckForm({ itemId, points, notUsable, action: record }: { itemId: string; points: readonly CheckPoint[]; notUsable?: React.ReactNode; action: FormAction }) {
+  const [state, action] = useActionState(record, initialFormState);
   if (!state.ok && notUsable) return <>{notUsable}</>;
   if (state.ok) {
     return (
@@ -98,8 +97,8 @@ export function PreUseCheckForm({ itemId, points, notUsable }: { itemId: string;
   );
 }
 
-export function InspectionForm({ itemId, points, measurements }: { itemId: string; points: readonly CheckPoint[]; measurements: readonly MeasurementSpec[] }) {
-  const [state, action] = useActionState(itemEventAction, initialFormState);
+export function InspectionForm({ itemId, points, measurements, action: record }: { itemId: string; points: readonly CheckPoint[]; measurements: readonly MeasurementSpec[]; action: FormAction }) {
+  const [state, action] = useActionState(record, initialFormState);
   if (state.ok) {
     return (
       <div className="flex flex-col gap-4">
@@ -152,8 +151,8 @@ export function InspectionForm({ itemId, points, measurements }: { itemId: strin
   );
 }
 
-export function TagOutForm({ itemId }: { itemId: string }) {
-  const [state, action] = useActionState(itemEventAction, initialFormState);
+export function TagOutForm({ itemId, action: record }: { itemId: string; action: FormAction }) {
+  const [state, action] = useActionState(record, initialFormState);
   return (
     <form action={action} className="flex flex-col gap-2" noValidate>
       <input type="hidden" name="type" value="tag_out" />
@@ -166,8 +165,8 @@ export function TagOutForm({ itemId }: { itemId: string }) {
   );
 }
 
-export function ReasonForm({ itemId, type, label, button, variant = "secondary" }: { itemId: string; type: string; label: string; button: string; variant?: ButtonVariant }) {
-  const [state, action] = useActionState(itemEventAction, initialFormState);
+export function ReasonForm({ itemId, type, label, button, variant = "secondary", action: record }: { itemId: string; type: string; label: string; button: string; variant?: ButtonVariant; action: FormAction }) {
+  const [state, action] = useActionState(record, initialFormState);
   return (
     <form action={action} className="flex flex-col gap-2" noValidate>
       <input type="hidden" name="type" value={type} />
@@ -179,9 +178,9 @@ export function ReasonForm({ itemId, type, label, button, variant = "secondary" 
   );
 }
 
-export function CorrectionForm({ itemId, eventId }: { itemId: string; eventId: number }) {
+export function CorrectionForm({ itemId, eventId, action: record }: { itemId: string; eventId: number; action: FormAction }) {
   const [open, setOpen] = useState(false);
-  const [state, action] = useActionState(itemEventAction, initialFormState);
+  const [state, action] = useActionState(record, initialFormState);
   if (!open) {
     return (
       <button type="button" onClick={() => setOpen(true)} className="mt-2 min-h-10 text-base font-bold underline">
@@ -201,8 +200,8 @@ export function CorrectionForm({ itemId, eventId }: { itemId: string; eventId: n
   );
 }
 
-export function CertificateForm({ itemId }: { itemId: string }) {
-  const [state, action] = useActionState(certificateAction, initialFormState);
+export function CertificateForm({ itemId, action: attach }: { itemId: string; action: FormAction }) {
+  const [state, action] = useActionState(attach, initialFormState);
   return (
     <form action={action} className="flex flex-col gap-2" noValidate>
       <input type="hidden" name="itemId" value={itemId} />

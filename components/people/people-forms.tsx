@@ -1,16 +1,15 @@
 "use client";
 import { useActionState } from "react";
-import { inviteAction, updatePersonAction, withdrawInviteAction } from "@/app/(app)/people/actions";
 import { SubmitButton } from "@/components/ui/button";
 import { Field, SelectField } from "@/components/ui/field";
 import { FormAlert } from "@/components/ui/form-alert";
 import { ROLE_LABELS, ROLES, type Role } from "@/lib/auth/roles";
-import { initialFormState } from "@/lib/forms/state";
+import { initialFormState, type FormAction } from "@/lib/forms/state";
 
 const roleOptions = ROLES.map((r) => ({ value: r, label: ROLE_LABELS[r] }));
 
-export function InviteForm() {
-  const [state, action] = useActionState(inviteAction, initialFormState);
+export function InviteForm({ action: invite }: { action: FormAction }) {
+  const [state, action] = useActionState(invite, initialFormState);
   return (
     <form action={action} className="flex flex-col gap-2 rounded-xl border-2 border-ink-soft p-4" noValidate>
       <h2 className="text-xl font-bold">Invite someone</h2>
@@ -29,11 +28,13 @@ export function InviteForm() {
 export function PersonRow({
   person,
   isSelf,
+  action: update,
 }: {
   person: { id: string; name: string; email: string; role: Role; designated: boolean; disabled: boolean };
   isSelf: boolean;
+  action: FormAction;
 }) {
-  const [state, action] = useActionState(updatePersonAction, initialFormState);
+  const [state, action] = useActionState(update, initialFormState);
   return (
     <li className="rounded-xl border-2 border-ink-soft p-4">
       <form action={action} className="flex flex-col gap-2" noValidate>
@@ -61,8 +62,8 @@ export function PersonRow({
   );
 }
 
-export function WithdrawInviteButton({ inviteId, email }: { inviteId: string; email: string }) {
-  const [state, action] = useActionState(withdrawInviteAction, initialFormState);
+export function WithdrawInviteButton({ inviteId, email, action: withdraw }: { inviteId: string; email: string; action: FormAction }) {
+  const [state, action] = useActionState(withdraw, initialFormState);
   return (
     <form action={action} className="flex flex-col gap-1">
       <input type="hidden" name="inviteId" value={inviteId} />

@@ -1,15 +1,14 @@
 "use client";
 import { useActionState } from "react";
-import { createTokenAction, revokeTokenAction, saveIntervalsAction, saveOrganisationAction } from "@/app/(app)/settings/actions";
 import { SubmitButton } from "@/components/ui/button";
 import { Field, SelectField } from "@/components/ui/field";
 import { FormAlert } from "@/components/ui/form-alert";
 import { ROLE_LABELS, ROLES } from "@/lib/auth/roles";
-import { initialFormState } from "@/lib/forms/state";
+import { initialFormState, type FormAction } from "@/lib/forms/state";
 import { ITEM_KINDS, KIND_LABELS, type ItemKind } from "@/lib/stock/labels";
 
-export function OrganisationForm({ name, publicTagView, timeZone, timeZones }: { name: string; publicTagView: boolean; timeZone: string; timeZones: string[] }) {
-  const [state, action] = useActionState(saveOrganisationAction, initialFormState);
+export function OrganisationForm({ name, publicTagView, timeZone, timeZones, action: save }: { name: string; publicTagView: boolean; timeZone: string; timeZones: string[]; action: FormAction }) {
+  const [state, action] = useActionState(save, initialFormState);
   return (
     <form action={action} className="flex flex-col gap-2 rounded-xl border-2 border-ink-soft p-4" noValidate>
       <h2 className="text-xl font-bold">Company</h2>
@@ -35,8 +34,8 @@ export function OrganisationForm({ name, publicTagView, timeZone, timeZones }: {
   );
 }
 
-export function CreateTokenForm() {
-  const [state, action] = useActionState(createTokenAction, initialFormState);
+export function CreateTokenForm({ action: create }: { action: FormAction }) {
+  const [state, action] = useActionState(create, initialFormState);
   return (
     <form action={action} className="flex flex-col gap-2" noValidate>
       <FormAlert state={state} />
@@ -58,8 +57,8 @@ export function CreateTokenForm() {
   );
 }
 
-export function RevokeTokenButton({ tokenId, name }: { tokenId: string; name: string }) {
-  const [state, action] = useActionState(revokeTokenAction, initialFormState);
+export function RevokeTokenButton({ tokenId, name, action: revoke }: { tokenId: string; name: string; action: FormAction }) {
+  const [state, action] = useActionState(revoke, initialFormState);
   return (
     <form action={action}>
       <input type="hidden" name="tokenId" value={tokenId} />
@@ -71,8 +70,8 @@ export function RevokeTokenButton({ tokenId, name }: { tokenId: string; name: st
   );
 }
 
-export function IntervalsForm({ intervals }: { intervals: Record<ItemKind, number> }) {
-  const [state, action] = useActionState(saveIntervalsAction, initialFormState);
+export function IntervalsForm({ intervals, action: save }: { intervals: Record<ItemKind, number>; action: FormAction }) {
+  const [state, action] = useActionState(save, initialFormState);
   return (
     <form action={action} className="flex flex-col gap-2 rounded-xl border-2 border-ink-soft p-4" noValidate>
       <h2 className="text-xl font-bold">Periodic inspection, days between</h2>

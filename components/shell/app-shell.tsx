@@ -1,6 +1,7 @@
 import Link from "next/link";
 import { ROLE_LABELS } from "@/lib/auth/roles";
 import type { Principal } from "@/lib/auth/session";
+import type { FormAction } from "@/lib/forms/state";
 import { barFor, navFor } from "@/lib/shell/nav";
 import { Logo } from "@/components/ui/logo";
 import { QueryProvider } from "@/components/providers/query-provider";
@@ -10,10 +11,12 @@ import { SignOutButton } from "./sign-out-button";
 export function AppShell({
   principal,
   organisationName,
+  signOut,
   children,
 }: {
   principal: Principal;
   organisationName: string;
+  signOut: FormAction;
   children: React.ReactNode;
 }) {
   const entries = navFor(principal);
@@ -30,7 +33,7 @@ export function AppShell({
             <br />
             <span className="text-signal">{ROLE_LABELS[principal.role]}</span>
           </span>
-          <SignOutButton />
+          <SignOutButton action={signOut} />
         </div>
       </header>
 
@@ -49,7 +52,7 @@ export function AppShell({
           <NavLinks entries={entries} variant="side" />
         </nav>
         <div className="mt-auto">
-          <SignOutButton />
+          <SignOutButton action={signOut} />
         </div>
       </aside>
 

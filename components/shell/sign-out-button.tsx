@@ -1,11 +1,10 @@
 "use client";
 import { useActionState } from "react";
-import { signOutAction } from "@/app/(auth)/actions";
 import { buttonClass } from "@/components/ui/button-class";
-import { initialFormState } from "@/lib/forms/state";
+import { initialFormState, type FormAction } from "@/lib/forms/state";
 
-export function SignOutButton() {
-  const [, action, pending] = useActionState(signOutAction, initialFormState);
+export function SignOutButton({ action: signOut }: { action: FormAction }) {
+  const [, action, pending] = useActionState(signOut, initialFormState);
   return (
     <form action={action}>
       <button type="submit" disabled={pending} className={buttonClass("on-dark", "", "small")}>

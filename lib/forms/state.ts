@@ -7,3 +7,9 @@ export interface FormState {
 }
 
 export const initialFormState: FormState = {};
+
+/**
+ * A form's server action as a component receives it (a prop), so that components never
+ * import from the app's route folders.
+ */
+export type FormAction = (previous: FormState, formData: FormData) => Promise<FormState>;

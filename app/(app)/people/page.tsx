@@ -1,5 +1,6 @@
 import type { Metadata } from "next";
 import { InviteForm, PersonRow, WithdrawInviteButton } from "@/components/people/people-forms";
+import { inviteAction, updatePersonAction, withdrawInviteAction } from "./actions";
 import { listOpenInvites, listPeople } from "@/db/people";
 import { ROLE_LABELS, type Role } from "@/lib/auth/roles";
 import { requirePage } from "@/lib/auth/session";
@@ -18,7 +19,7 @@ export default async function PeoplePage() {
   return (
     <div className="flex max-w-3xl flex-col gap-6">
       <h1 className="text-3xl font-bold">People</h1>
-      <InviteForm />
+      <InviteForm action={inviteAction} />
       {invites.length > 0 && (
         <section aria-labelledby="invites-heading" className="flex flex-col gap-2">
           <h2 id="invites-heading" className="text-xl font-bold">Waiting for an answer</h2>
@@ -29,7 +30,7 @@ export default async function PeoplePage() {
                   <strong>{i.email}</strong> as {ROLE_LABELS[i.role as Role].toLowerCase()}, until{" "}
                   {formatDay(i.expiresAt, timeZone)}
                 </span>
-                <WithdrawInviteButton inviteId={i.id} email={i.email} />
+                <WithdrawInviteButton inviteId={i.id} email={i.email} action={withdrawInviteAction} />
               </li>
             ))}
           </ul>
@@ -39,7 +40,7 @@ export default async function PeoplePage() {
         <h2 id="team-heading" className="text-xl font-bold">Team</h2>
         <ul className="grid gap-3 md:grid-cols-2">
           {people.map((p) => (
-            <PersonRow key={p.id} person={p} isSelf={p.id === principal.userId} />
+            <PersonRow key={p.id} person={p} isSelf={p.id === principal.userId} action={updatePersonAction} />
           ))}
         </ul>
       </section>

@@ -1,5 +1,6 @@
 import type { Metadata } from "next";
 import { CreateTokenForm, IntervalsForm, OrganisationForm, RevokeTokenButton } from "@/components/settings/settings-forms";
+import { createTokenAction, revokeTokenAction, saveIntervalsAction, saveOrganisationAction } from "./actions";
 import { listApiTokens } from "@/db/api-tokens";
 import { getOrganisation } from "@/db/organisations";
 import { inspectionIntervals } from "@/lib/organisations/service";
@@ -19,8 +20,8 @@ export default async function SettingsPage() {
   return (
     <div className="flex max-w-3xl flex-col gap-6">
       <h1 className="text-3xl font-bold">Settings</h1>
-      <OrganisationForm name={organisation!.name} publicTagView={organisation!.publicTagView} timeZone={organisation!.timeZone} timeZones={timeZones()} />
-      <IntervalsForm intervals={intervals} />
+      <OrganisationForm name={organisation!.name} publicTagView={organisation!.publicTagView} timeZone={organisation!.timeZone} timeZones={timeZones()} action={saveOrganisationAction} />
+      <IntervalsForm intervals={intervals} action={saveIntervalsAction} />
       <section aria-labelledby="tokens-heading" className="flex flex-col gap-3 rounded-xl border-2 border-ink-soft p-4">
         <h2 id="tokens-heading" className="text-xl font-bold">API tokens</h2>
         <p className="text-base">
@@ -34,11 +35,11 @@ export default async function SettingsPage() {
                 <strong>{t.name}</strong> · {ROLE_LABELS[t.role as Role]} ·{" "}
                 {t.lastUsedAt ? `last used ${formatDay(t.lastUsedAt, organisation!.timeZone)}` : "never used"}
               </span>
-              <RevokeTokenButton tokenId={t.id} name={t.name} />
+              <RevokeTokenButton tokenId={t.id} name={t.name} action={revokeTokenAction} />
             </li>
           ))}
         </ul>
-        <CreateTokenForm />
+        <CreateTokenForm action={createTokenAction} />
       </section>
     </div>
   );

@@ -1,5 +1,6 @@
 import type { Metadata } from "next";
 import { ForgotPasswordForm } from "@/components/auth/auth-forms";
+import { requestResetAction } from "../actions";
 
 export const metadata: Metadata = { title: "Forgot password" };
 
@@ -8,7 +9,7 @@ export default function ForgotPasswordPage() {
     <>
       <h1 className="text-3xl font-bold">Forgot your password?</h1>
       <p className="text-lg">We e-mail you a link to choose a new one.</p>
-      <ForgotPasswordForm />
+      <ForgotPasswordForm action={requestResetAction} />
     </>
   );
 }

@@ -13,6 +13,7 @@ import type { ItemKind, ItemStatus } from "@/lib/stock/labels";
 import { itemRating } from "@/lib/stock/rating";
 import { describeItem, sizeLabel } from "@/lib/stock/summary";
 import { formatDay } from "@/lib/time";
+import { certificateAction, itemEventAction } from "./actions";
 
 export const metadata: Metadata = { title: "Item" };
 
@@ -108,44 +109,44 @@ export default async function ItemPage({ params }: { params: Promise<{ id: strin
       {status === "in_service" && can(principal, "items.check") && (
         <details className="rounded-xl border-2 border-stop p-4">
           <summary className="min-h-tap cursor-pointer text-lg font-bold text-stop">Report damage and tag out</summary>
-          <TagOutForm itemId={id} />
+          <TagOutForm itemId={id} action={itemEventAction} />
         </details>
       )}
       {status === "tagged_out" && can(principal, "items.inspect") && (
         <details className="rounded-xl border-2 border-ink p-4">
           <summary className="min-h-tap cursor-pointer text-lg font-bold">Return to service</summary>
-          <ReasonForm itemId={id} type="return_to_service" label="Why may it be used again? (repair done, inspected by…)" button="Return to service" />
+          <ReasonForm itemId={id} action={itemEventAction} type="return_to_service" label="Why may it be used again? (repair done, inspected by…)" button="Return to service" />
         </details>
       )}
       {can(principal, "stock.edit") && (status === "in_service" || status === "tagged_out") && (
         <details className="rounded-xl border-2 border-idle p-4">
           <summary className="min-h-tap cursor-pointer text-lg font-bold">Mark lost</summary>
-          <ReasonForm itemId={id} type="lost" label="Where was it last seen?" button="Mark lost" />
+          <ReasonForm itemId={id} action={itemEventAction} type="lost" label="Where was it last seen?" button="Mark lost" />
         </details>
       )}
       {can(principal, "stock.edit") && status === "lost" && (
         <details className="rounded-xl border-2 border-idle p-4">
           <summary className="min-h-tap cursor-pointer text-lg font-bold">Mark found</summary>
-          <ReasonForm itemId={id} type="found" label="Where was it found?" button="Mark found" />
+          <ReasonForm itemId={id} action={itemEventAction} type="found" label="Where was it found?" button="Mark found" />
         </details>
       )}
       {can(principal, "stock.retire") && status !== "retired" && (
         <details className="rounded-xl border-2 border-idle p-4">
           <summary className="min-h-tap cursor-pointer text-lg font-bold">Retire</summary>
-          <ReasonForm itemId={id} type="retired" label="Why is it retired?" button="Retire for good" variant="danger" />
+          <ReasonForm itemId={id} action={itemEventAction} type="retired" label="Why is it retired?" button="Retire for good" variant="danger" />
         </details>
       )}
       {can(principal, "stock.edit") && (
         <details className="rounded-xl border-2 border-idle p-4">
           <summary className="min-h-tap cursor-pointer text-lg font-bold">Add a certificate or document</summary>
-          <CertificateForm itemId={id} />
+          <CertificateForm itemId={id} action={certificateAction} />
         </details>
       )}
 
       <section aria-labelledby="history-heading" className="flex flex-col gap-2">
         <h2 id="history-heading" className="text-xl font-bold">Service history</h2>
         <p className="text-base text-ink-soft">Entries are never changed or deleted. A mistake is answered by a correction. Times are in {clock.timeZone.replaceAll("_", " ")}.</p>
-        <EventList itemId={id} events={events} canCorrect={can(principal, "items.check")} timeZone={clock.timeZone} />
+        <EventList itemId={id} events={events} correct={can(principal, "items.check") ? itemEventAction : null} timeZone={clock.timeZone} />
       </section>
     </div>
   );

@@ -1,5 +1,6 @@
 import type { Metadata } from "next";
 import { ItemForm } from "@/components/items/item-form";
+import { createItemAction } from "../actions";
 import { listYards } from "@/db/items";
 import { requirePage } from "@/lib/auth/session";
 
@@ -11,7 +12,7 @@ export default async function NewItemPage() {
     <div className="flex max-w-xl flex-col gap-4">
       <h1 className="text-3xl font-bold">Add an item</h1>
       <p className="text-lg">It gets its own tag code at once. Its WLL comes from its marking, or from the 49 CFR 393.108 tables when it is unmarked.</p>
-      <ItemForm yards={await listYards(principal.organisationId)} />
+      <ItemForm yards={await listYards(principal.organisationId)} action={createItemAction} />
     </div>
   );
 }

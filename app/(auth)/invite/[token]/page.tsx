@@ -1,6 +1,7 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { AcceptInviteForm } from "@/components/auth/auth-forms";
+import { acceptInviteAction } from "../../actions";
 import { describeInvite } from "@/lib/auth/accounts";
 import { ROLE_LABELS } from "@/lib/auth/roles";
 
@@ -29,7 +30,7 @@ export default async function InvitePage({ params }: { params: Promise<{ token: 
     <>
       <h1 className="text-3xl font-bold">Join {invite.organisationName}</h1>
       <p className="text-lg">You are invited as {ROLE_LABELS[invite.role as keyof typeof ROLE_LABELS].toLowerCase()}.</p>
-      <AcceptInviteForm token={token} email={invite.email} />
+      <AcceptInviteForm token={token} email={invite.email} action={acceptInviteAction} />
     </>
   );
 }

@@ -1,5 +1,6 @@
 import type { Metadata } from "next";
 import { ResetPasswordForm } from "@/components/auth/auth-forms";
+import { resetPasswordAction } from "../../actions";
 
 export const metadata: Metadata = { title: "Choose a new password" };
 
@@ -8,7 +9,7 @@ export default async function ResetPasswordPage({ params }: { params: Promise<{ 
   return (
     <>
       <h1 className="text-3xl font-bold">Choose a new password</h1>
-      <ResetPasswordForm token={token} />
+      <ResetPasswordForm token={token} action={resetPasswordAction} />
     </>
   );
 }

@@ -6,6 +6,7 @@ import { requireItemPage } from "@/lib/stock/page-item";
 import { PRE_USE_CHECKLISTS } from "@/lib/stock/checklists";
 import type { ItemKind } from "@/lib/stock/labels";
 import { describeItem } from "@/lib/stock/summary";
+import { itemEventAction } from "../actions";
 
 export const metadata: Metadata = { title: "Pre-use check" };
 
@@ -17,6 +18,7 @@ export default async function PreUseCheckPage({ params }: { params: Promise<{ id
       <h1 className="text-3xl font-bold">Pre-use check</h1>
       <p className="text-xl">{describeItem(item)} · <span className="font-mono font-bold">{item.tagCode}</span></p>
       <PreUseCheckForm
+        action={itemEventAction}
         itemId={id}
         points={PRE_USE_CHECKLISTS[item.kind as ItemKind]}
         notUsable={item.status === "in_service" ? undefined : <UsabilityBanner status={item.status} nextInspectionDue={item.nextInspectionDue} today={clock.today} />}

@@ -1,6 +1,7 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { ItemForm, type ItemFormValues } from "@/components/items/item-form";
+import { editItemAction } from "@/app/(app)/stock/actions";
 import { listYards } from "@/db/items";
 import { toFeet } from "@/lib/securement/units";
 import { requireItemPage } from "@/lib/stock/page-item";
@@ -31,7 +32,7 @@ export default async function EditItemPage({ params }: { params: Promise<{ id: s
     <div className="flex max-w-xl flex-col gap-4">
       <Link href={`/items/${id}`} className="text-lg underline">← {item.tagCode}</Link>
       <h1 className="text-3xl font-bold">Edit {item.tagCode}</h1>
-      <ItemForm yards={await listYards(principal.organisationId)} initial={initial} itemId={id} />
+      <ItemForm yards={await listYards(principal.organisationId)} initial={initial} itemId={id} action={editItemAction} />
     </div>
   );
 }

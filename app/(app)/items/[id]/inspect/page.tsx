@@ -6,6 +6,7 @@ import { PRE_USE_CHECKLISTS } from "@/lib/stock/checklists";
 import { MEASUREMENTS } from "@/lib/stock/inspection";
 import type { ItemKind } from "@/lib/stock/labels";
 import { describeItem } from "@/lib/stock/summary";
+import { itemEventAction } from "../actions";
 
 export const metadata: Metadata = { title: "Periodic inspection" };
 
@@ -21,7 +22,7 @@ export default async function InspectionPage({ params }: { params: Promise<{ id:
         The limits come from ASME B30.9, B30.10 and B30.26 and the CVSA tiedown defect table; each
         measured value is recorded with its limit. Follow the maker&apos;s instructions where they ask more.
       </p>
-      <InspectionForm itemId={id} points={PRE_USE_CHECKLISTS[kind]} measurements={MEASUREMENTS[kind]} />
+      <InspectionForm itemId={id} points={PRE_USE_CHECKLISTS[kind]} measurements={MEASUREMENTS[kind]} action={itemEventAction} />
     </div>
   );
 }
