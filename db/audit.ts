@@ -1,10 +1,11 @@
 import type { Knex } from "knex";
+import type { AuditAction } from "@/lib/audit/actions";
 import { db } from "./index";
 
 export interface AuditEntry {
   organisationId: string;
   actorId: string | null;
-  action: string; // e.g. "person.invited", "item.updated"
+  action: AuditAction;
   entity: string;
   entityId?: string | null;
   before?: unknown;
@@ -40,7 +41,7 @@ export type Audit = (fact: AuditFact) => Promise<void>;
  * The one way a change is written: one transaction, in which the work writes its audit rows
  * through `audit`, so a change and its record commit or roll back together. The actor is
  * null when the change comes from an e-mailed link: each fact then names who and where.
- * @example await audited(actor, async (tx, audit) => { await updateThing(tx); await audit({ action: "thing.updated", entity: "thing" }); })
+ * @example await audited(actor, async (tx, audit) => { await updateThing(tx); await audit({ action: "item.updated", entity: "item", entityId: id }); })
  */
 export function audited<T>(actor: AuditActor | null, work: (tx: Knex.Transaction, audit: Audit) => Promise<T>): Promise<T> {
   return db.transaction((tx) =>
@@ -53,7 +54,8 @@ export function audited<T>(actor: AuditActor | null, work: (tx: Knex.Transaction
   );
 }
 
-export async function listAudit(organisationId: string, limit = 100) {
+/** The latest audit rows, newest first. `action` is a string: rows outlive renamed actions. */
+export async function listAudit(organisationId: string, limit = 100): Promise<{ id: string; action: string; entity: string; entityId: string | null; at: Date; actorName: string | null }[]> {
   return db("audit_log as a")
     .leftJoin("users as u", "u.id", "a.actor_id")
     .where("a.organisation_id", organisationId)

@@ -1,6 +1,7 @@
 import "server-only";
 import type { Tx } from "@/db";
 import { audited } from "@/db/audit";
+import type { AuditAction } from "@/lib/audit/actions";
 import * as items from "@/db/items";
 import type { Principal } from "@/lib/auth/session";
 import { can, type Permission } from "@/lib/auth/roles";
@@ -146,7 +147,7 @@ export async function recordPreUseCheck(actor: Principal, id: string, input: Pre
       const [eventId] = await items.insertEvents(outcome.outcome === "fail" ? [check, tagOut] : [check], trx);
       if (stored) await items.insertAttachment({ organisationId: actor.organisationId, itemId: id, eventId, purpose: "damage-photo", ...stored, createdBy: actor.userId }, trx);
       await items.updateItem(actor.organisationId, id, { status, checked: true }, trx);
-      await audit({ action: `item.check_${outcome.outcome}`, entity: "item", entityId: id, after: { status } });
+      await audit({ action: outcome.outcome === "pass" ? "item.check_pass" : "item.check_fail", entity: "item", entityId: id, after: { status } });
       return { outcome: outcome.outcome, status, defects: outcome.defects };
     }),
   );
@@ -238,12 +239,18 @@ export async function changeWithReason(
     found: "stock.edit",
   };
   require(actor, permission[change]);
-  const eventType = { return_to_service: "return_to_service", retire: "retired", lost: "lost", found: "found" }[change];
+  const recorded = {
+    return_to_service: { event: "return_to_service", audit: "item.return_to_service" },
+    retire: { event: "retired", audit: "item.retired" },
+    lost: { event: "lost", audit: "item.lost" },
+    found: { event: "found", audit: "item.found" },
+  } as const satisfies Record<typeof change, { event: string; audit: AuditAction }>;
+  const { event: eventType, audit: auditAction } = recorded[change];
   await audited(actor, async (trx, audit) => {
     const { status } = await changeStatus(trx, actor, id, change);
     await items.insertEvents([{ organisationId: actor.organisationId, itemId: id, type: eventType, note: reason, actorId: actor.userId }], trx);
     await items.updateItem(actor.organisationId, id, { status }, trx);
-    await audit({ action: `item.${eventType}`, entity: "item", entityId: id, after: { status, reason } });
+    await audit({ action: auditAction, entity: "item", entityId: id, after: { status, reason } });
   });
 }
 

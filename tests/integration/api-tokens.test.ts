@@ -46,6 +46,7 @@ describe("issue 11.1: a token never outlives its creator's role", () => {
     expect(row).toEqual({ role: "yard_hand", revoked_at: null });
     const capped = await testDb("audit_log").where({ organisation_id: org.organisationId, action: "api_token.capped" }).first("actor_id", "before", "after");
     expect(capped).toEqual({ actor_id: second.userId, before: { role: "owner" }, after: { role: "yard_hand" } });
+    expect((await second.client.get("/audit")).text).toContain("API token lowered to its maker"); // in words
 
     // Promoted again, the person gets the role back, but the capped token does not.
     expect((await second.client.patch(`/api/v1/people/${org.userId}`, { role: "owner" })).status).toBe(200);

@@ -1,5 +1,6 @@
 import type { Metadata } from "next";
 import { listAudit } from "@/db/audit";
+import { auditWords } from "@/lib/audit/actions";
 import { requirePage } from "@/lib/auth/session";
 import { organisationClock } from "@/lib/organisations/service";
 import { formatDateTime } from "@/lib/time";
@@ -26,7 +27,7 @@ export default async function AuditPage() {
             <tr key={r.id} className="border-b border-idle">
               <td className="py-2 pr-3 whitespace-nowrap"><time dateTime={new Date(r.at).toISOString()}>{formatDateTime(r.at, timeZone)}</time></td>
               <td className="py-2 pr-3">{r.actorName ?? "system"}</td>
-              <td className="py-2 pr-3">{r.action.replaceAll("_", " ").replace(".", ": ")}</td>
+              <td className="py-2 pr-3">{auditWords(r.action)}</td>
             </tr>
           ))}
         </tbody>
