@@ -1,4 +1,4 @@
-import type { RowError } from "@/lib/import/row";
+import type { RowError } from "@/lib/import/row-reader";
 import type { PreviewRow } from "@/lib/import/pipeline";
 import { toFeet } from "@/lib/securement/units";
 

@@ -1,6 +1,6 @@
 import type { FormAction } from "@/lib/forms/state";
 import { formatDateTime } from "@/lib/time";
-import { CorrectionForm } from "./item-forms";
+import { CorrectionForm } from "./item-event-forms";
 
 const TYPE_WORDS: Record<string, string> = {
   created: "Added to stock",

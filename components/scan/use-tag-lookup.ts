@@ -2,7 +2,7 @@
 import { useRouter } from "next/navigation";
 import { useCallback, useRef, useState } from "react";
 import { ApiError, apiJson } from "@/lib/http/client";
-import type { ItemSummaryJson } from "@/lib/stock/summary";
+import type { ItemJson } from "@/lib/stock/item-json";
 
 /** Where the code came from: the result is shown beside it. */
 export type LookupSource = "camera" | "typed";
@@ -10,7 +10,7 @@ export type LookupSource = "camera" | "typed";
 export type LookupState =
   | { step: "idle" }
   | { step: "looking"; code: string; source: LookupSource }
-  | { step: "found"; code: string; source: LookupSource; item: ItemSummaryJson }
+  | { step: "found"; code: string; source: LookupSource; item: ItemJson }
   | { step: "failed"; code: string | null; source: LookupSource; message: string; unknown: boolean };
 
 /**
@@ -27,9 +27,9 @@ export function useTagLookup(before?: () => Promise<void> | void) {
       if (busy.current) return false;
       busy.current = true;
       setState({ step: "looking", code, source });
-      let item: ItemSummaryJson;
+      let item: ItemJson;
       try {
-        item = await apiJson<ItemSummaryJson>(`/api/v1/tags/${encodeURIComponent(code)}`);
+        item = await apiJson<ItemJson>(`/api/v1/tags/${encodeURIComponent(code)}`);
       } catch (error) {
         const status = error instanceof ApiError ? error.status : -1;
         const message =

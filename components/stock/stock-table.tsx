@@ -15,10 +15,10 @@ import { buttonClass } from "@/components/ui/button-class";
 import { StatusBadge } from "@/components/ui/status-badge";
 import { apiJson } from "@/lib/http/client";
 import { ITEM_KINDS, ITEM_STATUSES, KIND_LABELS, STATUS_LABELS, type ItemStatus } from "@/lib/stock/labels";
-import type { ItemSummaryJson } from "@/lib/stock/summary";
+import type { ItemJson } from "@/lib/stock/item-json";
 
 interface Page {
-  data: ItemSummaryJson[];
+  data: ItemJson[];
   pageCount: number;
   total: number;
 }
@@ -33,7 +33,7 @@ interface TableMeta {
   today: string;
 }
 
-const columns: ColumnDef<ItemSummaryJson>[] = [
+const columns: ColumnDef<ItemJson>[] = [
   {
     id: "select",
     enableSorting: false,

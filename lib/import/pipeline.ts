@@ -2,11 +2,11 @@
 // through an ImportStore (the database in the app, a Map in the tests). Memory holds one
 // chunk of rows, the first errors (capped) and a few preview rows, whatever the file's size.
 import type { ItemInput } from "@/lib/stock/schemas";
-import { describeItem } from "@/lib/stock/summary";
+import { describeItem } from "@/lib/stock/describe";
 import type { CsvFatal, CsvRecord } from "./csv";
 import { autoMap, resolveMapping, uniqueHeaders, type ColumnMapping } from "./fields";
 import type { ItemFields } from "@/db/items";
-import { RowReader, rowChanges, storedRow, type ExistingItem, type ReadRow, type RowError } from "./row";
+import { RowReader, rowChanges, storedFields, type ExistingItem, type ReadRow, type RowError } from "./row-reader";
 
 export interface PreparedCreate {
   line: number;
@@ -223,7 +223,7 @@ export async function runImport(records: AsyncIterable<CsvRecord | CsvFatal>, op
         await store.rejected?.(r.fields, problems.map((p) => (p.column ? `${p.column}: ${p.message}` : p.message)));
         continue;
       }
-      const row = storedRow(checked.input, existing);
+      const row = storedFields(checked.input, existing);
       if (existing) {
         const changes = rowChanges(existing, row, yardName);
         if (Object.keys(changes).length === 0) {

@@ -64,10 +64,12 @@ export function readGrade(cell: string): Read<string> {
 }
 
 /**
- * A number as spreadsheets write it: "5,400", "5 400", "2,5" (decimal comma), "$119.00".
- * @example readNumber("1,234.50") // 1234.5
+ * A number as spreadsheets write it: "5,400", "5 400", "2,5" (decimal comma), "$119.00";
+ * undefined when the cell is not a number. (The securement form's readNumber, in
+ * lib/forms/securement-draft.ts, reads typed input instead: blank is undefined, junk null.)
+ * @example readCellNumber("1,234.50") // 1234.5
  */
-export function readNumber(text: string): number | undefined {
+export function readCellNumber(text: string): number | undefined {
   const t = text.trim().replace(/^\$\s*/, "").replace(/(?<=\d)[\s\u00a0\u202f](?=\d{3}\b)/g, "");
   if (/^[+-]?\d{1,3}(,\d{3})+(\.\d+)?$/.test(t)) return Number(t.replace(/,/g, ""));
   if (/^[+-]?\d+,\d+$/.test(t)) return Number(t.replace(",", "."));
@@ -79,7 +81,7 @@ export function readNumber(text: string): number | undefined {
 function numberAndUnit(cell: string): { number?: number; unit: string } {
   const m = /^(.*?\d\.?)\s*([a-zA-Z"'#]*\.?)$/.exec(cell.trim());
   if (!m) return { unit: "" };
-  return { number: readNumber(m[1]), unit: m[2].toLowerCase().replace(/\.$/, "") };
+  return { number: readCellNumber(m[1]), unit: m[2].toLowerCase().replace(/\.$/, "") };
 }
 
 const WEIGHT_UNIT: Record<string, "lb" | "kg"> = { lb: "lb", lbs: "lb", "#": "lb", pound: "lb", pounds: "lb", kg: "kg", kgs: "kg", kilo: "kg", kilos: "kg", kilogram: "kg", kilograms: "kg" };
@@ -180,7 +182,7 @@ export function readDate(cell: string): Read<string> {
  * @example readCost("$1,234.50") // { value: 123450 }
  */
 export function readCost(cell: string): Read<number> {
-  const n = readNumber(cell);
+  const n = readCellNumber(cell);
   if (n === undefined) return { error: `"${cell}" is not an amount: write the cost in dollars, e.g. 119.00.` };
   return { value: Math.round(n * 100) };
 }

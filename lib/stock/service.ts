@@ -17,16 +17,17 @@ import { evaluateMeasurements, verdictProblem, type InspectionVerdict } from "./
 import { nextDue } from "./intervals";
 import type { ItemKind, ItemStatus } from "./labels";
 import { itemChanges } from "./changes";
-import { itemRow } from "./row";
+import { itemFields } from "./item-fields";
 import type { ItemInput } from "./schemas";
 import { nextStatus, type StatusChange } from "./status";
-import { describeItem } from "./summary";
+import { describeItem } from "./describe";
 import { freshTagCodes } from "./tag-codes";
 
 // Everything that changes stock goes through here: permission, organisation, business rule,
 // then one transaction that writes the item, its history event and an audit row.
 
-function require(actor: Principal, permission: Permission) {
+/** Refuses with 403 unless the actor holds the permission. */
+function mustBeAllowed(actor: Principal, permission: Permission) {
   if (!can(actor, permission)) throw forbidden();
 }
 
@@ -40,12 +41,12 @@ async function checkReferences(actor: Principal, input: ItemInput, exceptId: str
 }
 
 export async function createItem(actor: Principal, input: ItemInput): Promise<string> {
-  require(actor, "stock.edit");
+  mustBeAllowed(actor, "stock.edit");
   const intervals = await inspectionIntervals(actor.organisationId);
   const { today } = await organisationClock(actor.organisationId);
   return audited(actor, async (trx, audit) => {
     await checkReferences(actor, input, undefined, trx);
-    const row = itemRow(input);
+    const row = itemFields(input);
     const [tagCode] = await freshTagCodes(1, trx);
     const [id] = await items.insertItems(
       [{ ...row, organisationId: actor.organisationId, tagCode, status: "in_service", nextInspectionDue: nextDue(input.inServiceOn ?? today, intervals[input.kind]) }],
@@ -58,13 +59,13 @@ export async function createItem(actor: Principal, input: ItemInput): Promise<st
 }
 
 export async function editItem(actor: Principal, id: string, input: ItemInput): Promise<void> {
-  require(actor, "stock.edit");
+  mustBeAllowed(actor, "stock.edit");
   await audited(actor, async (trx, audit) => {
     const before = await items.getItem(actor.organisationId, id, trx);
     if (!before) throw notFound("No such item in your stock.");
     if (before.kind !== input.kind) throw fieldError("kind", "The kind of an item cannot change; add a new item instead.");
     await checkReferences(actor, input, id, trx);
-    const row = itemRow(input);
+    const row = itemFields(input);
     await items.updateItem(actor.organisationId, id, row, trx);
     const after = (await items.getItem(actor.organisationId, id, trx))!;
     const changes = itemChanges(before, after);
@@ -75,7 +76,7 @@ export async function editItem(actor: Principal, id: string, input: ItemInput): 
 }
 
 export async function moveItems(actor: Principal, itemIds: string[], yardId: string): Promise<number> {
-  require(actor, "stock.edit");
+  mustBeAllowed(actor, "stock.edit");
   return audited(actor, async (trx, audit) => {
     const yard = await items.getYard(actor.organisationId, yardId, trx);
     if (!yard) throw fieldError("yardId", "Choose a yard from the list.");
@@ -131,7 +132,7 @@ export interface PreUseCheckInput {
  * tags the item out at once and e-mails the owners.
  */
 export async function recordPreUseCheck(actor: Principal, id: string, input: PreUseCheckInput) {
-  require(actor, "items.check");
+  mustBeAllowed(actor, "items.check");
   const current = await items.getItem(actor.organisationId, id);
   if (!current) throw notFound("No such item in your stock.");
   const outcome = preUseOutcome(current.kind, input.answers);
@@ -157,7 +158,7 @@ export async function recordPreUseCheck(actor: Principal, id: string, input: Pre
 
 /** Report damage outside a check: tags the item out at once. */
 export async function tagOut(actor: Principal, id: string, input: { note: string; photo?: File | null }) {
-  require(actor, "items.check");
+  mustBeAllowed(actor, "items.check");
   const current = await items.getItem(actor.organisationId, id);
   if (!current) throw notFound("No such item in your stock.");
   await withUpload(actor, input.photo, "damage-photo", "photo", (stored) =>
@@ -193,7 +194,7 @@ export interface InspectionInput {
 
 /** Periodic inspection by an owner or designated person. */
 export async function recordInspection(actor: Principal, id: string, input: InspectionInput) {
-  require(actor, "items.inspect");
+  mustBeAllowed(actor, "items.inspect");
   const current = await items.getItem(actor.organisationId, id);
   if (!current) throw notFound("No such item in your stock.");
   const kind = current.kind;
@@ -238,7 +239,7 @@ export async function changeWithReason(
     lost: "stock.edit",
     found: "stock.edit",
   };
-  require(actor, permission[change]);
+  mustBeAllowed(actor, permission[change]);
   const recorded = {
     return_to_service: { event: "return_to_service", audit: "item.return_to_service" },
     retire: { event: "retired", audit: "item.retired" },
@@ -256,7 +257,7 @@ export async function changeWithReason(
 
 /** History is never edited: a mistake is answered by a correction event that points at it. */
 export async function correctEvent(actor: Principal, itemId: string, eventId: number, note: string) {
-  require(actor, "items.check");
+  mustBeAllowed(actor, "items.check");
   await audited(actor, async (trx, audit) => {
     if (!(await items.eventExists(actor.organisationId, itemId, eventId, trx))) throw notFound("No such event on this item.");
     await items.insertEvents([{ organisationId: actor.organisationId, itemId, type: "correction", correctsEventId: eventId, note, actorId: actor.userId }], trx);
@@ -266,7 +267,7 @@ export async function correctEvent(actor: Principal, itemId: string, eventId: nu
 
 /** A maker's certificate or other document kept with the item. */
 export async function attachCertificate(actor: Principal, id: string, file: File) {
-  require(actor, "stock.edit");
+  mustBeAllowed(actor, "stock.edit");
   if (!(await items.getItem(actor.organisationId, id))) throw notFound("No such item in your stock.");
   await withUpload(actor, file, "certificate", "certificate", async (stored) => {
     if (!stored) throw fieldError("certificate", "Choose a file.");

@@ -1,6 +1,6 @@
 import { KIND_LABELS, type ItemKind } from "@/lib/stock/labels";
 import { toFeet } from "@/lib/securement/units";
-import { sizeLabel } from "@/lib/stock/summary";
+import { sizeLabel } from "@/lib/stock/describe";
 
 // The words printed on a tag and shown on the public tag view: what the item is, its grade,
 // size and WLL. The WLL is always in words; an item without one says so on the tag.

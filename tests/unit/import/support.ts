@@ -1,7 +1,7 @@
 import { readRecords, type CsvFatal, type CsvRecord } from "@/lib/import/csv";
 import type { Delimiter } from "@/lib/import/delimiter";
 import type { ImportStore, PreparedCreate, PreparedUpdate } from "@/lib/import/pipeline";
-import type { ExistingItem } from "@/lib/import/row";
+import type { ExistingItem } from "@/lib/import/row-reader";
 import { decodeText } from "@/lib/import/text";
 
 /** Text in chunks of a given size, the way a stream hands it over. */

@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { csvLine, neutralise } from "@/lib/import/csv-write";
 import {
-  readChainRange, readCost, readDate, readKind, readLength, readMarking, readMechanism, readNumber, readSize, readTagCode, readWeight, readYard, unneutralise,
+  readChainRange, readCost, readDate, readKind, readLength, readMarking, readMechanism, readCellNumber, readSize, readTagCode, readWeight, readYard, unneutralise,
 } from "@/lib/import/values";
 
 describe("value normalisation", () => {
@@ -24,7 +24,7 @@ describe("value normalisation", () => {
 
   it.each([
     ["5,400", 5400], ["5 400", 5400], ["5400", 5400], ["2,5", 2.5], ["1,234.50", 1234.5], ["$119.00", 119], ["-5", -5], ["12.", 12], ["abc", undefined], ["1,23,4", undefined],
-  ])("number %s", (text, n) => expect(readNumber(text)).toBe(n));
+  ])("number %s", (text, n) => expect(readCellNumber(text)).toBe(n));
 
   it.each([
     ["5400", "lb", { value: { value: 5400, unit: "lb" } }],

@@ -1,7 +1,7 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { EventList } from "@/components/items/event-list";
-import { CertificateForm, ReasonForm, TagOutForm } from "@/components/items/item-forms";
+import { CertificateForm, ReasonForm, TagOutForm } from "@/components/items/item-event-forms";
 import { UsabilityBanner } from "@/components/items/usability-banner";
 import { StatusBadge } from "@/components/ui/status-badge";
 import { buttonClass } from "@/components/ui/button-class";
@@ -11,7 +11,7 @@ import { toFeet, toKg } from "@/lib/securement/units";
 import { requireItemPage } from "@/lib/stock/page-item";
 import type { ItemKind, ItemStatus } from "@/lib/stock/labels";
 import { itemRating } from "@/lib/stock/rating";
-import { describeItem, sizeLabel } from "@/lib/stock/summary";
+import { describeItem, sizeLabel } from "@/lib/stock/describe";
 import { formatDay } from "@/lib/time";
 import { certificateAction, itemEventAction } from "./actions";
 

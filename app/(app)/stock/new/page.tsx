@@ -1,5 +1,5 @@
 import type { Metadata } from "next";
-import { ItemForm } from "@/components/items/item-form";
+import { ItemForm } from "@/components/items/item-details-form";
 import { createItemAction } from "../actions";
 import { listYards } from "@/db/items";
 import { requirePage } from "@/lib/auth/session";

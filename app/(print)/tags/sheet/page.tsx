@@ -5,7 +5,7 @@ import { TagLabel, type SheetItem } from "@/components/tags/tag-label";
 import { StatusBadge } from "@/components/ui/status-badge";
 import { getItemsByIds, listItems } from "@/db/items";
 import { requirePage } from "@/lib/auth/session";
-import { describeItem } from "@/lib/stock/summary";
+import { describeItem } from "@/lib/stock/describe";
 import type { ItemStatus } from "@/lib/stock/labels";
 import {
   clampSkip,

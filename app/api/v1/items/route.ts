@@ -4,16 +4,16 @@ import { organisationClock } from "@/lib/organisations/service";
 import { itemListQuerySchema, listFilters } from "@/lib/stock/api-schemas";
 import { itemInputSchema } from "@/lib/stock/schemas";
 import { createItem } from "@/lib/stock/service";
-import { toItemSummary } from "@/lib/stock/summary";
+import { toItemJson } from "@/lib/stock/item-json";
 
 /** A page of stock: filters kind, status, yardId, due (overdue | 30d), q (tag code or serial). */
 export const GET = route("stock.view", { query: itemListQuerySchema }, async ({ principal, query }) => {
   const { today } = await organisationClock(principal.organisationId);
   const page = await listItems(principal.organisationId, listFilters(query, today));
-  return { data: page.data.map(toItemSummary), pageCount: page.pageCount, total: page.total };
+  return { data: page.data.map(toItemJson), pageCount: page.pageCount, total: page.total };
 });
 
 export const POST = route("stock.edit", { body: itemInputSchema }, async ({ principal, body }) => {
   const id = await createItem(principal, body);
-  return Response.json(toItemSummary((await getItem(principal.organisationId, id))!), { status: 201 });
+  return Response.json(toItemJson((await getItem(principal.organisationId, id))!), { status: 201 });
 });

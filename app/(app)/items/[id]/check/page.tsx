@@ -1,11 +1,11 @@
 import type { Metadata } from "next";
 import Link from "next/link";
-import { PreUseCheckForm } from "@/components/items/item-forms";
+import { PreUseCheckForm } from "@/components/items/item-event-forms";
 import { UsabilityBanner } from "@/components/items/usability-banner";
 import { requireItemPage } from "@/lib/stock/page-item";
 import { PRE_USE_CHECKLISTS } from "@/lib/stock/checklists";
 import type { ItemKind } from "@/lib/stock/labels";
-import { describeItem } from "@/lib/stock/summary";
+import { describeItem } from "@/lib/stock/describe";
 import { itemEventAction } from "../actions";
 
 export const metadata: Metadata = { title: "Pre-use check" };

@@ -1,6 +1,6 @@
 import type { Metadata } from "next";
 import Link from "next/link";
-import { ItemForm, type ItemFormValues } from "@/components/items/item-form";
+import { ItemForm, type ItemFormValues } from "@/components/items/item-details-form";
 import { editItemAction } from "@/app/(app)/stock/actions";
 import { listYards } from "@/db/items";
 import { toFeet } from "@/lib/securement/units";

@@ -1,11 +1,11 @@
 import type { Metadata } from "next";
 import Link from "next/link";
-import { InspectionForm } from "@/components/items/item-forms";
+import { InspectionForm } from "@/components/items/item-event-forms";
 import { requireItemPage } from "@/lib/stock/page-item";
 import { PRE_USE_CHECKLISTS } from "@/lib/stock/checklists";
 import { MEASUREMENTS } from "@/lib/stock/inspection";
 import type { ItemKind } from "@/lib/stock/labels";
-import { describeItem } from "@/lib/stock/summary";
+import { describeItem } from "@/lib/stock/describe";
 import { itemEventAction } from "../actions";
 
 export const metadata: Metadata = { title: "Periodic inspection" };

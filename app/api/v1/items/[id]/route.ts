@@ -3,17 +3,17 @@ import { notFound, uuidParam } from "@/lib/http/errors";
 import { route } from "@/lib/http/route";
 import { itemInputSchema } from "@/lib/stock/schemas";
 import { editItem } from "@/lib/stock/service";
-import { toItemSummary } from "@/lib/stock/summary";
+import { toItemJson } from "@/lib/stock/item-json";
 
 export const GET = route("stock.view", {}, async ({ principal, params }) => {
   const item = await getItem(principal.organisationId, uuidParam(params.id));
   if (!item) throw notFound("No such item.");
-  return toItemSummary(item);
+  return toItemJson(item);
 });
 
 /** Replaces the item's details (the whole item, as the form sends it). */
 export const PUT = route("stock.edit", { body: itemInputSchema }, async ({ principal, params, body }) => {
   const id = uuidParam(params.id);
   await editItem(principal, id, body);
-  return toItemSummary((await getItem(principal.organisationId, id))!);
+  return toItemJson((await getItem(principal.organisationId, id))!);
 });

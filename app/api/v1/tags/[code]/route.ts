@@ -1,7 +1,7 @@
 import { findItemByTag } from "@/db/items";
 import { route } from "@/lib/http/route";
 import { badRequest, notFound } from "@/lib/http/errors";
-import { toItemSummary } from "@/lib/stock/summary";
+import { toItemJson } from "@/lib/stock/item-json";
 import { tagCodeFromPath } from "@/lib/tags/entry";
 
 /** The item a tag code names, in the caller's organisation. Another organisation's code is
@@ -15,5 +15,5 @@ export const GET = route("stock.view", {}, async ({ principal, params }) => {
   }
   const item = await findItemByTag(code);
   if (!item || item.organisationId !== principal.organisationId) throw notFound("No item has this tag code.");
-  return toItemSummary(item);
+  return toItemJson(item);
 });

@@ -3,7 +3,7 @@ import { notFound, uuidParam } from "@/lib/http/errors";
 import { route } from "@/lib/http/route";
 import { itemEventSchema } from "@/lib/stock/api-schemas";
 import { recordItemEvent } from "@/lib/stock/events";
-import { toItemSummary } from "@/lib/stock/summary";
+import { toItemJson } from "@/lib/stock/item-json";
 
 /** The item's service history, newest first. */
 export const GET = route("stock.view", {}, async ({ principal, params }) => {
@@ -17,5 +17,5 @@ export const POST = route("items.check", { body: itemEventSchema }, async ({ pri
   const id = uuidParam(params.id);
   const result = await recordItemEvent(principal, id, body);
   const item = await getItem(principal.organisationId, id);
-  return Response.json({ result: result ?? null, item: item ? toItemSummary(item) : null }, { status: 201 });
+  return Response.json({ result: result ?? null, item: item ? toItemJson(item) : null }, { status: 201 });
 });

@@ -6,9 +6,9 @@ import { toRatable, toWholeMm, type ItemInput } from "./schemas";
  * The stored fields of an item that its input decides, with the effective WLL the rated-limit
  * engine gives it. Shared by the add/edit service and the CSV import so that an item is
  * stored the same way whichever door it came in by.
- * @example itemRow({ kind: "chain", marking: "grade", grade: 70, size: "3/8" }).wllLb // 6600
+ * @example itemFields({ kind: "chain", marking: "grade", grade: 70, size: "3/8" }).wllLb // 6600
  */
-export function itemRow(input: ItemInput): ItemFields {
+export function itemFields(input: ItemInput): ItemFields {
   const ratable = toRatable(input);
   const rating = itemRating(ratable);
   return {

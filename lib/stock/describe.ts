@@ -1,7 +1,5 @@
-import type { ItemRecord } from "@/db/items";
-import { toKg } from "@/lib/securement/units";
+// How an item is named to people: its size with its unit, and a one-line description.
 import { KIND_LABELS, STATUS_LABELS, type ItemKind, type ItemStatus } from "./labels";
-
 
 /**
  * "3/8 in", "10 mm", or null: sizes are stored as the trade label without the inch unit.
@@ -23,30 +21,3 @@ export function describeItem(item: { kind: string; grade: number | null; size: s
   else if (item.size) parts.push(sizeLabel(item.size)!);
   return parts.join(", ");
 }
-
-/** The item as every API and scan screen answers it. */
-export function toItemSummary(row: ItemRecord) {
-  return {
-    id: row.id,
-    tagCode: row.tagCode,
-    kind: row.kind,
-    description: describeItem(row),
-    grade: row.grade,
-    size: row.size,
-    lengthMm: row.lengthMm,
-    status: row.status,
-    statusLabel: STATUS_LABELS[row.status as ItemStatus]?.label ?? row.status,
-    wllLb: row.wllLb,
-    wllKg: row.wllLb == null ? null : Math.round(toKg({ value: row.wllLb, unit: "lb" }).value),
-    wllSource: row.wllSource,
-    markedWllLb: row.markedWllLb,
-    serial: row.serial,
-    yard: row.yardId ? { id: row.yardId, name: row.yardName } : null,
-    nextInspectionDue: row.nextInspectionDue,
-    lastCheckedAt: row.lastCheckedAt ? new Date(row.lastCheckedAt).toISOString() : null,
-    lastInspectedOn: row.lastInspectedOn,
-    url: `/items/${row.id}`,
-  };
-}
-
-export type ItemSummaryJson = ReturnType<typeof toItemSummary>;

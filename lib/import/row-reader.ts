@@ -7,7 +7,7 @@ import { toFeet } from "@/lib/securement/units";
 import { itemChanges, type ItemChanges } from "@/lib/stock/changes";
 import { itemInputSchema, type ItemInput } from "@/lib/stock/schemas";
 import type { ItemKind } from "@/lib/stock/labels";
-import { itemRow, MANAGED_DETAILS } from "@/lib/stock/row";
+import { itemFields, MANAGED_DETAILS } from "@/lib/stock/item-fields";
 import { FIELD_COLUMN, headerWords, type ColumnMapping, type ImportField } from "./fields";
 import {
   readChainRange, readCost, readDate, readGrade, readKind, readLength, readMarking, readMechanism,
@@ -206,8 +206,8 @@ export function existingToInput(e: ExistingItem): Partial<Record<InputKey, unkno
 }
 
 /** The stored fields for an item input; on an update, detail keys the import does not manage are kept. */
-export function storedRow(input: ItemInput, existing?: ExistingItem): ItemFields {
-  const row = itemRow(input);
+export function storedFields(input: ItemInput, existing?: ExistingItem): ItemFields {
+  const row = itemFields(input);
   if (existing) {
     for (const [k, v] of Object.entries(existing.details ?? {})) if (!(MANAGED_DETAILS as readonly string[]).includes(k)) row.details[k] = v;
   }
