@@ -1,21 +1,17 @@
 "use client";
-import { keepPreviousData, useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
-import {
-  flexRender,
-  getCoreRowModel,
-  useReactTable,
-  type ColumnDef,
-  type RowSelectionState,
-  type SortingState,
-} from "@tanstack/react-table";
+import { keepPreviousData, useQuery, useQueryClient } from "@tanstack/react-query";
+import { flexRender, getCoreRowModel, useReactTable, type RowSelectionState, type SortingState } from "@tanstack/react-table";
 import Link from "next/link";
 import { usePathname, useRouter, useSearchParams } from "next/navigation";
 import { useMemo, useState } from "react";
 import { buttonClass } from "@/components/ui/button-class";
 import { StatusBadge } from "@/components/ui/status-badge";
 import { apiJson } from "@/lib/http/client";
-import { ITEM_KINDS, ITEM_STATUSES, KIND_LABELS, STATUS_LABELS, type ItemStatus } from "@/lib/stock/labels";
 import type { ItemJson } from "@/lib/stock/item-json";
+import type { ItemStatus } from "@/lib/stock/labels";
+import { BulkActions } from "./bulk-actions";
+import { columns, DueDate, lb, type TableMeta } from "./stock-columns";
+import { FILTER_KEYS, StockFilters } from "./stock-filters";
 
 interface Page {
   data: ItemJson[];
@@ -23,47 +19,7 @@ interface Page {
   total: number;
 }
 
-const FILTER_KEYS = ["kind", "status", "yardId", "due", "q"] as const;
 
-
-const lb = (n: number | null) => (n == null ? "not rated" : `${n.toLocaleString("en-US")} lb`);
-
-/** What the cells read besides their row: the organisation's today (YYYY-MM-DD). */
-interface TableMeta {
-  today: string;
-}
-
-const columns: ColumnDef<ItemJson>[] = [
-  {
-    id: "select",
-    enableSorting: false,
-    header: ({ table }) => (
-      <input type="checkbox" aria-label="Select all on this page" className="h-6 w-6 shrink-0" checked={table.getIsAllPageRowsSelected()} onChange={table.getToggleAllPageRowsSelectedHandler()} />
-    ),
-    cell: ({ row }) => (
-      <input type="checkbox" aria-label={`Select ${row.original.tagCode}`} className="h-6 w-6 shrink-0" checked={row.getIsSelected()} onChange={row.getToggleSelectedHandler()} />
-    ),
-  },
-  {
-    id: "tagCode",
-    header: "Tag",
-    cell: ({ row }) => (
-      <Link href={row.original.url} className="font-mono text-lg font-bold tracking-wider underline">{row.original.tagCode}</Link>
-    ),
-  },
-  { id: "kind", header: "Item", cell: ({ row }) => row.original.description },
-  { id: "wllLb", header: "WLL", cell: ({ row }) => <span className="font-bold">{lb(row.original.wllLb)}</span> },
-  { id: "status", header: "Status", cell: ({ row }) => <StatusBadge status={row.original.status as ItemStatus} /> },
-  { id: "yardName", header: "Lives at", cell: ({ row }) => row.original.yard?.name ?? "" },
-  { id: "nextInspectionDue", header: "Inspection due", cell: ({ row, table }) => <DueDate date={row.original.nextInspectionDue} today={(table.options.meta as TableMeta).today} /> },
-  { id: "serial", header: "Serial", cell: ({ row }) => row.original.serial ?? "" },
-];
-
-function DueDate({ date, today }: { date: string | null; today: string }) {
-  if (!date) return <span>not set</span>;
-  const overdue = date < today;
-  return overdue ? <strong className="text-stop">{date} overdue</strong> : <span>{date}</span>;
-}
 
 /** The stock list: paged, sorted and filtered on the server, with bulk actions. `today` is the organisation's date. */
 export function StockTable({ yards, canEdit, canExport = false, today }: { yards: { id: string; name: string }[]; canEdit: boolean; canExport?: boolean; today: string }) {
@@ -75,7 +31,6 @@ export function StockTable({ yards, canEdit, canExport = false, today }: { yards
   const perPage = 25;
   const sorting: SortingState = [{ id: params.get("sort") ?? "tagCode", desc: params.get("order") === "desc" }];
   const [rowSelection, setRowSelection] = useState<RowSelectionState>({});
-  const [bulk, setBulk] = useState<"move" | "tag_out" | null>(null);
 
   const query = useMemo(() => {
     const q = new URLSearchParams({ page: String(page), perPage: String(perPage), sort: sorting[0].id, order: sorting[0].desc ? "desc" : "asc" });
@@ -122,26 +77,7 @@ export function StockTable({ yards, canEdit, canExport = false, today }: { yards
 
   return (
     <div className="flex flex-col gap-3">
-      <form
-        role="search"
-        className="flex flex-wrap items-end gap-2"
-        onSubmit={(e) => {
-          e.preventDefault();
-          setParams({ q: new FormData(e.currentTarget).get("q") as string });
-        }}
-      >
-        <label className="flex flex-1 flex-col gap-1 text-base font-bold">
-          Tag code or serial
-          <input name="q" defaultValue={params.get("q") ?? ""} className="min-h-tap rounded-lg border-2 border-ink-soft px-3 text-lg" autoCapitalize="characters" />
-        </label>
-        <button type="submit" className={buttonClass("primary")}>Search</button>
-      </form>
-      <div className="grid grid-cols-2 gap-2 md:grid-cols-4">
-        <Filter label="Kind" value={params.get("kind")} onChange={(v) => setParams({ kind: v })} options={ITEM_KINDS.map((k) => [k, KIND_LABELS[k]])} />
-        <Filter label="Status" value={params.get("status")} onChange={(v) => setParams({ status: v })} options={ITEM_STATUSES.map((s) => [s, STATUS_LABELS[s].label])} />
-        <Filter label="Lives at" value={params.get("yardId")} onChange={(v) => setParams({ yardId: v })} options={yards.map((y) => [y.id, y.name])} />
-        <Filter label="Inspection" value={params.get("due")} onChange={(v) => setParams({ due: v })} options={[["overdue", "Overdue"], ["30d", "Due in 30 days"]]} />
-      </div>
+      <StockFilters params={params} yards={yards} setParams={setParams} />
 
       <div className="flex flex-wrap items-center justify-between gap-2">
         <p aria-live="polite" className="text-lg">
@@ -155,16 +91,15 @@ export function StockTable({ yards, canEdit, canExport = false, today }: { yards
       </div>
 
       {selected.length > 0 && (
-        <div className="flex flex-col gap-2 rounded-xl border-2 border-ink bg-signal/20 p-3">
-          <p className="text-lg font-bold">{selected.length} selected</p>
-          <div className="flex flex-wrap gap-2">
-            <Link href={`/tags/sheet?ids=${selected.join(",")}`} className={buttonClass("secondary")}>Print tags</Link>
-            {canEdit && <button type="button" onClick={() => setBulk("move")} className={buttonClass("secondary")}>Move</button>}
-            <button type="button" onClick={() => setBulk("tag_out")} className={buttonClass("danger-outline")}>Tag out</button>
-          </div>
-          {bulk === "move" && <BulkMove ids={selected} yards={yards} onDone={() => { setBulk(null); setRowSelection({}); refresh(); }} />}
-          {bulk === "tag_out" && <BulkTagOut ids={selected} onDone={() => { setBulk(null); setRowSelection({}); refresh(); }} />}
-        </div>
+        <BulkActions
+          selected={selected}
+          yards={yards}
+          canEdit={canEdit}
+          onDone={() => {
+            setRowSelection({});
+            refresh();
+          }}
+        />
       )}
 
       {/* Phones: one card per item. */}
@@ -225,60 +160,3 @@ export function StockTable({ yards, canEdit, canExport = false, today }: { yards
   );
 }
 
-function Filter({ label, value, onChange, options }: { label: string; value: string | null; onChange: (v: string | null) => void; options: string[][] }) {
-  return (
-    <label className="flex flex-col gap-1 text-base font-bold">
-      {label}
-      <select value={value ?? ""} onChange={(e) => onChange(e.target.value || null)} className="min-h-tap rounded-lg border-2 border-ink-soft bg-white px-2 text-lg">
-        <option value="">All</option>
-        {options.map(([v, l]) => <option key={v} value={v}>{l}</option>)}
-      </select>
-    </label>
-  );
-}
-
-function BulkMove({ ids, yards, onDone }: { ids: string[]; yards: { id: string; name: string }[]; onDone: () => void }) {
-  const [yardId, setYardId] = useState(yards[0]?.id ?? "");
-  const move = useMutation({ mutationFn: () => apiJson<{ moved: number }>("/api/v1/items/move", { method: "POST", body: JSON.stringify({ itemIds: ids, yardId }) }), onSuccess: onDone });
-  return (
-    <div className="flex flex-wrap items-end gap-2">
-      <label className="flex flex-col gap-1 text-base font-bold">
-        Move to
-        <select value={yardId} onChange={(e) => setYardId(e.target.value)} className="min-h-tap rounded-lg border-2 border-ink-soft bg-white px-2 text-lg">
-          {yards.map((y) => <option key={y.id} value={y.id}>{y.name}</option>)}
-        </select>
-      </label>
-      <button type="button" disabled={move.isPending} onClick={() => move.mutate()} className={buttonClass("primary")}>Move {ids.length}</button>
-      {move.error && <p role="alert" className="font-bold text-stop">{move.error.message}</p>}
-    </div>
-  );
-}
-
-function BulkTagOut({ ids, onDone }: { ids: string[]; onDone: () => void }) {
-  const [note, setNote] = useState("");
-  const [problems, setProblems] = useState<string[]>([]);
-  const tagOut = useMutation({
-    mutationFn: async () => {
-      const failed: string[] = [];
-      for (const id of ids) {
-        try {
-          await apiJson(`/api/v1/items/${id}/events`, { method: "POST", body: JSON.stringify({ type: "tag_out", note }) });
-        } catch (e) {
-          failed.push((e as Error).message);
-        }
-      }
-      return failed;
-    },
-    onSuccess: (failed) => (failed.length ? setProblems(failed) : onDone()),
-  });
-  return (
-    <div className="flex flex-col gap-2">
-      <label htmlFor="bulk-note" className="text-base font-bold">What is wrong with them?</label>
-      <textarea id="bulk-note" value={note} onChange={(e) => setNote(e.target.value)} rows={2} className="rounded-lg border-2 border-ink-soft p-2 text-lg" />
-      <button type="button" disabled={tagOut.isPending || note.trim().length < 3} onClick={() => tagOut.mutate()} className={buttonClass("danger")}>
-        Tag out {ids.length}
-      </button>
-      {problems.length > 0 && <ul role="alert" className="list-disc pl-6 font-bold text-stop">{problems.map((p, i) => <li key={i}>{p}</li>)}</ul>}
-    </div>
-  );
-}

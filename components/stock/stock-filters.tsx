@@ -1,0 +1,54 @@
+"use client";
+import { buttonClass } from "@/components/ui/button-class";
+import { ITEM_KINDS, ITEM_STATUSES, KIND_LABELS, STATUS_LABELS } from "@/lib/stock/labels";
+
+/** The list's filters as they travel in the page's address (and on to the CSV export). */
+export const FILTER_KEYS = ["kind", "status", "yardId", "due", "q"] as const;
+
+/** The search box and the four filters above the stock table; each change goes to the address. */
+export function StockFilters({
+  params,
+  yards,
+  setParams,
+}: {
+  params: URLSearchParams;
+  yards: { id: string; name: string }[];
+  setParams: (patch: Record<string, string | null>) => void;
+}) {
+  return (
+    <>
+      <form
+        role="search"
+        className="flex flex-wrap items-end gap-2"
+        onSubmit={(e) => {
+          e.preventDefault();
+          setParams({ q: new FormData(e.currentTarget).get("q") as string });
+        }}
+      >
+        <label className="flex flex-1 flex-col gap-1 text-base font-bold">
+          Tag code or serial
+          <input name="q" defaultValue={params.get("q") ?? ""} className="min-h-tap rounded-lg border-2 border-ink-soft px-3 text-lg" autoCapitalize="characters" />
+        </label>
+        <button type="submit" className={buttonClass("primary")}>Search</button>
+      </form>
+      <div className="grid grid-cols-2 gap-2 md:grid-cols-4">
+        <Filter label="Kind" value={params.get("kind")} onChange={(v) => setParams({ kind: v })} options={ITEM_KINDS.map((k) => [k, KIND_LABELS[k]])} />
+        <Filter label="Status" value={params.get("status")} onChange={(v) => setParams({ status: v })} options={ITEM_STATUSES.map((s) => [s, STATUS_LABELS[s].label])} />
+        <Filter label="Lives at" value={params.get("yardId")} onChange={(v) => setParams({ yardId: v })} options={yards.map((y) => [y.id, y.name])} />
+        <Filter label="Inspection" value={params.get("due")} onChange={(v) => setParams({ due: v })} options={[["overdue", "Overdue"], ["30d", "Due in 30 days"]]} />
+      </div>
+    </>
+  );
+}
+
+function Filter({ label, value, onChange, options }: { label: string; value: string | null; onChange: (v: string | null) => void; options: string[][] }) {
+  return (
+    <label className="flex flex-col gap-1 text-base font-bold">
+      {label}
+      <select value={value ?? ""} onChange={(e) => onChange(e.target.value || null)} className="min-h-tap rounded-lg border-2 border-ink-soft bg-white px-2 text-lg">
+        <option value="">All</option>
+        {options.map(([v, l]) => <option key={v} value={v}>{l}</option>)}
+      </select>
+    </label>
+  );
+}
