@@ -36,8 +36,11 @@ export function CameraScanner({
 }) {
   const [camera, setCamera] = useState<CameraState>({ on: "starting" });
   const [run, setRun] = useState(0);
+  // The camera calls the latest onText without restarting when the parent renders again.
   const onTextRef = useRef(onText);
-  onTextRef.current = onText;
+  useEffect(() => {
+    onTextRef.current = onText;
+  }, [onText]);
 
   useEffect(() => {
     if (run < 0) return;

@@ -29,7 +29,9 @@ export function StockTable({ yards, canEdit, canExport = false, today }: { yards
   const queryClient = useQueryClient();
   const page = Number(params.get("page") ?? 1);
   const perPage = 25;
-  const sorting: SortingState = [{ id: params.get("sort") ?? "tagCode", desc: params.get("order") === "desc" }];
+  const sortId = params.get("sort") ?? "tagCode";
+  const desc = params.get("order") === "desc";
+  const sorting: SortingState = useMemo(() => [{ id: sortId, desc }], [sortId, desc]);
   const [rowSelection, setRowSelection] = useState<RowSelectionState>({});
 
   const query = useMemo(() => {
@@ -46,7 +48,10 @@ export function StockTable({ yards, canEdit, canExport = false, today }: { yards
 
   function setParams(patch: Record<string, string | null>) {
     const next = new URLSearchParams(params);
-    for (const [k, v] of Object.entries(patch)) (v ? next.set(k, v) : next.delete(k));
+    for (const [k, v] of Object.entries(patch)) {
+      if (v) next.set(k, v);
+      else next.delete(k);
+    }
     if (!("page" in patch)) next.delete("page");
     setRowSelection({});
     router.replace(`${pathname}?${next.toString()}`, { scroll: false });

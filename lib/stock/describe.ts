@@ -1,5 +1,5 @@
 // How an item is named to people: its size with its unit, and a one-line description.
-import { KIND_LABELS, STATUS_LABELS, type ItemKind, type ItemStatus } from "./labels";
+import { KIND_LABELS, type ItemKind } from "./labels";
 
 /**
  * "3/8 in", "10 mm", or null: sizes are stored as the trade label without the inch unit.

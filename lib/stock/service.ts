@@ -15,7 +15,6 @@ import type { FilePurpose } from "@/lib/storage/file-type";
 import { preUseOutcome, type CheckAnswer } from "./checklists";
 import { evaluateMeasurements, verdictProblem, type InspectionVerdict } from "./inspection";
 import { nextDue } from "./intervals";
-import type { ItemKind, ItemStatus } from "./labels";
 import { itemChanges } from "./changes";
 import { itemFields } from "./item-fields";
 import type { ItemInput } from "./schemas";

@@ -26,7 +26,10 @@ export function discoveredActions(): Map<string, ActionRef> {
 /** Calls a server action the way React does: the form's fields, behind its previous state. */
 export async function callAction(client: Client, action: ActionRef, fields: Record<string, string | Blob> = {}) {
   const form = new FormData();
-  for (const [k, v] of Object.entries(fields)) (typeof v === "string" ? form.append(`_1_${k}`, v) : form.append(`_1_${k}`, v, (v as File).name ?? "upload"));
+  for (const [k, v] of Object.entries(fields)) {
+    if (typeof v === "string") form.append(`_1_${k}`, v);
+    else form.append(`_1_${k}`, v, (v as File).name ?? "upload");
+  }
   form.append("0", JSON.stringify([{}, "$K1"])); // the root goes last, as React sends it
   const res = await client.request("POST", action.page, form, { "next-action": action.id });
   return res.text;
