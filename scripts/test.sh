@@ -8,7 +8,7 @@ ensure_node_modules
 
 # The linter first: a problem it finds is cheaper to read than a failing test.
 say "linting (npm run lint)"
-(cd "$ROOT" && node_modules/.bin/eslint . --max-warnings 0 --cache --cache-location "$DATA/eslint-cache") || { say "the linter found problems (above); nothing was tested"; exit 1; }
+(cd "$ROOT" && npm run --silent lint) || { say "the linter found problems (above); nothing was tested"; exit 1; }
 
 ensure_chromium
 start_postgres
