@@ -4,23 +4,7 @@
 source "$(dirname "$0")/lib.sh"
 PORT="${PORT:-3000}"
 
-ensure_node_modules
-start_postgres
-ensure_database linkyard
-start_mail
-start_s3
-
-export DATABASE_URL="${DATABASE_URL:-$(database_url linkyard)}"
-export_service_env
-export APP_URL="${APP_URL:-http://127.0.0.1:$PORT}"
-
-say "applying migrations"
-knex_cli migrate:latest >/dev/null
-if [ "$(cd "$ROOT" && node --import tsx scripts/db-is-empty.ts)" = "empty" ]; then
-  say "loading the demo data"
-  knex_cli seed:run >/dev/null
-fi
-
+prepare_local_app "$PORT"
 build_if_stale
 
 cat <<MSG

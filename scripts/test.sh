@@ -32,9 +32,9 @@ knex_cli seed:run >/dev/null
 build_if_stale
 
 say "serving the build on $APP_URL for the tests"
-stop_pid_file "$DATA/test-app.pid"
+stop_pid_file "$DATA/test-app.pid" next
 (cd "$ROOT"; nohup node_modules/.bin/next start -H 127.0.0.1 -p "$TEST_PORT" >"$DATA/test-app.log" 2>&1 & echo $! >"$DATA/test-app.pid")
-trap 'stop_pid_file "$DATA/test-app.pid"' EXIT
+trap 'stop_pid_file "$DATA/test-app.pid" next' EXIT
 wait_for_http "$APP_URL/api/health" "$DATA/test-app.log"
 
 cd "$ROOT"
