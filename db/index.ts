@@ -19,11 +19,6 @@ if (process.env.NODE_ENV !== "production") {
 /** A transaction (or the pool itself) that query functions run in. */
 export type Tx = Knex;
 
-/** Runs work in one transaction: all of it is written, or none of it. */
-export function transaction<T>(work: (tx: Knex.Transaction) => Promise<T>): Promise<T> {
-  return db.transaction(work);
-}
-
 /** Runs work in a transaction that is always rolled back: reads that may use temporary tables, writing nothing. */
 export async function rolledBack<T>(work: (tx: Knex.Transaction) => Promise<T>): Promise<T> {
   const tx = await db.transaction();

@@ -25,9 +25,10 @@ import { commitRefusal, runImport, type ImportStore, type PreparedCreate, type P
 import { openCsv } from "./source";
 
 // The CSV import of stock, from the uploaded file to the database and the file store (the
-// reading and checking of rows is pipeline.ts; undo is undo.ts). A commit is ONE transaction: every row goes in, or, when the owner
-// chose "only the valid rows", every valid row goes in and the rejected rows are kept as a
-// file to fix and upload again; on any refusal or failure nothing of the file is left behind.
+// reading and checking of rows is pipeline.ts; undo is undo.ts). A commit is ONE
+// transaction: every row goes in, or, when the owner chose "only the valid rows", every
+// valid row goes in and the rejected rows are kept as a file to fix and upload again; on
+// any refusal or failure nothing of the file is left behind.
 // The upload is read from disk as a stream and written in chunks of 1,000 rows, so memory
 // holds a chunk, the first 1,000 errors and the ids of the batch, whatever the file's size.
 
