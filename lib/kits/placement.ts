@@ -240,6 +240,16 @@ function percent(share: number): string {
   return `${formatNumber(share * 100)} %`;
 }
 
+/**
+ * A band in words: "10–15 %".
+ *
+ * @example
+ * bandWords({ min: 0.2, max: 0.25 }); // "20–25 %"
+ */
+export function bandWords(band: Pick<TongueBand, "min" | "max">): string {
+  return `${formatNumber(band.min * 100)}–${formatNumber(band.max * 100)} %`;
+}
+
 function requireGeometry(trailer: PlacementTrailer): { a: number; h: number } {
   if (!(trailer.hitchToAxleMm > 0)) throw new RangeError("The trailer's hitch-to-axle distance must be above 0 mm.");
   if (trailer.hitchToDeckFrontMm === null) throw new RangeError("The trailer's hitch-to-deck-front distance has not been measured.");
@@ -340,7 +350,7 @@ export function placeMachine(machine: PlacementMachine, trailer: PlacementTraile
       code: below ? "TONGUE_SHARE_BELOW_BAND" : "TONGUE_SHARE_ABOVE_BAND",
       severity: "warn",
       message:
-        `The tongue weight, ${formatLbKg(Math.round(tongue))}, is ${percent(share)} of the loaded trailer's weight, ${below ? "below" : "above"} the ${percent(band.min)}–${percent(band.max)} band (${formatNumber(range.minLb)}–${formatNumber(range.maxLb)} lb).` +
+        `The tongue weight, ${formatLbKg(Math.round(tongue))}, is ${percent(share)} of the loaded trailer's weight, ${below ? "below" : "above"} the ${bandWords(band)} band (${formatNumber(range.minLb)}–${formatNumber(range.maxLb)} lb).` +
         (vehicleMakerAccepts ? " It is inside the vehicle maker's 15–25 % but below the trailer maker's 20–25 %." : "") +
         ` ${below ? "Move the machine forward" : "Move the machine back"}: ${PLACED_RISKS}. Follow the trailer and tow vehicle makers' figures and local rules.${where}`,
       source: band.source,
