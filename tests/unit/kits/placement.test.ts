@@ -195,3 +195,33 @@ describe("formatMetres", () => {
     expect(formatMetres(2540)).toBe("2.54 m (8 ft 4 in)");
   });
 });
+
+describe("PlacementControl rendered on the server", () => {
+  it("shows the figures, the band with its source, the in-band marks and the findings at the saved position", async () => {
+    const { createElement } = await import("react");
+    const { renderToStaticMarkup } = await import("react-dom/server");
+    const { PlacementControl } = await import("@/components/kits/placement/placement-control");
+    const { passingScene } = await import("./scenes");
+    const k = passingScene();
+    // x = 1,400 + 600 + 2,200 = 4,200; T = 450 + 8,100 × (5,000 − 4,200) / 5,000 = 1,746 lb; G = 12,000 lb: 14.6 %.
+    const html = renderToStaticMarkup(createElement(PlacementControl, { machine: k.machine, trailer: k.trailer, initialMm: 600 }));
+    expect(html).toContain("1,746 lb");
+    expect(html).toContain("14.6 % of the loaded weight");
+    expect(html).toContain("In the band");
+    expect(html).toContain("12,000 lb");
+    expect(html).toContain("2,000 lb under the GVWR");
+    expect(html).toContain("Source: Common practice: no published figure for pintle hitches");
+    expect(html).toMatch(/<input[^>]*type="range"[^>]*min="0"[^>]*max="1200"/);
+    expect(html).toContain("Striped: in the band</span> from 0.57 m");
+    expect(html).toContain('data-code="SIXTY_FORTY"');
+    expect(html).toContain("does not replace the driver&#x27;s inspection");
+
+    const far = renderToStaticMarkup(createElement(PlacementControl, { machine: k.machine, trailer: k.trailer, initialMm: 1200 }));
+    expect(far).toContain("Below the band");
+    expect(far).toContain('data-code="TONGUE_SHARE_BELOW_BAND"');
+
+    const unmeasured = renderToStaticMarkup(createElement(PlacementControl, { machine: k.machine, trailer: { ...k.trailer, hitchToDeckFrontMm: null }, initialMm: 600 }));
+    expect(unmeasured).toContain("Measure Split tilt 20&#x27;s distance from the hitch point to the front of its deck");
+    expect(unmeasured).not.toContain('type="range"');
+  });
+});
