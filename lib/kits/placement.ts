@@ -75,7 +75,13 @@ export interface CouplingBand extends TongueBand {
   readonly published: readonly TongueBand[];
 }
 
-/** Shown beside every band in words; the reference file (§5) holds the addresses. */
+/**
+ * The sources shown beside the bands and findings, in words; the reference file (§5) holds
+ * their addresses.
+ *
+ * @example
+ * BAND_SOURCES.sixtyForty; // "Common practice (a rule of thumb: …)"
+ */
 export const BAND_SOURCES = {
   trailerMakerBall: "A trailer maker's owner's manual (§3.1, tongue weight as a percentage of loaded trailer weight): 10–15 % for a ball hitch",
   vehicleMakerBall: "A vehicle maker's owner's manual (towing): 10–15 % for a conventional ball hitch",
@@ -152,6 +158,12 @@ export const PLACEMENT_FINDING_CODES = [
   "CG_ASSUMED_MIDDLE",
   "SIXTY_FORTY",
 ] as const;
+/**
+ * A placement finding's code.
+ *
+ * @example
+ * const code: PlacementFindingCode = "OVER_GVWR";
+ */
 export type PlacementFindingCode = (typeof PLACEMENT_FINDING_CODES)[number];
 
 /**
@@ -198,7 +210,7 @@ export interface Placement {
  * A range of positions of the machine's front, measured back from the deck front, in mm.
  *
  * @example
- * const r: PositionRange = { fromMm: 600, toMm: 1450 };
+ * const r: PositionRange = { fromMm: 1000, toMm: 1350 };
  */
 export interface PositionRange {
   readonly fromMm: number;
@@ -285,7 +297,8 @@ export function positionLimits(machine: Pick<Machine, "lengthMm">, trailer: Pick
  * T(p) = band.max · G for its front edge and T(p) = band.min · G for its rear edge.
  *
  * @example
- * inBandRange(machine, trailer); // { fromMm: 1150, toMm: 1710 } (the slider's marks)
+ * // The hand-worked gooseneck of placeMachine's example: 25 % at 1,000 mm, 20 % at 1,350 mm.
+ * inBandRange(machine, trailer); // { fromMm: 1000, toMm: 1350 } (the slider's marks)
  */
 export function inBandRange(machine: PlacementMachine, trailer: PlacementTrailer, band: Pick<TongueBand, "min" | "max"> = tongueBand(trailer.coupling)): PositionRange | null {
   const { a, h } = requireGeometry(trailer);

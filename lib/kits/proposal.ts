@@ -472,13 +472,14 @@ function missingGear(kit: Kit, free: readonly KitItem[], unavailable: readonly U
   if (chains.length > 0 && chains.length < wanted) {
     out.push(`Only ${plural(chains.length, "free chain")} on ${date} for ${plural(wanted, "tiedown")}${unavailableChains.length ? `; ${whyNotFree(unavailableChains)}` : ""}.`);
   }
-  const fitting = binders.filter((b) => sizes.some((s) => {
+  const takesAFreeChain = (b: KitItem) => {
     const r = binderRange(b);
-    return r !== null && s >= r[0] - 1e-9 && s <= r[1] + 1e-9;
-  }));
+    return r !== null && sizes.some((s) => s >= r[0] - 1e-9 && s <= r[1] + 1e-9);
+  };
+  const fitting = binders.filter(takesAFreeChain);
   if (fitting.length > 0 && fitting.length < Math.min(chains.length, wanted)) {
-    const blocked = unavailable.filter((u) => u.item.kind === "binder");
-    out.push(`Only ${plural(fitting.length, "free binder")} on ${date} that take${fitting.length === 1 ? "s" : ""} the free chains${blocked.length ? `; of the other binders, ${whyNotFree(blocked)}` : ""}.`);
+    const blocked = unavailable.filter((u) => u.item.kind === "binder" && takesAFreeChain(u.item));
+    out.push(`Only ${plural(fitting.length, "free binder")} on ${date} that take${fitting.length === 1 ? "s" : ""} the free chains${blocked.length ? `; of the others that would, ${whyNotFree(blocked)}` : ""}.`);
   }
   if (straps) {
     const blockedStraps = unavailable.filter((u) => u.item.kind === "web-strap");
@@ -560,7 +561,7 @@ export function proposeKit(kit: Kit, free: readonly KitItem[], unavailable: read
   let found = search(groups, anchored, requiredLb, heavy);
   if (!found && heavy) {
     found = search(groups, anchored, requiredLb, false);
-    if (found) notes.push("Free gear cannot give every tiedown on the machine a WLL of 5,000 lb or more, as the FMCSA Driver's Handbook on Cargo Securement (ch. 10) asks; the proposal meets 49 CFR 393.106(d) and 393.130 without it.");
+    if (found) notes.push("The free gear and the anchor points cannot give every tiedown on the machine a WLL of 5,000 lb or more, as the FMCSA Driver's Handbook on Cargo Securement (ch. 10) asks; the proposal meets 49 CFR 393.106(d) and 393.130 without it.");
   }
   const plan: readonly (Option | null)[] = found ? found.options : strongest(groups, anchored);
   const { proposed, kitTiedowns } = asTiedowns(anchored, plan);

@@ -154,6 +154,18 @@ describe("proposeKit: saying what is missing", () => {
     expect(light.notes).toContain("Only three free chains on 2026-12-03 for five tiedowns; two are in the kit for Hollins driveway.");
   });
 
+  it("says when binders run short before chains do", () => {
+    const heavy = { ...kit, machine: { ...kit.machine, weightLb: 12500, name: "Marten 55 excavator" } };
+    const stock = [...times(6, () => g70("3/8", 6600)), ...times(2, smallBinder)];
+    const tagged = smallBinder({ usable: taggedOut });
+    const p = proposeKit(heavy, stock, [{ item: tagged, reason: { code: "NOT_USABLE" } }]);
+    expect(p.pass).toBe(false);
+    expect(p.missing).toEqual([
+      "Gear for five tiedowns is needed; free gear on 2026-12-03 makes up two.",
+      "Only two free binders on 2026-12-03 that take the free chains; of the others that would, one is tagged out.",
+    ]);
+  });
+
   it("says how far short the strongest free gear falls, and which stronger gear is not free", () => {
     const heavy = { ...kit, machine: { ...kit.machine, weightLb: 12500, name: "Marten 55 excavator", accessories: [] } };
     // 1/4 in grade 43 chain: 2,600 lb. Four count 4 × 1,300 = 5,200 lb against 6,250 lb.
