@@ -103,132 +103,134 @@ export function KitDeck({ picture, idPrefix = "deck", heading = "On the deck", l
         <span aria-hidden="true">{picture.pass ? "✓ " : "✕ "}</span>
         {picture.pass ? "The check passes" : "The check does not pass"}
       </p>
-      <svg
-        viewBox={`${vb.x} ${vb.y} ${vb.width} ${vb.height}`}
-        role="group"
-        aria-labelledby={`${idPrefix}-title ${idPrefix}-desc`}
-        className="mx-auto h-auto w-full max-w-xl print:max-w-[5in]"
-        fontFamily="inherit"
-      >
-        <title id={`${idPrefix}-title`}>{picture.title}</title>
-        <desc id={`${idPrefix}-desc`}>{picture.description}</desc>
-        <defs>
-          <pattern id={hatch} patternUnits="userSpaceOnUse" width={f * 0.9} height={f * 0.9} patternTransform="rotate(45)">
-            <rect width={f * 0.9} height={f * 0.9} fill="#f3f4f6" />
-            <line x1="0" y1="0" x2="0" y2={f * 0.9} stroke="#9ca3af" strokeWidth={f * 0.12} />
-          </pattern>
-        </defs>
-        <rect x={vb.x} y={vb.y} width={vb.width} height={vb.height} fill="#ffffff" />
+      <div className="flex flex-col gap-3 md:grid md:grid-cols-[minmax(0,26rem)_minmax(0,1fr)] md:items-start md:gap-6 print:grid print:grid-cols-[3.6in_1fr] print:gap-4">
+        <svg
+          viewBox={`${vb.x} ${vb.y} ${vb.width} ${vb.height}`}
+          role="group"
+          aria-labelledby={`${idPrefix}-title ${idPrefix}-desc`}
+          className="mx-auto h-auto w-full max-w-xl"
+          fontFamily="inherit"
+        >
+          <title id={`${idPrefix}-title`}>{picture.title}</title>
+          <desc id={`${idPrefix}-desc`}>{picture.description}</desc>
+          <defs>
+            <pattern id={hatch} patternUnits="userSpaceOnUse" width={f * 0.9} height={f * 0.9} patternTransform="rotate(45)">
+              <rect width={f * 0.9} height={f * 0.9} fill="#f3f4f6" />
+              <line x1="0" y1="0" x2="0" y2={f * 0.9} stroke="#9ca3af" strokeWidth={f * 0.12} />
+            </pattern>
+          </defs>
+          <rect x={vb.x} y={vb.y} width={vb.width} height={vb.height} fill="#ffffff" />
 
-        {picture.hitch && (
-          <g>
-            {picture.hitch.tongue.map((line, i) => (
-              <polyline key={i} points={line.map((q) => `${q.x},${q.y}`).join(" ")} fill="none" stroke={INK} strokeWidth={f * 0.16} strokeLinejoin="round" />
-            ))}
-            <circle cx={picture.hitch.at.x} cy={picture.hitch.at.y} r={f * 0.35} fill={INK} />
-            <Label tag={picture.hitch.tag} f={f} lh={lh} />
-          </g>
-        )}
-
-        {deck.fixed && <rect {...deck.fixed} fill="#f3f4f6" stroke="none" />}
-        {deck.tilt && <rect {...deck.tilt} fill={`url(#${hatch})`} stroke="none" />}
-        <rect {...deck.rect} fill="none" stroke={INK} strokeWidth={f * 0.16} strokeDasharray={deck.widthAssumed ? `${f * 0.8} ${f * 0.4}` : undefined} />
-        {deck.fixed && deck.tilt && <line x1={deck.tilt.x} y1={deck.tilt.y} x2={deck.tilt.x + deck.tilt.width} y2={deck.tilt.y} stroke={INK} strokeWidth={f * 0.12} strokeDasharray={`${f * 0.5} ${f * 0.3}`} />}
-
-        {picture.axle && (
-          <g>
-            <line x1={picture.axle.x1} y1={picture.axle.y} x2={picture.axle.x2} y2={picture.axle.y} stroke="#374151" strokeWidth={f * 0.1} strokeDasharray={`${f * 0.9} ${f * 0.3} ${f * 0.2} ${f * 0.3}`} />
-            <Label tag={picture.axle.tag} f={f} lh={lh} bold={[]} />
-          </g>
-        )}
-
-        <g>
-          <rect {...m.rect} rx={f * 0.2} fill="#ffc21a" fillOpacity={0.35} stroke={INK} strokeWidth={f * 0.14} strokeDasharray={m.placed ? undefined : `${f * 0.6} ${f * 0.35}`} />
-          <Label tag={m.nameTag} f={f} lh={lh} bold={m.nameTag.lines.map((_, i) => i)} />
-          <Label tag={m.frontTag} f={f} lh={lh} bold={[]} />
-          {m.points.map((q) => (
-            <rect key={q.label} x={q.at.x - f * 0.22} y={q.at.y - f * 0.22} width={f * 0.44} height={f * 0.44} fill={INK} />
-          ))}
-        </g>
-
-        {picture.tiedowns.map((t) => (
-          <Tiedown key={t.id} t={t} f={f} lh={lh} />
-        ))}
-        {/* Anchor points over the lines, so that a cross on one out of use is never hidden. */}
-        {picture.anchors.map((a) => (
-          <Anchor key={a.id} a={a} f={f} lh={lh} />
-        ))}
-      </svg>
-
-      <figcaption className="flex flex-col gap-3 text-base">
-        <p>{picture.description}</p>
-        <ul className="flex flex-col gap-1" aria-label="How to read the drawing">
-          {(["counts", "limited", "not-rated", "blocked"] as const)
-            .filter((s) => used.has(s))
-            .map((s) => (
-              <li key={s} className="flex items-center gap-2">
-                <LineSample state={s} />
-                <span>
-                  <strong>{TIEDOWN_STATE_WORDS[s]}</strong> ({TIEDOWN_STYLES[s].sample}){": "}
-                  {s === "counts" && "the tiedown counts toward the aggregate WLL, set by its chain or strap."}
-                  {s === "limited" && "it counts, but a weaker part (a binder, a fitting or the anchor point) sets its WLL."}
-                  {s === "not-rated" && "a part cannot be rated, so it counts 0."}
-                  {s === "blocked" && "it uses gear or an anchor point the kit may not use on its date."}
-                </span>
-              </li>
-            ))}
-          <li>Squares at the deck edge are anchor points: filled when in use, white when free, grey and crossed out in red when out of use.</li>
-          {deck.fixed && deck.tilt && (
-            <li>
-              Plain: the fixed deck ({formatMetres(deck.fixedLengthMm)}); hatched: the tilting deck ({formatMetres(deck.tiltLengthMm)}).
-            </li>
+          {picture.hitch && (
+            <g>
+              {picture.hitch.tongue.map((line, i) => (
+                <polyline key={i} points={line.map((q) => `${q.x},${q.y}`).join(" ")} fill="none" stroke={INK} strokeWidth={f * 0.16} strokeLinejoin="round" />
+              ))}
+              <circle cx={picture.hitch.at.x} cy={picture.hitch.at.y} r={f * 0.35} fill={INK} />
+              <Label tag={picture.hitch.tag} f={f} lh={lh} />
+            </g>
           )}
-          {picture.axle && <li>The dash-dot line across the deck is the axle centre.</li>}
-          <li>The yellow block is the machine, its front marked ▲; black squares on it are its tie-down points.</li>
-        </ul>
-        {picture.notes.length > 0 && (
-          <ul className="flex flex-col gap-1" aria-label="Assumptions in the drawing">
-            {picture.notes.map((n) => (
-              <li key={n} className="font-bold text-caution">
-                <span aria-hidden="true">! </span>
-                {n}
-              </li>
+
+          {deck.fixed && <rect {...deck.fixed} fill="#f3f4f6" stroke="none" />}
+          {deck.tilt && <rect {...deck.tilt} fill={`url(#${hatch})`} stroke="none" />}
+          <rect {...deck.rect} fill="none" stroke={INK} strokeWidth={f * 0.16} strokeDasharray={deck.widthAssumed ? `${f * 0.8} ${f * 0.4}` : undefined} />
+          {deck.fixed && deck.tilt && <line x1={deck.tilt.x} y1={deck.tilt.y} x2={deck.tilt.x + deck.tilt.width} y2={deck.tilt.y} stroke={INK} strokeWidth={f * 0.12} strokeDasharray={`${f * 0.5} ${f * 0.3}`} />}
+
+          {picture.axle && (
+            <g>
+              <line x1={picture.axle.x1} y1={picture.axle.y} x2={picture.axle.x2} y2={picture.axle.y} stroke="#374151" strokeWidth={f * 0.1} strokeDasharray={`${f * 0.9} ${f * 0.3} ${f * 0.2} ${f * 0.3}`} />
+              <Label tag={picture.axle.tag} f={f} lh={lh} bold={[]} />
+            </g>
+          )}
+
+          <g>
+            <rect {...m.rect} rx={f * 0.2} fill="#ffc21a" fillOpacity={0.35} stroke={INK} strokeWidth={f * 0.14} strokeDasharray={m.placed ? undefined : `${f * 0.6} ${f * 0.35}`} />
+            <Label tag={m.nameTag} f={f} lh={lh} bold={m.nameTag.lines.map((_, i) => i)} />
+            <Label tag={m.frontTag} f={f} lh={lh} bold={[]} />
+            {m.points.map((q) => (
+              <rect key={q.label} x={q.at.x - f * 0.22} y={q.at.y - f * 0.22} width={f * 0.44} height={f * 0.44} fill={INK} />
             ))}
-          </ul>
-        )}
-        <section aria-labelledby={`${idPrefix}-words`} className="flex flex-col gap-1">
-          <Sub id={`${idPrefix}-words`} className="text-lg font-bold">
-            Tiedowns in words
-          </Sub>
-          {picture.tiedowns.length === 0 ? (
-            <p>No tiedowns yet.</p>
-          ) : (
-            <ol className="flex flex-col gap-2">
-              {picture.tiedowns.map((t) => (
-                <li key={t.id} data-state={t.state}>
-                  <a href={`#tiedown-${t.id}`} className="flex min-h-tap items-center font-bold underline">
-                    {t.name}
-                  </a>
-                  <p>{t.detail}</p>
+          </g>
+
+          {picture.tiedowns.map((t) => (
+            <Tiedown key={t.id} t={t} f={f} lh={lh} />
+          ))}
+          {/* Anchor points over the lines, so that a cross on one out of use is never hidden. */}
+          {picture.anchors.map((a) => (
+            <Anchor key={a.id} a={a} f={f} lh={lh} />
+          ))}
+        </svg>
+
+        <figcaption className="flex flex-col gap-3 text-base">
+          <p>{picture.description}</p>
+          <ul className="flex flex-col gap-1" aria-label="How to read the drawing">
+            {(["counts", "limited", "not-rated", "blocked"] as const)
+              .filter((s) => used.has(s))
+              .map((s) => (
+                <li key={s} className="flex items-center gap-2">
+                  <LineSample state={s} />
+                  <span>
+                    <strong>{TIEDOWN_STATE_WORDS[s]}</strong> ({TIEDOWN_STYLES[s].sample}){": "}
+                    {s === "counts" && "the tiedown counts toward the aggregate WLL, set by its chain or strap."}
+                    {s === "limited" && "it counts, but a weaker part (a binder, a fitting or the anchor point) sets its WLL."}
+                    {s === "not-rated" && "a part cannot be rated, so it counts 0."}
+                    {s === "blocked" && "it uses gear or an anchor point the kit may not use on its date."}
+                  </span>
                 </li>
               ))}
-            </ol>
-          )}
-        </section>
-        <details className="print:hidden">
-          <summary className="flex min-h-tap cursor-pointer items-center text-lg font-bold underline">Anchor points in words ({picture.anchors.length})</summary>
-          <ul className="flex flex-col gap-1">
-            {picture.anchors.map((a) => (
-              <li key={a.id} data-state={a.state}>
-                <a href={`#anchor-${a.id}`} className="flex min-h-tap items-center font-bold underline">
-                  {a.name}
-                </a>
-                <p>{a.detail}</p>
+            <li>Squares at the deck edge are anchor points: filled when in use, white when free, grey and crossed out in red when out of use.</li>
+            {deck.fixed && deck.tilt && (
+              <li>
+                Plain: the fixed deck ({formatMetres(deck.fixedLengthMm)}); hatched: the tilting deck ({formatMetres(deck.tiltLengthMm)}).
               </li>
-            ))}
+            )}
+            {picture.axle && <li>The dash-dot line across the deck is the axle centre.</li>}
+            <li>The yellow block is the machine, its front marked ▲; black squares on it are its tie-down points.</li>
           </ul>
-        </details>
-      </figcaption>
+          {picture.notes.length > 0 && (
+            <ul className="flex flex-col gap-1" aria-label="Assumptions in the drawing">
+              {picture.notes.map((n) => (
+                <li key={n} className="font-bold text-caution">
+                  <span aria-hidden="true">! </span>
+                  {n}
+                </li>
+              ))}
+            </ul>
+          )}
+          <section aria-labelledby={`${idPrefix}-words`} className="flex flex-col gap-1">
+            <Sub id={`${idPrefix}-words`} className="text-lg font-bold">
+              Tiedowns in words
+            </Sub>
+            {picture.tiedowns.length === 0 ? (
+              <p>No tiedowns yet.</p>
+            ) : (
+              <ol className="flex flex-col gap-2">
+                {picture.tiedowns.map((t) => (
+                  <li key={t.id} data-state={t.state}>
+                    <a href={`#tiedown-${t.id}`} className="flex min-h-tap items-center font-bold underline">
+                      {t.name}
+                    </a>
+                    <p>{t.detail}</p>
+                  </li>
+                ))}
+              </ol>
+            )}
+          </section>
+          <details className="print:hidden">
+            <summary className="flex min-h-tap cursor-pointer items-center text-lg font-bold underline">Anchor points in words ({picture.anchors.length})</summary>
+            <ul className="flex flex-col gap-1">
+              {picture.anchors.map((a) => (
+                <li key={a.id} data-state={a.state}>
+                  <a href={`#anchor-${a.id}`} className="flex min-h-tap items-center font-bold underline">
+                    {a.name}
+                  </a>
+                  <p>{a.detail}</p>
+                </li>
+              ))}
+            </ul>
+          </details>
+        </figcaption>
+      </div>
     </figure>
   );
 }
