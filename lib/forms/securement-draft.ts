@@ -8,6 +8,7 @@
  *
  * @module
  */
+import type { FieldIssue } from "@/lib/field-issues";
 import type { Attachment, CargoKind } from "@/lib/securement";
 import { CHAIN_TABLE, WEBBING_TABLE } from "@/lib/securement";
 
@@ -57,11 +58,6 @@ export interface CheckDraft {
   tiedowns: TiedownDraft[];
 }
 
-/** One problem with a request, as the API answers it. */
-export interface PathMessage {
-  path: string;
-  message: string;
-}
 
 let counter = 0;
 /** A key for React lists; unique within a page. */
@@ -273,7 +269,7 @@ export function toRequest(draft: CheckDraft): RequestBody {
  * issueAt([{ path: "cargo.weight.value", message: "The value must be a number" }], "cargo.weight");
  * // "The value must be a number"
  */
-export function issueAt(issues: readonly PathMessage[] | undefined, path: string): string | undefined {
+export function issueAt(issues: readonly FieldIssue[] | undefined, path: string): string | undefined {
   return issues?.find((i) => i.path === path || i.path.startsWith(`${path}.`))?.message;
 }
 

@@ -1,17 +1,14 @@
 // The browser's side of the API v1: one caller for every screen that fetches JSON, so
 // refusals read the same everywhere. Client-safe (no server imports).
 
-export interface ApiIssue {
-  path: string;
-  message: string;
-}
+import type { FieldIssue } from "@/lib/field-issues";
 
 /** A refusal from the API: its status, its sentence, and the fields at fault. */
 export class ApiError extends Error {
   constructor(
     readonly status: number,
     message: string,
-    readonly issues: ApiIssue[] = [],
+    readonly issues: FieldIssue[] = [],
     readonly nearest: string[] = [],
     readonly code?: string,
   ) {

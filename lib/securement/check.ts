@@ -34,6 +34,7 @@
  *
  * @module
  */
+import { zodIssues } from "@/lib/field-issues";
 import { countedWll, COUNT_FACTORS, meetsAggregate, requiredAggregateWll } from "./aggregate";
 import type { AssembledComponent } from "./assembly";
 import { assembleTiedown } from "./assembly";
@@ -44,7 +45,7 @@ import { SOURCES, sortFindings } from "./findings";
 import { formatFeet, formatLbKg, formatNumber, roundHalfUp } from "./format";
 import { HEAVY_MACHINE_MIN_TIEDOWNS, isHeavyMachine, minimumTiedowns } from "./minimum";
 import type { Attachment, CargoKind, ComponentType, SecurementCheckRequest } from "./request";
-import { issuesToPaths, securementCheckRequestSchema } from "./schema";
+import { securementCheckRequestSchema } from "./schema";
 import { KG_PER_LB, M_PER_FT, settle, toFeet, toLb } from "./units";
 
 /**
@@ -164,7 +165,7 @@ function plural(n: number, word: string): string {
  */
 export function checkSecurement(request: SecurementCheckRequest): SecurementCheckResult {
   const parsed = securementCheckRequestSchema.safeParse(request);
-  if (!parsed.success) throw new RequestValidationError(issuesToPaths(parsed.error));
+  if (!parsed.success) throw new RequestValidationError(zodIssues(parsed.error));
   const { cargo, tiedowns } = parsed.data;
 
   const weightLb = settle(toLb(cargo.weight).value);

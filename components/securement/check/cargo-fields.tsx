@@ -1,6 +1,7 @@
 "use client";
+import type { FieldIssue } from "@/lib/field-issues";
 import { ChoiceGroup, Toggle } from "@/components/ui/choice-group";
-import { ACCESSORY_CHOICES, issueAt, type CargoDraft, type PathMessage } from "@/lib/forms/securement-draft";
+import { ACCESSORY_CHOICES, issueAt, type CargoDraft } from "@/lib/forms/securement-draft";
 import { QuantityBox } from "./inputs";
 
 const KIND_OPTIONS = [
@@ -16,7 +17,7 @@ export function CargoFields({
 }: {
   cargo: CargoDraft;
   onChange: (patch: Partial<CargoDraft>) => void;
-  issues?: readonly PathMessage[];
+  issues?: readonly FieldIssue[];
 }) {
   const toggleAccessory = (name: string, on: boolean) =>
     onChange({ accessories: on ? ACCESSORY_CHOICES.filter((a) => a === name || cargo.accessories.includes(a)) : cargo.accessories.filter((a) => a !== name) });

@@ -1,4 +1,5 @@
 "use client";
+import type { FieldIssue } from "@/lib/field-issues";
 import { GRADE_NAMES, CHAIN_GRADES } from "@/lib/securement";
 import {
   CHAIN_SIZES,
@@ -7,7 +8,6 @@ import {
   WEBBING_WIDTHS,
   type ComponentDraft,
   type DraftWeightUnit,
-  type PathMessage,
 } from "@/lib/forms/securement-draft";
 import { SelectBox, TextBox } from "./inputs";
 
@@ -33,7 +33,7 @@ export function ComponentEditor({
   index: number;
   unit: DraftWeightUnit;
   path: string;
-  issues?: readonly PathMessage[];
+  issues?: readonly FieldIssue[];
   onChange: (next: ComponentDraft) => void;
   onRemove: () => void;
   canRemove: boolean;

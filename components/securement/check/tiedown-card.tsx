@@ -1,4 +1,5 @@
 "use client";
+import type { FieldIssue } from "@/lib/field-issues";
 import { useId } from "react";
 import { ChoiceGroup } from "@/components/ui/choice-group";
 import { ATTACHMENTS, type Attachment } from "@/lib/securement";
@@ -11,7 +12,6 @@ import {
   type ComponentDraft,
   type DraftComponentType,
   type DraftWeightUnit,
-  type PathMessage,
   type TiedownDraft,
 } from "@/lib/forms/securement-draft";
 import { ComponentEditor } from "./component-editor";
@@ -75,7 +75,7 @@ export function TiedownCard({
   index: number;
   unit: DraftWeightUnit;
   accessories: readonly string[];
-  issues?: readonly PathMessage[];
+  issues?: readonly FieldIssue[];
   open: boolean;
   onToggle: (open: boolean) => void;
   onChange: (next: TiedownDraft) => void;

@@ -1,6 +1,7 @@
-// Zod schemas of the request and the ratings query, and issuesToPaths().
+// Zod schemas of the request and the ratings query, read through the one issue mapper (zodIssues).
 import { describe, expect, it } from "vitest";
-import { issuesToPaths, ratingQuerySchema, securementCheckRequestSchema } from "@/lib/securement/schema";
+import { zodIssues } from "@/lib/field-issues";
+import { ratingQuerySchema, securementCheckRequestSchema } from "@/lib/securement/schema";
 
 const contract = {
   cargo: { weight: { value: 9800, unit: "lb" }, length: { value: 16, unit: "ft" }, kind: "machine", blockedAtFront: false, articulated: false, accessories: ["bucket", "blade"] },
@@ -21,7 +22,7 @@ const contract = {
 function paths(body: unknown) {
   const r = securementCheckRequestSchema.safeParse(body);
   if (r.success) return [];
-  return issuesToPaths(r.error);
+  return zodIssues(r.error);
 }
 
 describe("securementCheckRequestSchema", () => {
@@ -101,10 +102,10 @@ describe("ratingQuerySchema", () => {
   it("asks for the fields the material needs", () => {
     const r = ratingQuerySchema.safeParse({ material: "steel-strapping", width: "2" });
     expect(r.success).toBe(false);
-    expect(issuesToPaths(r.error!)).toEqual([{ path: "thickness", message: "A thickness is needed for steel-strapping" }]);
+    expect(zodIssues(r.error!)).toEqual([{ path: "thickness", message: "A thickness is needed for steel-strapping" }]);
     const w = ratingQuerySchema.safeParse({ material: "webbing", size: "4" });
-    expect(issuesToPaths(w.error!).map((i) => i.path)).toEqual(["width"]);
+    expect(zodIssues(w.error!).map((i) => i.path)).toEqual(["width"]);
     const m = ratingQuerySchema.safeParse({ material: "cable", size: "1/2" });
-    expect(issuesToPaths(m.error!)).toEqual([{ path: "material", message: "The material must be chain, webbing, wire-rope, rope or steel-strapping" }]);
+    expect(zodIssues(m.error!)).toEqual([{ path: "material", message: "The material must be chain, webbing, wire-rope, rope or steel-strapping" }]);
   });
 });
