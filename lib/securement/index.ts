@@ -42,12 +42,16 @@ export { RatingError, RequestValidationError } from "./errors";
 export type { Finding, FindingCode, Severity } from "./findings";
 export { FINDING_CODES, SOURCES, sortFindings } from "./findings";
 export { formatLbKg, formatNumber, roundHalfUp } from "./format";
+export type { FindingGroup } from "./grouping";
+export { groupFindings } from "./grouping";
 export type { ChainGrade, GradeInput } from "./grades";
-export { CHAIN_GRADES, GRADE_NAMES, isChainGrade, parseGrade } from "./grades";
+export { CHAIN_GRADES, GRADE_NAMES, gradeMarkNote, isChainGrade, parseGrade } from "./grades";
 export type { MinimumTiedowns, MinimumTiedownsInput } from "./minimum";
 export { HEAVY_MACHINE_LB, HEAVY_MACHINE_MIN_TIEDOWNS, isHeavyMachine, minimumTiedowns } from "./minimum";
-export type { ComponentFinding, ComponentRating, DefaultRating, Material, RatingQuery } from "./ratings";
-export { componentWll, defaultRating } from "./ratings";
+export type { DefaultRating, Material, RatingQuery } from "./lookup";
+export { defaultRating, formatTableWll, manilaNote } from "./lookup";
+export type { ComponentFinding, ComponentRating } from "./marking";
+export { componentWll } from "./marking";
 export type {
   AnchorComponent,
   Attachment,

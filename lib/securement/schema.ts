@@ -81,7 +81,14 @@ const markedFlag = z.boolean().optional();
 export const componentSchema = z.discriminatedUnion("type", [
   z.strictObject({ type: z.literal("chain"), grade: gradeSchema.optional(), size: sizeSchema.optional(), marked: markedFlag, ...base }),
   z.strictObject({ type: z.literal("webbing"), width: sizeSchema.optional(), marked: markedFlag, ...base }),
-  z.strictObject({ type: z.literal("wire-rope"), size: sizeSchema.optional(), marked: markedFlag, ...base }),
+  z.strictObject({
+    type: z.literal("wire-rope"),
+    size: sizeSchema.optional(),
+    marked: markedFlag,
+    construction: z.string().trim().min(1, { error: "The construction is empty" }).max(40).optional(),
+    nominalStrength: weightSchema.optional(),
+    ...base,
+  }),
   z.strictObject({ type: z.literal("rope"), fibre: z.enum(ROPE_FIBRES).optional(), size: sizeSchema.optional(), marked: markedFlag, ...base }),
   z.strictObject({ type: z.literal("steel-strapping"), width: sizeSchema.optional(), thickness: sizeSchema.optional(), marked: markedFlag, ...base }),
   z.strictObject({ type: z.literal("binder"), chainSizeRange: z.tuple([sizeSchema, sizeSchema]).optional(), ...base }),

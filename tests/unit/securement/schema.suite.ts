@@ -40,6 +40,7 @@ describe("securementCheckRequestSchema", () => {
       { type: "chain", grade: "G70", size: "10 mm", marked: false, label: "chain 7", gearId: "c-7" },
       { type: "webbing", width: "1 3/4", wll: { value: 1500, unit: "daN" } },
       { type: "wire-rope", size: 0.5 },
+      { type: "wire-rope", size: "1/2", construction: "6x19 IWRC", nominalStrength: { value: 26600, unit: "lb" } },
       { type: "rope", fibre: "double-braided-nylon", size: "1/2\"" },
       { type: "steel-strapping", width: "1-1/4 in", thickness: "0.029 in" },
       { type: "hook", grade: 70, wll: { value: 6600, unit: "lb" } },
@@ -71,6 +72,15 @@ describe("securementCheckRequestSchema", () => {
     body.tiedowns.push({ attachment: "direct", components: [] });
     body.tiedowns.push({ attachment: "direct", components: [{ type: "chain", grade: "alloy", size: "3/8" }] });
     expect(paths(body).map((p) => p.path)).toEqual(["tiedowns.0.components.0.type", "tiedowns.1.components", "tiedowns.2.components.0.grade"]);
+  });
+
+  it("reads a wire rope's construction and nominal strength (393.108(e)(1)), and refuses bad ones at their path", () => {
+    const body = structuredClone(contract) as any;
+    body.tiedowns[0].components[0] = { type: "wire-rope", size: "1/2", construction: " ", nominalStrength: { value: -1, unit: "lb" } };
+    expect(paths(body)).toEqual([
+      { path: "tiedowns.0.components.0.construction", message: "The construction is empty" },
+      { path: "tiedowns.0.components.0.nominalStrength.value", message: "The value must be greater than 0" },
+    ]);
   });
 
   it("checks secures against the declared accessories", () => {
