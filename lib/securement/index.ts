@@ -83,6 +83,8 @@ export {
   tiedownSchema,
   weightSchema,
 } from "./schema";
+export type { SavedCheckAnswer, SavedCheckInput, StoredCheck } from "./saved";
+export { maySaveOver, savedCheckAnswer, savedCheckInputSchema } from "./saved";
 export type { ParsedSize, SizeInput, SizedRow } from "./sizes";
 export { findRow, inchLabel, nearestRows, parseSize, rowDisplay, sizeMatchesRow, tryParseSize } from "./sizes";
 export type { ChainRow, RopeFibre, SizeRow, StrappingRow, TableStatus, WllCell, WllTable } from "./tables";

@@ -2,7 +2,7 @@
 import type { FieldIssue } from "@/lib/field-issues";
 import { ChoiceGroup, Toggle } from "@/components/ui/choice-group";
 import { ACCESSORY_CHOICES, issueAt, type CargoDraft } from "@/lib/forms/securement-draft";
-import { QuantityBox } from "./inputs";
+import { QuantityField } from "@/components/ui/field";
 
 const KIND_OPTIONS = [
   { value: "machine" as const, label: "Machine", sub: "on wheels or tracks" },
@@ -25,7 +25,8 @@ export function CargoFields({
     <fieldset className="flex flex-col gap-4 rounded-xl border-2 border-ink p-3">
       <legend className="px-1 text-xl font-bold">The machine</legend>
       <div className="grid grid-cols-1 gap-3 sm:grid-cols-2">
-        <QuantityBox
+        <QuantityField
+          name="cargo.weight"
           label="Weight"
           value={cargo.weight}
           unit={cargo.weightUnit}
@@ -34,7 +35,8 @@ export function CargoFields({
           onUnit={(weightUnit) => onChange({ weightUnit })}
           error={issueAt(issues, "cargo.weight")}
         />
-        <QuantityBox
+        <QuantityField
+          name="cargo.length"
           label="Length"
           value={cargo.length}
           unit={cargo.lengthUnit}
