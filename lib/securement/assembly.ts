@@ -149,7 +149,7 @@ export function assembleTiedown(tiedown: Tiedown, index = 0): AssembledTiedown {
       findings.push({
         code: e.code,
         severity: "fail",
-        ...said(where, `${e.message}. This tiedown counts 0 toward the aggregate until it is corrected`),
+        ...said(where, `${e.message}. The tiedown counts 0 toward the aggregate until it is corrected`),
         source: e.code === "MISSING_WLL" ? SOURCES.assemblyWll : "49 CFR 393.108",
         tiedown: index,
         component: i,
@@ -181,7 +181,7 @@ export function assembleTiedown(tiedown: Tiedown, index = 0): AssembledTiedown {
     if (p.fits) continue;
     const binder = components[p.binder]!;
     const marking = binder.basis === "marked" ? `its marked WLL of ${formatLbKg(binder.wllLb)} holds` : "a binder's marked WLL holds";
-    const detail = `The binder is made for ${p.range[0].display} to ${p.range[1].display} chain, but the chain (component ${p.chainIndex + 1}) is ${p.chain.display}. The chain does not seat in the binder's hooks, and ${marking} only for the chain the binder is made for, so this tiedown is not rated and counts 0 toward the aggregate; use a binder made for ${p.chain.display} chain`;
+    const detail = `The binder is made for ${p.range[0].display} to ${p.range[1].display} chain, but the chain (component ${p.chainIndex + 1}) is ${p.chain.display}. The chain does not seat in the binder's hooks, and ${marking} only for the chain the binder is made for, so the tiedown is not rated and counts 0 toward the aggregate; use a binder made for ${p.chain.display} chain`;
     if (binder.basis !== "not-rated") {
       components[p.binder] = { ...binder, wllLb: 0, basis: "not-rated", error: { code: "BINDER_CHAIN_SIZE_OUT_OF_RANGE", message: detail, nearest: [] } };
     }

@@ -42,6 +42,13 @@ const API: Record<string, Access> = {
   "GET /api/v1/yards": ALL,
   "GET /api/v1/attachments/[id]": ALL,
   "POST /api/v1/securement-checks": ALL,
+  // Saved checks: every role may save, list and open them (every role may run checks); the
+  // handler lets the person who saved one, an owner or a planner change or delete it.
+  "GET /api/v1/securement-checks/saved": ALL,
+  "POST /api/v1/securement-checks/saved": ALL,
+  "GET /api/v1/securement-checks/saved/[id]": ALL,
+  "PUT /api/v1/securement-checks/saved/[id]": ALL,
+  "DELETE /api/v1/securement-checks/saved/[id]": ALL,
   "GET /api/v1/ratings": ALL,
   "GET /api/v1/tags/[code]": ALL,
   // CSV import: owners only ("stock.import").

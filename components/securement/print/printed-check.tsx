@@ -42,7 +42,8 @@ export function PrintedCheck({ check, printedAt }: { check: SavedCheckAnswer; pr
           {check.request.tiedowns.map((t, i) => (
             <li key={i}>
               <strong>{t.label ?? `tiedown ${i + 1}`}</strong>: holds {t.secures && t.secures !== "machine" ? `the ${t.secures}` : "the machine"}; {ATTACHMENT_LABELS[t.attachment].label.toLowerCase()};{" "}
-              {(check.result?.tiedowns[i]?.components ?? []).map((c) => c.description).join(" · ") || `${t.components.length} parts`}
+              {(check.result?.tiedowns[i]?.components ?? []).map((c) => (c.basis === "not-rated" ? `${c.description} (not rated)` : `${c.description} ${formatNumber(c.wllLb)} lb`)).join(" · ") ||
+                `${t.components.length} parts`}
             </li>
           ))}
         </ol>

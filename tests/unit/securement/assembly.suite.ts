@@ -71,7 +71,7 @@ describe("binder chain-size range: outside it the tiedown is not rated (common p
     expect(out).toMatchObject({ wllLb: 0, rated: false, limitedBy: "binder", limitedByIndex: 1 });
     expect(out.findings).toEqual([expect.objectContaining({ code: "BINDER_CHAIN_SIZE_OUT_OF_RANGE", severity: "fail", tiedown: 0, component: 1, path: "tiedowns.0.components.1.chainSizeRange" })]);
     expect(out.findings[0]!.message).toBe(
-      'Tiedown "front left", component 2 (binder): The binder is made for 5/16 in to 3/8 in chain, but the chain (component 1) is 1/2 in. The chain does not seat in the binder\'s hooks, and its marked WLL of 5,400 lb (2,449.4 kg) holds only for the chain the binder is made for, so this tiedown is not rated and counts 0 toward the aggregate; use a binder made for 1/2 in chain',
+      'Tiedown "front left", component 2 (binder): The binder is made for 5/16 in to 3/8 in chain, but the chain (component 1) is 1/2 in. The chain does not seat in the binder\'s hooks, and its marked WLL of 5,400 lb (2,449.4 kg) holds only for the chain the binder is made for, so the tiedown is not rated and counts 0 toward the aggregate; use a binder made for 1/2 in chain',
     );
     expect(out.findings[0]!.source).toMatch(/^49 CFR 393\.108\(b\).*common practice$/);
     expect(out.components[1]).toMatchObject({ basis: "not-rated", wllLb: 0, error: { code: "BINDER_CHAIN_SIZE_OUT_OF_RANGE" } });

@@ -32,7 +32,9 @@ export default async function PrintCheckPage({ params }: { params: Promise<{ id:
 const PRINT_CSS = `
 @page { margin: 0.5in; }
 @media print {
+  html { font-size: 12px; }
   html, body { background: #fff; }
+  .check-print section[aria-labelledby="each-heading"] > ul { display: grid; grid-template-columns: 1fr 1fr; gap: 6px; }
   .check-print__toolbar { display: none !important; }
   .check-print { padding: 0; font-size: 11pt; }
   .check-print li, .check-print dl, .check-print section > div { break-inside: avoid; }
