@@ -25,9 +25,9 @@ export function SavedChecks({ openId, onOpen }: { openId: string | null; onOpen:
   const lines: SavedCheckLine[] = list.data ?? [];
 
   return (
-    <details className="rounded-xl border-2 border-ink bg-white">
+    <details className="group rounded-xl border-2 border-ink bg-white">
       <summary className="flex min-h-tap cursor-pointer items-center gap-3 p-3 text-lg font-bold">
-        <span aria-hidden="true">▸</span>
+        <span aria-hidden="true" className="group-open:rotate-90">▸</span>
         Saved checks{list.data ? ` (${lines.length})` : ""}
       </summary>
       <div className="flex flex-col gap-2 border-t-2 border-ink-soft p-3" aria-live="polite">
