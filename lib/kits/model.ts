@@ -62,6 +62,34 @@ export type Coupling = "ball" | "pintle" | "gooseneck" | "fifth-wheel";
 export const COUPLINGS = ["ball", "pintle", "gooseneck", "fifth-wheel"] as const satisfies readonly Coupling[];
 
 /**
+ * @example
+ * COUPLING_LABELS["fifth-wheel"]; // "Fifth wheel"
+ */
+export const COUPLING_LABELS: Record<Coupling, string> = {
+  ball: "Ball",
+  pintle: "Pintle hook",
+  gooseneck: "Gooseneck ball",
+  "fifth-wheel": "Fifth wheel",
+};
+
+/**
+ * The usual coupling of each trailer type, used when none is given (common practice, from
+ * memory: compact-equipment tilt decks come with a ball or pintle; a lowboy's detachable
+ * neck sits on a fifth wheel).
+ *
+ * @example
+ * DEFAULT_COUPLING["tag-along"]; // "ball"
+ */
+export const DEFAULT_COUPLING: Record<TrailerType, Coupling> = {
+  "tilt-deck": "pintle",
+  "split-tilt-deck": "pintle",
+  "tag-along": "ball",
+  gooseneck: "gooseneck",
+  lowboy: "fifth-wheel",
+  other: "ball",
+};
+
+/**
  * Where an anchor point sits across the deck.
  *
  * @example
@@ -69,6 +97,12 @@ export const COUPLINGS = ["ball", "pintle", "gooseneck", "fifth-wheel"] as const
  */
 export type Side = "left" | "right" | "centre";
 export const SIDES = ["left", "right", "centre"] as const satisfies readonly Side[];
+
+/**
+ * @example
+ * SIDE_LABELS.centre; // "Centre"
+ */
+export const SIDE_LABELS: Record<Side, string> = { left: "Left", right: "Right", centre: "Centre" };
 
 /**
  * A tie-down point on the machine, measured from the machine's front.
@@ -107,6 +141,19 @@ export interface Machine {
 
 /** An anchor point's standing, like an item's: it can be taken out of use and retired. */
 export type AnchorStatus = "in_service" | "tagged_out" | "retired";
+export const ANCHOR_STATUSES = ["in_service", "tagged_out", "retired"] as const satisfies readonly AnchorStatus[];
+
+/**
+ * An anchor point's standing in words (never the colour alone).
+ *
+ * @example
+ * ANCHOR_STATUS_LABELS.tagged_out; // "Out of use"
+ */
+export const ANCHOR_STATUS_LABELS: Record<AnchorStatus, string> = {
+  in_service: "In use",
+  tagged_out: "Out of use",
+  retired: "Retired",
+};
 
 /**
  * A rated anchor point on a trailer deck (D-ring, stake pocket, rub-rail pocket), measured
@@ -124,6 +171,7 @@ export interface AnchorPoint {
   readonly wllLb: number;
   readonly status: AnchorStatus;
   readonly nextInspectionDue: string | null;
+  readonly lastInspectedOn?: string | null;
   readonly usable: Usability;
 }
 
@@ -211,6 +259,19 @@ export interface KitTiedown {
  */
 export const KIT_STATES = ["draft", "ready", "loaded", "returned"] as const;
 export type KitState = (typeof KIT_STATES)[number];
+
+/**
+ * A kit's state in words.
+ *
+ * @example
+ * KIT_STATE_LABELS.ready; // "Ready to load"
+ */
+export const KIT_STATE_LABELS: Record<KitState, string> = {
+  draft: "Draft",
+  ready: "Ready to load",
+  loaded: "Loaded",
+  returned: "Returned",
+};
 
 /**
  * A kit with everything it refers to, as read for one date.

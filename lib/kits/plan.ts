@@ -44,6 +44,18 @@ function holdsKnownPart(kit: Kit, tiedown: KitTiedown): boolean {
 }
 
 /**
+ * The kit's tiedowns that go into its check request, in the request's order: index i of
+ * `checkSecurement(kitCheckRequest(kit)).tiedowns` is the i-th of these. A tiedown for an
+ * accessory the machine no longer lists is left out (see {@link kitBlockers}).
+ *
+ * @example
+ * checkedTiedowns(kit).map((t) => t.id);
+ */
+export function checkedTiedowns(kit: Kit): KitTiedown[] {
+  return kit.tiedowns.filter((t) => holdsKnownPart(kit, t));
+}
+
+/**
  * The securement check request for a kit: the machine is the cargo (kind "machine", its
  * weight, length, accessories and articulation), and each tiedown lists its items in order
  * followed by its anchor point, whose WLL caps the tiedown (49 CFR 393.108(a)). Items are
@@ -67,7 +79,7 @@ export function kitCheckRequest(kit: Kit): SecurementCheckRequest {
       articulationRestrained: machine.articulated ? kit.articulationRestrained : undefined,
       accessories: [...machine.accessories],
     },
-    tiedowns: kit.tiedowns.filter((t) => holdsKnownPart(kit, t)).map((t) => {
+    tiedowns: checkedTiedowns(kit).map((t) => {
       const anchor = anchorOf(kit, t);
       return {
         label: t.label,
