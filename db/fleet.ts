@@ -259,3 +259,15 @@ export async function listAnchorEvents(organisationId: string, anchorPointId: st
     .select("e.id", "e.type", "e.outcome", "e.note", "e.changes", "e.at", "u.name as actorName");
   return rows.map((r) => ({ ...r, id: Number(r.id) }));
 }
+
+/** The latest history entry of each anchor point of a trailer (what took it out of use, and when). */
+export async function latestAnchorEvents(organisationId: string, trailerId: string): Promise<Map<string, { type: string; note: string | null; at: Date; actorName: string | null }>> {
+  const rows = await db("anchor_point_events as e")
+    .join("anchor_points as a", "a.id", "e.anchor_point_id")
+    .leftJoin("users as u", "u.id", "e.actor_id")
+    .where({ "e.organisation_id": organisationId, "a.trailer_id": trailerId })
+    .distinctOn("e.anchor_point_id")
+    .orderBy([{ column: "e.anchor_point_id" }, { column: "e.id", order: "desc" }])
+    .select("e.anchor_point_id as anchorPointId", "e.type", "e.note", "e.at", "u.name as actorName");
+  return new Map(rows.map((r) => [r.anchorPointId, { type: r.type, note: r.note, at: r.at, actorName: r.actorName }]));
+}

@@ -6,7 +6,7 @@
  *
  * @module
  */
-import { KG_PER_LB, MM_PER_IN } from "@/lib/securement";
+import { formatNumber, KG_PER_LB, MM_PER_IN } from "@/lib/securement";
 import type { LengthInputUnit, WeightInputUnit } from "./quantities";
 
 /**
@@ -108,4 +108,18 @@ export function editableLength(mm: number, system: UnitSystem): { value: number;
     return inches % 12 === 0 && inches > 0 ? { value: inches / 12, unit: "ft" } : { value: inches, unit: "in" };
   }
   return { value: Math.round((mm / MM_PER_IN) * 100) / 100, unit: "in" };
+}
+
+/**
+ * A figure of the securement check, which comes with its own kilogram twin (both to one
+ * decimal, as the engine rounds them: lib/securement/format.ts), in the preferred order.
+ *
+ * @example
+ * formatCheckWeight(4900.5, 2222.9, "us");     // "4,900.5 lb (2,222.9 kg)"
+ * formatCheckWeight(4900.5, 2222.9, "metric"); // "2,222.9 kg (4,900.5 lb)"
+ */
+export function formatCheckWeight(lb: number, kg: number, system: UnitSystem): string {
+  const us = `${formatNumber(lb)} lb`;
+  const metric = `${formatNumber(kg)} kg`;
+  return system === "us" ? `${us} (${metric})` : `${metric} (${us})`;
 }

@@ -8,6 +8,9 @@ import { formAction } from "@/lib/auth/action";
 import { createApiToken, revokeToken } from "@/lib/auth/api-tokens";
 import { flagField, nameField, roleField } from "@/lib/auth/schemas";
 import { ITEM_KINDS, KIND_LABELS } from "@/lib/stock/labels";
+import { UNIT_SYSTEM_LABELS } from "@/lib/kits/display";
+import { setUnitsPreference } from "@/lib/kits/fleet-service";
+import { unitsSchema } from "@/lib/kits/schemas";
 
 export const saveOrganisationAction = formAction(
   "settings.manage",
@@ -65,4 +68,11 @@ export const saveIntervalsAction = formAction("settings.manage", intervalsForm, 
   });
   revalidatePath("/settings");
   return { ok: true, message: "Inspection intervals saved. They apply from the next inspection of each item." };
+});
+
+/** Which system figures are shown in first (the other is always shown beside it). */
+export const saveUnitsAction = formAction("settings.manage", unitsSchema, async ({ units }, principal) => {
+  await setUnitsPreference(principal, units);
+  revalidatePath("/", "layout");
+  return { ok: true, message: `Figures are now shown in ${UNIT_SYSTEM_LABELS[units]} first.` };
 });

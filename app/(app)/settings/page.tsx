@@ -1,5 +1,7 @@
 import type { Metadata } from "next";
 import { CreateTokenForm, IntervalsForm, OrganisationForm, RevokeTokenButton } from "@/components/settings/settings-forms";
+import { UnitsForm } from "@/components/settings/units-form";
+import { getFleetSettings } from "@/db/fleet";
 import { listApiTokens } from "@/db/api-tokens";
 import { getOrganisation, getOrganisationSettings } from "@/db/people";
 import { intervalsWithDefaults } from "@/lib/stock/intervals";
@@ -10,15 +12,17 @@ export const metadata: Metadata = { title: "Settings" };
 
 export default async function SettingsPage() {
   const principal = await requirePage("settings.manage");
-  const [organisation, tokens, settings] = await Promise.all([
+  const [organisation, tokens, settings, fleet] = await Promise.all([
     getOrganisation(principal.organisationId),
     listApiTokens(principal.organisationId),
     getOrganisationSettings(principal.organisationId),
+    getFleetSettings(principal.organisationId),
   ]);
   return (
     <div className="flex max-w-3xl flex-col gap-6">
       <h1 className="text-3xl font-bold">Settings</h1>
       <OrganisationForm name={organisation!.name} publicTagView={organisation!.publicTagView} />
+      <UnitsForm units={fleet.units} />
       <IntervalsForm intervals={intervalsWithDefaults(settings?.inspectionIntervalDays)} />
       <section aria-labelledby="tokens-heading" className="flex flex-col gap-3 rounded-xl border-2 border-ink-soft p-4">
         <h2 id="tokens-heading" className="text-xl font-bold">API tokens</h2>
