@@ -28,6 +28,10 @@ const text = (what: string, max: number) =>
     .min(1, `Enter the ${what}.`)
     .max(max, `Keep the ${what} under ${max + 1} characters.`);
 
+/** A few words of reason or note: one message whether it is empty or too short. */
+const words = (message: string) =>
+  z.string({ error: message }).trim().min(3, message).max(2000, "Keep it under 2,000 characters.");
+
 const optionalText = (what: string, max: number) =>
   z.preprocess((v) => (typeof v === "string" && v.trim() === "" ? null : v), z.string().trim().max(max, `Keep the ${what} under ${max + 1} characters.`).nullish());
 
@@ -206,9 +210,9 @@ export const anchorEventSchema = z.discriminatedUnion(
       note: optionalText("note", 2000),
       nextInspectionDue: z.preprocess((v) => (v === "" ? null : v), dateField("next inspection date").nullish()),
     }),
-    z.strictObject({ type: z.literal("tag_out"), note: text("reason it is out of use", 2000).min(3, "Say what is wrong.") }),
-    z.strictObject({ type: z.literal("return_to_service"), reason: text("reason", 2000).min(3, "Give the reason in a few words.") }),
-    z.strictObject({ type: z.literal("retired"), reason: text("reason", 2000).min(3, "Give the reason in a few words.") }),
+    z.strictObject({ type: z.literal("tag_out"), note: words("Say what is wrong.") }),
+    z.strictObject({ type: z.literal("return_to_service"), reason: words("Give the reason in a few words.") }),
+    z.strictObject({ type: z.literal("retired"), reason: words("Give the reason in a few words.") }),
   ],
   { error: "type is one of inspection, tag_out, return_to_service, retired." },
 );
@@ -305,7 +309,7 @@ export const tiedownItemsSchema = z.strictObject({ itemIds: itemIds.refine((ids)
  */
 export const cornersSchema = z.strictObject({ fromTiedownId: uuid("fromTiedownId") });
 
-const note = (what: string) => text(what, 2000).min(3, `Say in a few words ${what === "damage" ? "what is damaged" : "what happened"}.`);
+const note = (what: "damage" | "loss") => words(`Say in a few words ${what === "damage" ? "what is damaged" : "what happened"}.`);
 
 /**
  * A step in a kit's life. `scannedItemIds` lists what the yard hand scanned (loading: what
