@@ -64,7 +64,7 @@ export function AnchorActions({ anchorId, label, status, may }: { anchorId: stri
     return (
       <div className="flex flex-wrap gap-2">
         {actions.map((a) => (
-          <button key={a} type="button" className={buttonClass(a === "tag_out" ? "danger" : "secondary", "px-3 text-base")} onClick={() => setOpen(a)}>
+          <button key={a} type="button" className={buttonClass("secondary", "px-3 text-base")} onClick={() => setOpen(a)}>
             {WORDS[a].button}
           </button>
         ))}

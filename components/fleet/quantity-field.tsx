@@ -50,7 +50,7 @@ export function QuantityField({
           aria-label={`${label}: unit`}
           value={value.unit}
           onChange={(e) => onChange({ ...value, unit: e.target.value })}
-          className="min-h-tap rounded-lg border-2 border-ink-soft bg-white px-2 text-lg"
+          className="min-h-tap w-20 shrink-0 rounded-lg border-2 border-ink-soft bg-white px-2 text-lg"
         >
           {units.map((u) => (
             <option key={u} value={u}>

@@ -1,5 +1,5 @@
 import Link from "next/link";
-import { buttonClass } from "@/components/ui/button";
+import { buttonClass } from "@/components/ui/button-class";
 import type { KitListEntry } from "@/lib/kits/answers";
 import { CopyKitForm } from "./kit-actions";
 import { KitPassBadge, KitStateBadge } from "./state-badge";

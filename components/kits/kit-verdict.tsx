@@ -2,6 +2,7 @@
 import { CautionNote } from "@/components/securement/caution-note";
 import { FindingList } from "@/components/securement/check/finding-list";
 import { SeverityIcon } from "@/components/securement/severity";
+import { writtenDate } from "@/lib/kits/dates";
 import { formatCheckWeight, type UnitSystem } from "@/lib/kits/display";
 import type { KitJson } from "@/lib/kits/answers";
 import { useKit } from "./use-kit";
@@ -12,13 +13,30 @@ function plural(n: number, one: string, many = `${one}s`) {
 
 /** Why the kit does or does not pass, in one sentence a planner can act on. */
 function headline(kit: KitJson): string {
-  if (kit.pass) return `Passes: meets the published minimums, and every part may be used on ${kit.date}.`;
+  if (kit.pass) return `Meets the published minimums, and every part may be used on ${writtenDate(kit.date)}.`;
   const fails = kit.check.findings.filter((f) => f.severity === "fail").length;
   const parts = [
     fails ? plural(fails, "finding does not meet the rule", "findings do not meet the rule") : "",
-    kit.blockers.length ? `${plural(kit.blockers.length, "part")} may not be used on ${kit.date}` : "",
+    kit.blockers.length ? `${plural(kit.blockers.length, "part")} may not be used on ${writtenDate(kit.date)}` : "",
   ].filter(Boolean);
-  return `Does not pass: ${parts.join("; ")}.`;
+  return `${parts.join("; ")}.`.replace(/^./, (c) => c.toUpperCase());
+}
+
+/** What stops the kit, most serious first: the rule's findings, then gear out of use that day. */
+function Reasons({ kit }: { kit: KitJson }) {
+  const reasons = [...kit.check.findings.filter((f) => f.severity === "fail").map((f) => `${f.message} (${f.source})`), ...kit.blockers.map((b) => b.message)];
+  const shown = reasons.slice(0, 4);
+  return (
+    <ul className="flex flex-col gap-1 text-lg font-bold text-stop" data-testid="kit-reasons">
+      {shown.map((r, i) => (
+        <li key={i} className="flex gap-2">
+          <span aria-hidden="true">✕</span>
+          <span>{r}</span>
+        </li>
+      ))}
+      {reasons.length > shown.length && <li>and {reasons.length - shown.length} more below.</li>}
+    </ul>
+  );
 }
 
 /** The live verdict at the top of the builder: pass or not in words, and the two figures that decide it. */
@@ -44,6 +62,7 @@ export function KitVerdictSummary({ kitId, units }: { kitId: string; units: Unit
         <span>{kit.pass ? "Passes the check" : "Does not pass"}</span>
       </h2>
       <p className="text-lg text-ink">{headline(kit)}</p>
+      {!kit.pass && <Reasons kit={kit} />}
       <ul className="flex flex-col gap-1 text-lg text-ink">
         <li className={aggregateMet ? "" : "font-bold text-stop"}>
           <span aria-hidden="true">{aggregateMet ? "✓ " : "✕ "}</span>
@@ -51,7 +70,7 @@ export function KitVerdictSummary({ kitId, units }: { kitId: string; units: Unit
         </li>
         <li className={countMet ? "" : "font-bold text-stop"}>
           <span aria-hidden="true">{countMet ? "✓ " : "✕ "}</span>
-          {c.tiedownsCounted} of {c.minimumTiedowns} tiedowns on the machine ({c.ruleSource})
+          {plural(c.tiedownsCounted, "tiedown")} on the machine, {c.minimumTiedowns} needed ({c.ruleSource})
         </li>
       </ul>
       <a href="#verdict-details" className="flex min-h-tap items-center text-lg font-bold underline">
@@ -85,11 +104,11 @@ export function KitVerdictDetails({ kitId, units }: { kitId: string; units: Unit
       <dl className="grid grid-cols-1 gap-2 sm:grid-cols-2">
         <Figure label="Aggregate WLL" value={formatCheckWeight(c.aggregateWllLb, c.aggregateWllKg, units)} sub="Each tiedown counts half its WLL, or all of it when it runs across (49 CFR 393.106(d))" />
         <Figure label="Required" value={formatCheckWeight(c.requiredAggregateWllLb, c.requiredAggregateWllKg, units)} sub={`Half of the machine's ${formatCheckWeight(c.cargo.weightLb, c.cargo.weightKg, units)}`} />
-        <Figure label="Tiedowns on the machine" value={`${c.tiedownsCounted} of ${c.minimumTiedowns} needed`} sub={`${c.rule} (${c.ruleSource})`} />
+        <Figure label="Tiedowns on the machine" value={`${c.tiedownsCounted}, ${c.minimumTiedowns} needed`} sub={`${c.rule} (${c.ruleSource})`} />
       </dl>
 
       <section aria-labelledby="blockers-heading" className="flex flex-col gap-2">
-        <h3 id="blockers-heading" className="text-xl font-bold">Gear that may not be used on {kit.date} ({kit.blockers.length})</h3>
+        <h3 id="blockers-heading" className="text-xl font-bold">Gear that may not be used on {writtenDate(kit.date)} ({kit.blockers.length})</h3>
         {kit.blockers.length === 0 ? (
           <p className="text-lg">None: every item and anchor point may be used that day.</p>
         ) : (

@@ -112,10 +112,10 @@ export function LoadScreen({ kit }: { kit: KitJson }) {
 
       <section aria-labelledby="expected-heading" className="flex flex-col gap-2">
         <h2 id="expected-heading" className="text-2xl font-bold">
-          {mode === "load" ? "Goes on the trailer" : "Came back"} ({expected.length})
+          {mode === "load" ? "Goes on the trailer" : "Comes back"} ({expected.length}): still to scan first
         </h2>
         <ul className="flex flex-col gap-2">
-          {expected.map((i) => {
+          {[...expected.filter((i) => !scanned.has(i.id)), ...expected.filter((i) => scanned.has(i.id))].map((i) => {
             const done = scanned.has(i.id);
             const isLost = i.id in lost;
             const isDamaged = i.id in damaged;
@@ -151,7 +151,7 @@ export function LoadScreen({ kit }: { kit: KitJson }) {
         </ul>
       </section>
 
-      <div role="alert" aria-live="assertive">
+      <div role="alert" aria-live="assertive" data-testid="load-problem">
         {problem && <p className="rounded-lg border-2 border-stop bg-stop-bg p-3 text-lg font-bold text-stop">{problem}</p>}
       </div>
       {left.length > 0 && <p className="text-lg">Still to scan: {left.map((i) => i.tagCode).join(", ")}.</p>}

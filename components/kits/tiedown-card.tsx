@@ -21,32 +21,31 @@ const PART_WORDS: Record<string, string> = {
   anchor: "anchor point",
 };
 
-/** What the check says of this tiedown: its WLL, what it adds, and the part that limits it. */
+/** What the check says of this tiedown: its WLL and the part that limits it, and what it adds. */
 function ResultLine({ t, units }: { t: Tiedown; units: UnitSystem }) {
   const r = t.result;
   if (!r) return <p className="text-lg font-bold text-stop">✕ Not counted: it holds a part the machine no longer lists.</p>;
   if (!r.components.length) return null;
   const limit = r.limitedBy ? `${PART_WORDS[r.limitedBy] ?? r.limitedBy}${r.limitedByLabel ? ` ${r.limitedByLabel.replace(/^anchor point /, "")}` : ""}` : null;
   return (
-    <dl className="grid grid-cols-2 gap-2 rounded-lg bg-idle-bg p-2 text-base">
-      <div>
-        <dt className="text-sm font-bold text-ink-soft">Tiedown WLL</dt>
-        <dd className={`text-lg font-bold ${r.rated ? "" : "text-stop"}`}>{r.rated ? formatCheckWeight(r.wllLb, r.wllKg, units) : "Cannot be rated: counts 0"}</dd>
-      </div>
-      <div>
-        <dt className="text-sm font-bold text-ink-soft">Counts toward the aggregate</dt>
-        <dd className="text-lg font-bold">{formatCheckWeight(r.countedWllLb, r.countedWllKg, units)}</dd>
-      </div>
-      {limit && (
-        <div className="col-span-2">
-          <dt className="text-sm font-bold text-ink-soft">Limited by</dt>
-          <dd className="text-lg font-bold" data-testid="limited-by">
-            the {limit}
-            {!r.countsTowardMinimum && <span className="block text-base font-normal">Not counted toward the minimum number, which counts tiedowns on the machine itself.</span>}
-          </dd>
-        </div>
+    <div className="flex flex-col gap-1 rounded-lg bg-idle-bg p-2 text-lg">
+      {r.rated ? (
+        <p>
+          <span className="font-bold">Tiedown WLL {formatCheckWeight(r.wllLb, r.wllKg, units)}</span>
+          {limit && (
+            <>
+              , limited by <span className="font-bold" data-testid="limited-by">the {limit}</span>
+            </>
+          )}
+        </p>
+      ) : (
+        <p className="font-bold text-stop">✕ A part cannot be rated{limit ? ` (the ${limit})` : ""}: this tiedown counts 0.</p>
       )}
-    </dl>
+      <p>
+        Counts {formatCheckWeight(r.countedWllLb, r.countedWllKg, units)} toward the aggregate.
+        {!r.countsTowardMinimum && " Not counted toward the minimum number, which counts tiedowns on the machine itself."}
+      </p>
+    </div>
   );
 }
 
@@ -120,16 +119,17 @@ export function TiedownCard({
           {t.machinePoint && t.machinePoint !== t.label ? ` at its ${t.machinePoint} point` : ""}
         </p>
       </div>
-      <p className="text-lg">
-        <span className="font-bold">From anchor point {anchor?.label ?? "?"}</span>
+      <div className="text-lg">
+        <p className="flex flex-wrap items-center gap-2">
+          <span className="font-bold">From anchor point {anchor?.label ?? "?"}</span>
+          {anchor && <UsableBadge ok={anchor.usable.ok} label={anchor.usable.ok ? "In use" : "Out of use"} />}
+        </p>
         {anchor && (
-          <>
-            {" "}
-            ({SIDE_LABELS[anchor.side].toLowerCase()}, {formatLength(anchor.position.value, units)} from the deck&apos;s front, WLL {formatWeight(anchor.wll.value, units)}){" "}
-            <UsableBadge ok={anchor.usable.ok} label={anchor.usable.ok ? "In use" : "Out of use"} />
-          </>
+          <p>
+            {SIDE_LABELS[anchor.side]} side · {formatLength(anchor.position.value, units)} from the deck&apos;s front · WLL {formatWeight(anchor.wll.value, units)}
+          </p>
         )}
-      </p>
+      </div>
       {anchor && !anchor.usable.ok && <p className="text-base font-bold text-stop">{anchor.usable.reasons.map((r) => r.message).join(" ")}</p>}
       <p className="text-lg">
         {attachment.label}: {attachment.counts}.

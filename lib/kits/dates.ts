@@ -55,6 +55,16 @@ export function daysBetween(from: string, to: string): number {
 }
 
 /**
+ * A date written out for people: weekday, day, month, year.
+ *
+ * @example
+ * writtenDate("2026-12-03"); // "Thu 3 Dec 2026"
+ */
+export function writtenDate(date: string): string {
+  return new Date(`${date}T00:00:00Z`).toLocaleDateString("en-GB", { timeZone: "UTC", weekday: "short", day: "numeric", month: "short", year: "numeric" }).replace(/,/g, "");
+}
+
+/**
  * A date as a planner says it, relative to today: "Today", "Tomorrow", "Yesterday", else
  * the weekday; always followed by the date itself.
  *
@@ -63,8 +73,7 @@ export function daysBetween(from: string, to: string): number {
  * dayLabel("2026-12-09", "2026-12-02"); // "Wed 9 Dec 2026"
  */
 export function dayLabel(date: string, today: string): string {
-  const d = new Date(`${date}T00:00:00Z`);
-  const written = d.toLocaleDateString("en-GB", { timeZone: "UTC", weekday: "short", day: "numeric", month: "short", year: "numeric" }).replace(/,/g, "");
+  const written = writtenDate(date);
   const offset = daysBetween(today, date);
   const word = offset === 0 ? "Today" : offset === 1 ? "Tomorrow" : offset === -1 ? "Yesterday" : null;
   return word ? `${word}, ${written}` : written;

@@ -1,7 +1,7 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { KitCard } from "@/components/kits/kit-card";
-import { buttonClass } from "@/components/ui/button";
+import { buttonClass } from "@/components/ui/button-class";
 import { getFleetSettings } from "@/db/fleet";
 import { can } from "@/lib/auth/roles";
 import { requirePage } from "@/lib/auth/session";

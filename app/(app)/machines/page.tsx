@@ -1,7 +1,7 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { MachineClassForm } from "@/components/fleet/machine-class-form";
-import { buttonClass } from "@/components/ui/button";
+import { buttonClass } from "@/components/ui/button-class";
 import { getFleetSettings, listMachineClasses } from "@/db/fleet";
 import { can } from "@/lib/auth/roles";
 import { requirePage } from "@/lib/auth/session";

@@ -29,7 +29,7 @@ export default async function NewKitPage({ searchParams }: { searchParams: Promi
       ) : (
         <NewKitForm
           date={asked && isIsoDate(asked) ? asked : addDays(today, 1)}
-          machines={machines.map((m) => ({ id: m.id, label: `${m.name} (${formatWeight(m.weightLb, units)})`, articulated: m.articulated }))}
+          machines={machines.map((m) => ({ id: m.id, label: `${m.name} (${formatWeight(m.weightLb, units).replace(/ \(.*\)$/, "")})`, articulated: m.articulated }))}
           trailers={trailers.map((t) => ({ id: t.id, label: `${t.name} (${t.anchorPoints.filter((a) => a.usable.ok).length} anchor points in use)` }))}
         />
       )}
