@@ -1,5 +1,8 @@
 import Link from "next/link";
 import { countInspectionsDue, countItemsByStatus } from "@/db/items";
+import { getFleetSettings } from "@/db/fleet";
+import { addDays, dayIn } from "@/lib/kits/dates";
+import { listKitEntries } from "@/lib/kits/kit-service";
 import { listOpenInvites } from "@/db/people";
 import { can } from "@/lib/auth/roles";
 import { requirePage } from "@/lib/auth/session";
@@ -11,6 +14,9 @@ export default async function TodayPage() {
     countInspectionsDue(principal.organisationId),
   ]);
   const invites = can(principal, "people.manage") ? await listOpenInvites(principal.organisationId) : [];
+  const tomorrow = addDays(dayIn((await getFleetSettings(principal.organisationId)).timeZone), 1);
+  const kits = can(principal, "fleet.view") ? await listKitEntries(principal.organisationId, tomorrow, tomorrow) : [];
+  const notPassing = kits.filter((k) => !k.pass).length;
   const tiles = [
     { label: "In service", value: byStatus.in_service ?? 0, tone: "border-ok bg-ok-bg text-ok", href: "/stock?status=in_service" },
     { label: "Tagged out", value: byStatus.tagged_out ?? 0, tone: "border-stop bg-stop-bg text-stop", href: "/stock?status=tagged_out" },
@@ -34,6 +40,15 @@ export default async function TodayPage() {
         </ul>
         <Link href="/stock" className="text-lg font-bold underline">Open the stock list</Link>
       </section>
+      {can(principal, "fleet.view") && (
+        <section aria-labelledby="kits-heading" className="flex flex-col gap-2">
+          <h2 id="kits-heading" className="text-xl font-bold">Kits for tomorrow</h2>
+          <p className="text-lg">
+            {kits.length === 0 ? "None planned yet." : `${kits.length} planned${notPassing ? `; ${notPassing} ${notPassing === 1 ? "does" : "do"} not pass yet` : ", every one passes"}.`}{" "}
+            <Link href="/kits" className="font-bold underline">Open the kits</Link>
+          </p>
+        </section>
+      )}
       {can(principal, "people.manage") && (
         <section aria-labelledby="team-heading" className="flex flex-col gap-2">
           <h2 id="team-heading" className="text-xl font-bold">Team</h2>

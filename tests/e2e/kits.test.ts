@@ -152,6 +152,27 @@ describe("the planner's screens, on a phone", () => {
   });
 });
 
+describe("the units an owner chooses", () => {
+  it("show every figure in metric first, the US figure beside it", async () => {
+    const owner = await openBrowser({ phone: true });
+    try {
+      const p = await owner.context.newPage();
+      await signIn(p, "olive");
+      await p.goto(`${BASE_URL}/settings`);
+      const form = p.locator("form").filter({ has: p.getByRole("heading", { name: "Units shown" }) });
+      await form.locator("label", { has: p.getByRole("radio", { name: /Metric/ }) }).click();
+      await form.getByRole("button", { name: "Save the units" }).click();
+      await expect.poll(() => form.getByRole("status").textContent()).toContain("Metric (kg, m) first");
+      await p.goto(`${BASE_URL}/kits/${passing.id}`);
+      expect(await p.locator("header").filter({ hasText: "Hollins driveway" }).textContent()).toContain("3,674 kg (8,100 lb) · 4.90 m (16 ft 1 in) long");
+      await shoot(p, "kit-pass-metric-phone");
+    } finally {
+      await testDb("organisations").where({ id: orgId }).update({ units: "us" });
+      await owner.close();
+    }
+  });
+});
+
 describe("adding an item by scanning its tag", () => {
   it("puts the chain the camera reads into the tiedown, and the verdict follows", async () => {
     const stock = await testDb("items")

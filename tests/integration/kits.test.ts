@@ -311,6 +311,31 @@ describe("the life of a kit", () => {
   }, 60_000);
 });
 
+describe("an articulated machine", () => {
+  it("records the articulation lock in a draft only, and the check follows it", async () => {
+    const loader = await makeMachine(planner, { class: "wheel-loader", articulated: true, weight: { value: 11000, unit: "lb" } });
+    const kit = await makeKit(planner, { date: day(63), machineId: loader.id, trailerId: trailer.id });
+    let answer: any;
+    for (const [label, anchor] of corners) {
+      const res = await planner.post(`/api/v1/kits/${kit.id}/tiedowns`, { label, anchorPointId: anchorId(trailer, anchor), attachment: "direct", itemIds: [(await makeChain(planner)).id, (await makeBinder(planner)).id] });
+      answer = res.json;
+    }
+    const codes = (k: any) => k.check.findings.filter((f: any) => f.severity === "fail").map((f: any) => f.code);
+    expect(codes(answer)).toEqual(["ARTICULATION_NOT_RESTRAINED"]);
+    const locked = await planner.request("PATCH", `/api/v1/kits/${kit.id}`, { articulationRestrained: true });
+    expect(locked.status).toBe(200);
+    expect(codes(locked.json)).toEqual([]);
+    expect(locked.json.pass).toBe(true);
+    expect((await planner.post(`/api/v1/kits/${kit.id}/transitions`, { to: "ready" })).status).toBe(200);
+    const late = await planner.request("PATCH", `/api/v1/kits/${kit.id}`, { articulationRestrained: false });
+    expect(late.status).toBe(409);
+    expect(late.json.code).toBe("KIT_NOT_DRAFT");
+    const words = await planner.request("PATCH", `/api/v1/kits/${kit.id}`, { site: "Gate 2, north entrance" });
+    expect(words.json.site).toBe("Gate 2, north entrance");
+    expect((await hand.request("PATCH", `/api/v1/kits/${kit.id}`, { site: "x" })).status).toBe(403);
+  }, 60_000);
+});
+
 describe("quick building", () => {
   it("suggests binders that take the chain, and fills the other three corners with the same sorts of items", async () => {
     const kit = await makeKit(planner, { date: day(70), machineId: machine.id, trailerId: trailer.id });
