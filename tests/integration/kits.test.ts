@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { checkSecurement, type SecurementCheckRequest } from "@/lib/securement";
-import { addMember, Client, newOrganisation } from "../support/http";
+import { addMember, Client, latestMailTo, newOrganisation } from "../support/http";
 import { countRows, testDb } from "../support/db";
 import { anchorId, day, machineBody, makeBinder, makeChain, makeKit, makeMachine, makeTrailer } from "../support/fleet";
 
@@ -13,6 +13,7 @@ let planner: Client;
 let planner2: Client;
 let hand: Client;
 let organisationId: string;
+let ownerEmail: string;
 let machine: any;
 let trailer: any;
 
@@ -20,6 +21,7 @@ beforeAll(async () => {
   const org = await newOrganisation("Kit Builders");
   owner = org.owner;
   organisationId = org.organisationId;
+  ownerEmail = org.email;
   planner = (await addMember(owner, "planner")).client;
   planner2 = (await addMember(owner, "planner")).client;
   hand = (await addMember(owner, "yard_hand")).client;
@@ -201,6 +203,24 @@ describe("two planners, one chain, one date", () => {
     }
     expect(outcomes).toHaveLength(25);
   }, 120_000);
+
+  it("is refused by the database itself, whatever code writes the second row", async () => {
+    const date = day(51);
+    const kitA = await makeKit(planner, { date, machineId: machine.id, trailerId: trailer.id });
+    const kitB = await makeKit(planner, { date, machineId: machine.id, trailerId: trailer.id });
+    const chain = await makeChain(planner);
+    const a = await planner.post(`/api/v1/kits/${kitA.id}/tiedowns`, { anchorPointId: anchorId(trailer, "FL"), attachment: "direct", itemIds: [chain.id] });
+    const b = await planner.post(`/api/v1/kits/${kitB.id}/tiedowns`, { anchorPointId: anchorId(trailer, "FL"), attachment: "direct", itemIds: [] });
+    const tiedownB = b.json.tiedowns[0].id;
+    expect(a.status).toBe(201);
+    await expect(
+      testDb("kit_items").insert({ organisation_id: organisationId, kit_id: kitB.id, tiedown_id: tiedownB, item_id: chain.id, kit_date: date, position: 0 }),
+    ).rejects.toThrow(/kit_items_item_date/);
+    // Nor can a row claim another date than its kit's.
+    await expect(
+      testDb("kit_items").insert({ organisation_id: organisationId, kit_id: kitB.id, tiedown_id: tiedownB, item_id: chain.id, kit_date: day(52), position: 0 }),
+    ).rejects.toThrow(/foreign key/);
+  });
 });
 
 describe("the life of a kit", () => {
@@ -259,6 +279,7 @@ describe("the life of a kit", () => {
     expect(back.json.state).toBe("returned");
     expect((await testDb("items").where({ id: ids[0] }).first("status")).status).toBe("tagged_out");
     expect((await testDb("items").where({ id: ids[1] }).first("status")).status).toBe("in_service");
+    expect((await latestMailTo(ownerEmail)).subject).toMatch(/^Tagged out: Chain, grade 70, 3\/8 in \(/);
 
     // History: each step in every item's history, and the tag-out with its own audit row.
     const history = await planner.get(`/api/v1/items/${ids[0]}/events`);
