@@ -120,7 +120,7 @@ export function LoadScreen({ kit }: { kit: KitJson }) {
             const isLost = i.id in lost;
             const isDamaged = i.id in damaged;
             return (
-              <li key={i.id} className={`flex flex-col gap-2 rounded-lg border-2 p-2 ${done ? "border-ok bg-ok-bg" : isLost ? "border-caution bg-caution-bg" : "border-ink-soft"}`} data-testid="expected-item" data-scanned={done}>
+              <li key={i.id} className={`flex flex-col gap-2 rounded-lg border-2 p-2 ${done && isDamaged ? "border-stop bg-stop-bg" : done ? "border-ok bg-ok-bg" : isLost ? "border-caution bg-caution-bg" : "border-ink-soft"}`} data-testid="expected-item" data-scanned={done}>
                 <p className="text-lg">
                   <span className="font-bold">{done ? "✓ Scanned" : isLost ? "? Not back" : "○ Not yet"}</span> · <span className="font-mono font-bold">{i.tagCode}</span> · {i.description}
                   <span className="block text-base text-ink-soft">{i.tiedown}</span>

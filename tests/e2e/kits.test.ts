@@ -256,6 +256,28 @@ describe("loading by scanning", () => {
       await p.getByRole("button", { name: "Mark the kit loaded" }).click();
       await p.waitForURL(`${BASE_URL}/kits/${passing.id}`);
       await expect.poll(async () => (await testDb("kits").where({ id: passing.id }).first("state")).state).toBe("loaded");
+      await expect.poll(() => p.locator("header").filter({ hasText: "Hollins driveway" }).textContent()).toContain("Loaded");
+
+      // Back in the yard: everything scanned back; a damaged item would be reported here.
+      await p.getByRole("link", { name: "Return: scan what came back" }).click();
+      await p.waitForURL(`${BASE_URL}/kits/${passing.id}/load`);
+      const back = async (code: string) => {
+        await p.getByLabel("Tag code").fill(code);
+        await p.getByRole("button", { name: "This one is back" }).click();
+        await expect.poll(() => p.getByTestId("scan-note").textContent()).toMatch(new RegExp(`^(?!Looking up).*${code}`));
+      };
+      for (const i of items) await back(i.tag_code);
+      const first = p.getByTestId("expected-item").first();
+      await first.getByLabel("Damaged: tag it out").check();
+      await first.getByLabel("What happened").fill("Hook throat opened");
+      await shoot(p, "kit-return-phone");
+      expect(await axeViolations(p)).toEqual([]);
+      await first.getByLabel("Damaged: tag it out").uncheck(); // a demo item stays in service for the other tests
+      await p.getByRole("button", { name: "Mark the kit returned" }).click();
+      await p.waitForURL(`${BASE_URL}/kits/${passing.id}`);
+      await expect.poll(async () => (await testDb("kits").where({ id: passing.id }).first("state")).state).toBe("returned");
+      const events = await testDb("item_events").whereIn("item_id", testDb("kit_items").where({ kit_id: passing.id }).select("item_id")).where({ type: "kit" }).select("outcome");
+      expect(events.filter((e) => e.outcome === "returned")).toHaveLength(items.length);
     } finally {
       await yard.close();
     }
