@@ -111,6 +111,9 @@ export function kitItemJson(i: KitItem) {
     grade: i.grade,
     size: i.size,
     wllLb: i.wllLb,
+    gradeMarked: i.gradeMarked,
+    markedWllLb: i.markedWllLb,
+    details: i.details,
     chainSizeRange: (i.details.chainSizeRange as [string, string] | null | undefined) ?? null,
     mechanism: (i.details.mechanism as string | undefined) ?? null,
     usable: i.usable,
@@ -187,3 +190,84 @@ export function kitListEntry(kit: Kit) {
   };
 }
 export type KitListEntry = ReturnType<typeof kitListEntry>;
+
+/**
+ * The model back from a kit's answer, for screens that work on the live kit in the browser
+ * (the deck picture, the placement control): `kitFromJson(kitJson(kit))` is `kit` again.
+ *
+ * @example
+ * const kit = kitFromJson(useKit(id).data);
+ * deckPicture(kit, kitVerdict(kit));
+ */
+export function kitFromJson(k: KitJson): Kit {
+  const m = k.machine;
+  const t = k.trailer;
+  return {
+    id: k.id,
+    date: k.date,
+    job: k.job,
+    site: k.site,
+    state: k.state,
+    articulationRestrained: k.articulationRestrained,
+    machineFrontFromDeckFrontMm: k.machineFrontFromDeckFront?.value ?? null,
+    machine: {
+      id: m.id,
+      name: m.name,
+      machineClass: m.class,
+      weightLb: m.weight.value,
+      lengthMm: m.length.value,
+      widthMm: m.width?.value ?? null,
+      heightMm: m.height?.value ?? null,
+      articulated: m.articulated,
+      accessories: [...m.accessories],
+      tiedownPoints: m.tiedownPoints.map((p) => ({ label: p.label, side: p.side, positionMm: p.position.value })),
+      cgFromFrontMm: m.cgFromFront?.value ?? null,
+    },
+    trailer: {
+      id: t.id,
+      name: t.name,
+      trailerType: t.type,
+      coupling: t.coupling,
+      deckLengthMm: t.deckLength.value,
+      tiltLengthMm: t.tiltLength.value,
+      deckWidthMm: t.deckWidth?.value ?? null,
+      gvwrLb: t.gvwr.value,
+      emptyWeightLb: t.emptyWeight.value,
+      emptyTongueWeightLb: t.emptyTongueWeight.value,
+      hitchToAxleMm: t.hitchToAxle.value,
+      hitchToDeckFrontMm: t.hitchToDeckFront?.value ?? null,
+      anchorPoints: t.anchorPoints.map((a) => ({
+        id: a.id,
+        label: a.label,
+        side: a.side,
+        positionMm: a.position.value,
+        wllLb: a.wll.value,
+        status: a.status,
+        nextInspectionDue: a.nextInspectionDue,
+        lastInspectedOn: a.lastInspectedOn,
+        usable: a.usable,
+      })),
+    },
+    tiedowns: k.tiedowns.map((td) => ({
+      id: td.id,
+      label: td.label,
+      anchorPointId: td.anchorPointId,
+      attachment: td.attachment,
+      secures: td.secures,
+      machinePoint: td.machinePoint,
+      items: td.items.map((i) => ({
+        id: i.id,
+        tagCode: i.tagCode,
+        kind: i.kind,
+        description: i.description,
+        grade: i.grade,
+        gradeMarked: i.gradeMarked,
+        size: i.size,
+        markedWllLb: i.markedWllLb,
+        wllLb: i.wllLb,
+        details: i.details,
+        usable: i.usable,
+      })),
+    })),
+  };
+}

@@ -107,18 +107,17 @@ async function lockDraft(actor: Principal, kitId: string, trx: Knex): Promise<St
   return kit;
 }
 
-/** The job, site and facts of a kit. The facts that change the check can change only in draft. */
+/** The job, site and articulation lock of a kit; the lock changes the check, so only in a draft. */
 export async function patchKit(actor: Principal, kitId: string, input: KitPatchInput): Promise<void> {
   require(actor, "fleet.manage");
   await db.transaction(async (trx) => {
     const kit = await kits.lockKit(actor.organisationId, kitId, trx);
     if (!kit) throw notFound("No such kit.");
-    const changesCheck = input.articulationRestrained !== undefined || input.machineFrontFromDeckFront !== undefined;
-    if (changesCheck && kit.state !== "draft") {
+    if (input.articulationRestrained !== undefined && kit.state !== "draft") {
       throw new AppError(409, `The kit is ${kit.state}: put it back to draft to change it.`, [], { code: "KIT_NOT_DRAFT", state: kit.state });
     }
     if (kit.state === "returned") throw new AppError(409, "The kit has been returned; its record stays as it was.", [], { code: "KIT_RETURNED" });
-    await kits.updateKit(actor.organisationId, kitId, { job: input.job, site: input.site, articulationRestrained: input.articulationRestrained, machineFrontFromDeckFrontMm: input.machineFrontFromDeckFront }, trx);
+    await kits.updateKit(actor.organisationId, kitId, { job: input.job, site: input.site, articulationRestrained: input.articulationRestrained }, trx);
     await audit(actor, "kit.updated", kitId, input, trx, kit);
   });
 }

@@ -236,7 +236,8 @@ export type KitCreateInput = z.output<typeof kitCreateSchema>;
 
 /**
  * Changes to a kit's words and facts (not its date, machine or trailer: a kit for another
- * date is a copy; another machine or trailer is another kit).
+ * date is a copy; another machine or trailer is another kit). Where the machine sits on the
+ * deck is saved by the placement's own route (issue 13).
  *
  * @example
  * kitPatchSchema.parse({ articulationRestrained: true });
@@ -246,7 +247,6 @@ export const kitPatchSchema = z
     job: text("job", 120).optional(),
     site: optionalText("site", 200),
     articulationRestrained: z.boolean({ error: "articulationRestrained is true or false." }).optional(),
-    machineFrontFromDeckFront: lengthField("machine's front from the deck's front", 0, MAX_LENGTH_MM).nullish(),
   })
   .refine((p) => Object.values(p).some((v) => v !== undefined), { error: "Send at least one field to change." });
 export type KitPatchInput = z.output<typeof kitPatchSchema>;

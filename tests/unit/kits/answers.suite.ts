@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { checkSecurement } from "@/lib/securement";
-import { kitJson, kitListEntry, machineJson, trailerJson } from "@/lib/kits/answers";
+import { kitFromJson, kitJson, kitListEntry, machineJson, trailerJson } from "@/lib/kits/answers";
 import { toKit, type StoredTiedown } from "@/lib/kits/assemble";
 import { kitCheckRequest } from "@/lib/kits/plan";
 import { excavator, kit, tiedown, chain, binder, trailer } from "./fixtures";
@@ -24,6 +24,16 @@ describe("kitJson", () => {
     const json = kitJson(k);
     expect(json.tiedowns[0]!.result).toBeNull();
     expect(json.tiedowns[1]!.result?.label).toBe("front left");
+  });
+});
+
+describe("kitFromJson", () => {
+  it("gives back the model the answer was made from, through JSON as the browser gets it", () => {
+    const inspected = { ...trailer, anchorPoints: trailer.anchorPoints.map((a) => ({ ...a, lastInspectedOn: "2026-06-01" })) };
+    const k = kit({ machineFrontFromDeckFrontMm: 450, machine: { ...excavator, accessories: ["bucket"], cgFromFrontMm: 2100 }, trailer: inspected });
+    const back = kitFromJson(JSON.parse(JSON.stringify(kitJson(k))));
+    expect(back).toEqual(JSON.parse(JSON.stringify(k)));
+    expect(kitJson(back)).toEqual(kitJson(k));
   });
 });
 

@@ -1,6 +1,7 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { KitActions } from "@/components/kits/kit-actions";
+import { KitDeckSection } from "@/components/kits/kit-deck-section";
 import { KitHeader } from "@/components/kits/kit-header";
 import { KitSeed } from "@/components/kits/kit-seed";
 import { KitVerdictDetails, KitVerdictSummary } from "@/components/kits/kit-verdict";
@@ -26,6 +27,7 @@ export default async function KitPage({ params }: { params: Promise<{ id: string
       <KitSeed kit={kit}>
         <KitHeader kitId={kit.id} units={units} today={today} canEdit={canEdit} />
         <KitVerdictSummary kitId={kit.id} units={units} />
+        <KitDeckSection kitId={kit.id} />
         <TiedownList kitId={kit.id} units={units} canEdit={canEdit} />
         <KitActions kitId={kit.id} canEdit={canEdit} canLoad={can(principal, "kits.load")} />
         <KitVerdictDetails kitId={kit.id} units={units} />
