@@ -6,9 +6,9 @@ import { Toggle } from "@/components/ui/choice-group";
 import { Field, SelectField } from "@/components/ui/field";
 import { ApiError, apiJson } from "@/lib/http/client";
 import type { MachineJson } from "@/lib/kits/answers";
-import { editableLength, editableWeight, type UnitSystem } from "@/lib/kits/display";
+import type { UnitSystem } from "@/lib/kits/display";
 import { SIDE_LABELS, SIDES, type Side } from "@/lib/kits/model";
-import { issueAt, QuantityField, quantityBody, type QuantityDraft } from "./quantity-field";
+import { draftOf, FleetQuantity, issueAt, quantityBody, type QuantityDraft } from "./quantity-field";
 
 const COMMON_ACCESSORIES = ["bucket", "blade", "boom and arm", "breaker"];
 
@@ -21,11 +21,6 @@ interface PointDraft {
 
 let nextKey = 0;
 
-function draftOf(q: { value: number } | null, kind: "weight" | "length", units: UnitSystem): QuantityDraft {
-  if (!q) return { value: "", unit: kind === "weight" ? (units === "us" ? "lb" : "kg") : units === "us" ? "ft" : "m" };
-  const e = kind === "weight" ? editableWeight(q.value, units) : editableLength(q.value, units);
-  return { value: String(e.value), unit: e.unit };
-}
 
 /**
  * Add or change a machine. Figures are typed in the organisation's units (or any other);
@@ -98,11 +93,11 @@ export function MachineForm({ machine, classes, units }: { machine?: MachineJson
       </div>
       <Field label="Name" name="name" value={name} onChange={(e) => setName(e.target.value)} error={issueAt(issues, "name")} maxLength={80} hint="As the crew says it, e.g. Badger 35 mini excavator" />
       <SelectField label="Class" name="class" value={machineClass} onChange={(e) => setClass(e.target.value)} error={issueAt(issues, "class")} options={classes} />
-      <QuantityField label="Shipping weight" name="weight" kind="weight" value={weight} onChange={setWeight} error={issueAt(issues, "weight")} hint="With the bucket, blade and anything else that rides on it" />
-      <QuantityField label="Transport length" name="length" kind="length" value={length} onChange={setLength} error={issueAt(issues, "length")} />
+      <FleetQuantity label="Shipping weight" name="weight" kind="weight" value={weight} onChange={setWeight} error={issueAt(issues, "weight")} hint="With the bucket, blade and anything else that rides on it" />
+      <FleetQuantity label="Transport length" name="length" kind="length" value={length} onChange={setLength} error={issueAt(issues, "length")} />
       <div className="grid grid-cols-1 gap-x-3 sm:grid-cols-2">
-        <QuantityField label="Width (optional)" name="width" kind="length" value={width} onChange={setWidth} error={issueAt(issues, "width")} />
-        <QuantityField label="Height (optional)" name="height" kind="length" value={height} onChange={setHeight} error={issueAt(issues, "height")} />
+        <FleetQuantity label="Width (optional)" name="width" kind="length" value={width} onChange={setWidth} error={issueAt(issues, "width")} />
+        <FleetQuantity label="Height (optional)" name="height" kind="length" value={height} onChange={setHeight} error={issueAt(issues, "height")} />
       </div>
       <Toggle label="It articulates" hint="Bends in the middle, like a wheel loader" checked={articulated} onChange={setArticulated} />
 
@@ -138,7 +133,7 @@ export function MachineForm({ machine, classes, units }: { machine?: MachineJson
               <Field label="Label" name={`point-${p.key}-label`} value={p.label} maxLength={40} onChange={(e) => setPoints((list) => list.map((x) => (x.key === p.key ? { ...x, label: e.target.value } : x)))} error={issueAt(issues, `tiedownPoints.${i}.label`)} />
               <SelectField label="Side" name={`point-${p.key}-side`} value={p.side} onChange={(e) => setPoints((list) => list.map((x) => (x.key === p.key ? { ...x, side: e.target.value as Side } : x)))} options={SIDES.map((s) => ({ value: s, label: SIDE_LABELS[s] }))} />
             </div>
-            <QuantityField label="From the front" name={`point-${p.key}-position`} kind="length" value={p.position} onChange={(position) => setPoints((list) => list.map((x) => (x.key === p.key ? { ...x, position } : x)))} error={issueAt(issues, `tiedownPoints.${i}.position`)} />
+            <FleetQuantity label="From the front" name={`point-${p.key}-position`} kind="length" value={p.position} onChange={(position) => setPoints((list) => list.map((x) => (x.key === p.key ? { ...x, position } : x)))} error={issueAt(issues, `tiedownPoints.${i}.position`)} />
             <button type="button" className={buttonClass("secondary", "px-3 text-base")} onClick={() => setPoints((list) => list.filter((x) => x.key !== p.key))}>
               Remove {p.label || "this point"}
             </button>
@@ -157,7 +152,7 @@ export function MachineForm({ machine, classes, units }: { machine?: MachineJson
       </fieldset>
 
       <div className="mt-3">
-        <QuantityField
+        <FleetQuantity
           label="Centre of gravity from the front (optional)"
           name="cgFromFront"
           kind="length"

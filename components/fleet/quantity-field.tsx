@@ -1,5 +1,9 @@
 "use client";
-import { LENGTH_INPUT_UNITS, WEIGHT_INPUT_UNITS } from "@/lib/kits/quantities";
+import { QuantityField } from "@/components/ui/field";
+import { editableLength, editableWeight, type UnitSystem } from "@/lib/kits/display";
+
+// Figures of machines and trailers in the shared QuantityField, holding what was typed with
+// its unit, and what goes into the API body.
 
 /** A number and its unit as a form holds them (the number as typed). */
 export interface QuantityDraft {
@@ -7,11 +11,10 @@ export interface QuantityDraft {
   unit: string;
 }
 
-/**
- * A figure with its unit: a number box and a unit menu side by side, one label, one error
- * line. Weights in lb or kg, lengths in ft, in, m or mm; the server converts exactly.
- */
-export function QuantityField({
+const UNITS = { weight: ["lb", "kg"], length: ["ft", "in", "m"] } as const;
+
+/** A weight (lb | kg) or a length (ft | in | m) with its unit, in the shared field. */
+export function FleetQuantity({
   label,
   name,
   kind,
@@ -28,42 +31,30 @@ export function QuantityField({
   error?: string;
   hint?: string;
 }) {
-  const units = kind === "weight" ? WEIGHT_INPUT_UNITS : LENGTH_INPUT_UNITS;
+  const units: readonly string[] = UNITS[kind];
   return (
-    <div className="flex flex-col gap-1">
-      <label htmlFor={name} className="text-base font-bold">
-        {label}
-      </label>
-      {hint && <p className="text-sm text-ink-soft">{hint}</p>}
-      <div className="flex gap-2">
-        <input
-          id={name}
-          name={name}
-          inputMode="decimal"
-          value={value.value}
-          onChange={(e) => onChange({ ...value, value: e.target.value })}
-          aria-invalid={error ? true : undefined}
-          aria-describedby={`${name}-error`}
-          className={`min-h-tap min-w-0 flex-1 rounded-lg border-2 bg-white px-3 text-lg ${error ? "border-stop" : "border-ink-soft"}`}
-        />
-        <select
-          aria-label={`${label}: unit`}
-          value={value.unit}
-          onChange={(e) => onChange({ ...value, unit: e.target.value })}
-          className="min-h-tap w-20 shrink-0 rounded-lg border-2 border-ink-soft bg-white px-2 text-lg"
-        >
-          {units.map((u) => (
-            <option key={u} value={u}>
-              {u}
-            </option>
-          ))}
-        </select>
-      </div>
-      <p id={`${name}-error`} aria-live="polite" className="min-h-5 text-sm font-bold text-stop">
-        {error}
-      </p>
-    </div>
+    <QuantityField
+      label={label}
+      name={name}
+      value={value.value}
+      unit={units.includes(value.unit) ? value.unit : units[0]!}
+      units={units}
+      onChange={(v) => onChange({ ...value, value: v })}
+      onUnit={(unit) => onChange({ ...value, unit })}
+      error={error}
+      hint={hint}
+    />
   );
+}
+
+/**
+ * What a field starts from: a stored figure in the organisation's units (saving it unchanged
+ * stores the same figure: lib/kits/display.ts), or an empty box in those units.
+ */
+export function draftOf(q: { value: number } | null, kind: "weight" | "length", units: UnitSystem): QuantityDraft {
+  if (!q) return { value: "", unit: kind === "weight" ? (units === "us" ? "lb" : "kg") : units === "us" ? "ft" : "m" };
+  const e = kind === "weight" ? editableWeight(q.value, units) : editableLength(q.value, units);
+  return { value: String(e.value), unit: e.unit };
 }
 
 /** The body's `{ value, unit }`, or null when the box is empty (an optional figure left out). */

@@ -5,9 +5,9 @@ import { buttonClass } from "@/components/ui/button";
 import { Field, SelectField } from "@/components/ui/field";
 import { ApiError, apiJson } from "@/lib/http/client";
 import type { TrailerJson } from "@/lib/kits/answers";
-import { editableLength, editableWeight, type UnitSystem } from "@/lib/kits/display";
+import type { UnitSystem } from "@/lib/kits/display";
 import { COUPLING_LABELS, COUPLINGS, DEFAULT_COUPLING, SIDE_LABELS, SIDES, TRAILER_TYPE_LABELS, TRAILER_TYPES, type Side, type TrailerType } from "@/lib/kits/model";
-import { issueAt, QuantityField, quantityBody, type QuantityDraft } from "./quantity-field";
+import { draftOf, FleetQuantity, issueAt, quantityBody, type QuantityDraft } from "./quantity-field";
 
 interface AnchorDraft {
   key: number;
@@ -21,11 +21,6 @@ interface AnchorDraft {
 
 let nextKey = 0;
 
-function draftOf(q: { value: number } | null, kind: "weight" | "length", units: UnitSystem): QuantityDraft {
-  if (!q) return { value: "", unit: kind === "weight" ? (units === "us" ? "lb" : "kg") : units === "us" ? "ft" : "m" };
-  const e = kind === "weight" ? editableWeight(q.value, units) : editableLength(q.value, units);
-  return { value: String(e.value), unit: e.unit };
-}
 
 /**
  * Add or change a trailer and its anchor points. Sending the form replaces the list of
@@ -112,9 +107,9 @@ export function TrailerForm({ trailer, units }: { trailer?: TrailerJson; units: 
         options={[{ value: "", label: `Usual for the type (${COUPLING_LABELS[DEFAULT_COUPLING[type]].toLowerCase()})` }, ...COUPLINGS.map((c) => ({ value: c, label: COUPLING_LABELS[c] }))]}
         error={issueAt(issues, "coupling")}
       />
-      <QuantityField label="Deck length" name="deckLength" kind="length" value={deckLength} onChange={setDeckLength} error={issueAt(issues, "deckLength")} />
+      <FleetQuantity label="Deck length" name="deckLength" kind="length" value={deckLength} onChange={setDeckLength} error={issueAt(issues, "deckLength")} />
       {(type === "tilt-deck" || type === "split-tilt-deck") && (
-        <QuantityField
+        <FleetQuantity
           label={type === "tilt-deck" ? "Tilting part (optional: the whole deck)" : "Tilting part at the rear"}
           name="tiltLength"
           kind="length"
@@ -123,12 +118,12 @@ export function TrailerForm({ trailer, units }: { trailer?: TrailerJson; units: 
           error={issueAt(issues, "tiltLength")}
         />
       )}
-      <QuantityField label="Deck width (optional)" name="deckWidth" kind="length" value={deckWidth} onChange={setDeckWidth} error={issueAt(issues, "deckWidth")} />
-      <QuantityField label="GVWR" name="gvwr" kind="weight" value={gvwr} onChange={setGvwr} error={issueAt(issues, "gvwr")} hint="From the maker's plate" />
-      <QuantityField label="Empty weight" name="emptyWeight" kind="weight" value={emptyWeight} onChange={setEmptyWeight} error={issueAt(issues, "emptyWeight")} />
-      <QuantityField label="Empty tongue weight" name="emptyTongueWeight" kind="weight" value={emptyTongueWeight} onChange={setTongue} error={issueAt(issues, "emptyTongueWeight")} hint="Measured, or from the maker's plate" />
-      <QuantityField label="Hitch point to the centre of the axles" name="hitchToAxle" kind="length" value={hitchToAxle} onChange={setHitchToAxle} error={issueAt(issues, "hitchToAxle")} />
-      <QuantityField label="Hitch point to the deck's front (optional)" name="hitchToDeckFront" kind="length" value={hitchToDeckFront} onChange={setHitchToDeck} error={issueAt(issues, "hitchToDeckFront")} />
+      <FleetQuantity label="Deck width (optional)" name="deckWidth" kind="length" value={deckWidth} onChange={setDeckWidth} error={issueAt(issues, "deckWidth")} />
+      <FleetQuantity label="GVWR" name="gvwr" kind="weight" value={gvwr} onChange={setGvwr} error={issueAt(issues, "gvwr")} hint="From the maker's plate" />
+      <FleetQuantity label="Empty weight" name="emptyWeight" kind="weight" value={emptyWeight} onChange={setEmptyWeight} error={issueAt(issues, "emptyWeight")} />
+      <FleetQuantity label="Empty tongue weight" name="emptyTongueWeight" kind="weight" value={emptyTongueWeight} onChange={setTongue} error={issueAt(issues, "emptyTongueWeight")} hint="Measured, or from the maker's plate" />
+      <FleetQuantity label="Hitch point to the centre of the axles" name="hitchToAxle" kind="length" value={hitchToAxle} onChange={setHitchToAxle} error={issueAt(issues, "hitchToAxle")} />
+      <FleetQuantity label="Hitch point to the deck's front (optional)" name="hitchToDeckFront" kind="length" value={hitchToDeckFront} onChange={setHitchToDeck} error={issueAt(issues, "hitchToDeckFront")} />
 
       <fieldset className="mt-3 flex flex-col gap-2">
         <legend className="text-xl font-bold">Anchor points ({anchors.length})</legend>
@@ -140,8 +135,8 @@ export function TrailerForm({ trailer, units }: { trailer?: TrailerJson; units: 
               <Field label="Label" name={`anchor-${a.key}-label`} value={a.label} maxLength={40} onChange={(e) => update(a.key, { label: e.target.value })} error={issueAt(issues, `anchorPoints.${i}.label`) ?? issueAt(issues, `anchorPoints.${i}.id`)} />
               <SelectField label="Side" name={`anchor-${a.key}-side`} value={a.side} onChange={(e) => update(a.key, { side: e.target.value as Side })} options={SIDES.map((s) => ({ value: s, label: SIDE_LABELS[s] }))} />
             </div>
-            <QuantityField label="From the deck's front" name={`anchor-${a.key}-position`} kind="length" value={a.position} onChange={(position) => update(a.key, { position })} error={issueAt(issues, `anchorPoints.${i}.position`)} />
-            <QuantityField label="Rated WLL" name={`anchor-${a.key}-wll`} kind="weight" value={a.wll} onChange={(wll) => update(a.key, { wll })} error={issueAt(issues, `anchorPoints.${i}.wll`)} />
+            <FleetQuantity label="From the deck's front" name={`anchor-${a.key}-position`} kind="length" value={a.position} onChange={(position) => update(a.key, { position })} error={issueAt(issues, `anchorPoints.${i}.position`)} />
+            <FleetQuantity label="Rated WLL" name={`anchor-${a.key}-wll`} kind="weight" value={a.wll} onChange={(wll) => update(a.key, { wll })} error={issueAt(issues, `anchorPoints.${i}.wll`)} />
             <Field label="Next inspection due (optional)" name={`anchor-${a.key}-due`} type="date" value={a.nextInspectionDue} onChange={(e) => update(a.key, { nextInspectionDue: e.target.value })} error={issueAt(issues, `anchorPoints.${i}.nextInspectionDue`)} />
             <button type="button" className={buttonClass("secondary", "px-3 text-base")} onClick={() => setAnchors((list) => list.filter((x) => x.key !== a.key))}>
               {a.id ? `Remove ${a.label} (retires it)` : `Remove ${a.label || "this row"}`}

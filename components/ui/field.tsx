@@ -102,6 +102,7 @@ export function QuantityField<U extends string>({
   onChange,
   onUnit,
   error,
+  hint,
 }: {
   label: string;
   name: string;
@@ -112,9 +113,10 @@ export function QuantityField<U extends string>({
   onChange: (value: string) => void;
   onUnit: (unit: U) => void;
   error?: string;
+  hint?: string;
 }) {
   return (
-    <FieldShell id={id} label={label} error={error}>
+    <FieldShell id={id} label={label} error={error} hint={hint}>
       <div className="flex items-stretch gap-2">
         <input
           id={id}
