@@ -27,8 +27,8 @@ export default async function KitPage({ params }: { params: Promise<{ id: string
       <KitSeed kit={kit}>
         <KitHeader kitId={kit.id} units={units} today={today} canEdit={canEdit} />
         <KitVerdictSummary kitId={kit.id} units={units} />
-        <KitDeckSection kitId={kit.id} />
         <TiedownList kitId={kit.id} units={units} canEdit={canEdit} />
+        <KitDeckSection kitId={kit.id} />
         <KitActions kitId={kit.id} canEdit={canEdit} canLoad={can(principal, "kits.load")} />
         <KitVerdictDetails kitId={kit.id} units={units} />
       </KitSeed>
