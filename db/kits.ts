@@ -102,6 +102,11 @@ export async function listTiedowns(organisationId: string, kitIds: string[], trx
   return tiedowns.map((t) => ({ ...t, items: items.filter((i) => i.tiedownId === t.id).map(({ tiedownId: _t, ...item }) => item) }));
 }
 
+export async function countTiedowns(kitId: string, trx: Knex): Promise<number> {
+  const row = await trx("kit_tiedowns").where({ kit_id: kitId }).count<{ count: string }>("id as count").first();
+  return Number(row?.count ?? 0);
+}
+
 export async function nextTiedownPosition(kitId: string, trx: Knex): Promise<number> {
   const row = await trx("kit_tiedowns").where({ kit_id: kitId }).max<{ max: number | null }>("position as max").first();
   return (row?.max ?? -1) + 1;

@@ -20,7 +20,7 @@ import { toAnchor, toKit, toKitItem, type StoredKit, type StoredKitItem } from "
 import { addDays } from "./dates";
 import { compareScan, kitEventNote, transitionRule } from "./lifecycle";
 import { cornerPlans, suggestItems, type CornerPlan } from "./matching";
-import type { Kit } from "./model";
+import { MAX_KIT_TIEDOWNS, type Kit } from "./model";
 import { kitVerdict } from "./plan";
 import type { KitCreateInput, KitPatchInput, TiedownInput, TiedownPatchInput, TransitionInput } from "./schemas";
 
@@ -148,10 +148,8 @@ async function requireSecures(organisationId: string, kit: StoredKit, secures: s
   return accessory;
 }
 
-class ItemTaken extends Error {
-  constructor(readonly itemId: string | null) {
-    super("item taken");
-  }
+function tooManyTiedowns() {
+  return new AppError(409, `A kit holds at most ${MAX_KIT_TIEDOWNS} tiedowns, the most one securement check takes.`, [], { code: "TOO_MANY_TIEDOWNS" });
 }
 
 /**
@@ -212,6 +210,7 @@ export async function addTiedown(actor: Principal, kitId: string, input: Tiedown
       const kit = await lockDraft(actor, kitId, trx);
       const anchor = await requireAnchor(actor, kit, input.anchorPointId, trx);
       const secures = await requireSecures(actor.organisationId, kit, input.secures, trx);
+      if ((await kits.countTiedowns(kitId, trx)) >= MAX_KIT_TIEDOWNS) throw tooManyTiedowns();
       const position = await kits.nextTiedownPosition(kitId, trx);
       const label = input.label || input.machinePoint || (secures === "machine" ? `tiedown ${position + 1}` : secures);
       const id = await kits.insertTiedown(actor.organisationId, kitId, { label, anchorPointId: anchor.id, attachment: input.attachment, secures, machinePoint: input.machinePoint ?? null }, position, trx);
@@ -298,6 +297,7 @@ export async function fillCorners(actor: Principal, kitId: string, fromTiedownId
       if (!from.items.length) throw fieldError("fromTiedownId", "Put the items into this tiedown first; its items are what is copied.");
       const free = (await kits.itemsFreeOn(actor.organisationId, kit.date, {}, trx)).map((i) => toKitItem(i, kit.date));
       const plans = cornerPlans(kit, from, free);
+      if (kit.tiedowns.length + plans.filter((p) => !p.tiedownId && p.anchorPointId).length > MAX_KIT_TIEDOWNS) throw tooManyTiedowns();
       const stored = (await kits.getKit(actor.organisationId, kitId, trx))!;
       let position = await kits.nextTiedownPosition(kitId, trx);
       for (const plan of plans) {

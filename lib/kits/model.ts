@@ -251,6 +251,15 @@ export interface KitTiedown {
 }
 
 /**
+ * Most tiedowns one kit can hold: the securement engine checks at most 100 in one request
+ * (lib/securement/schema.ts), and a kit is checked whole.
+ *
+ * @example
+ * MAX_KIT_TIEDOWNS; // 100
+ */
+export const MAX_KIT_TIEDOWNS = 100;
+
+/**
  * The states of a kit: planned (`draft`), checked and fit to go (`ready`), on the trailer
  * (`loaded`), back in the yard (`returned`).
  *

@@ -174,6 +174,19 @@ describe("availability, enforced by the server", () => {
     expect(other.res.status).toBe(201);
   });
 
+  it("stops a kit at the 100 tiedowns one securement check takes, and the kit still answers", async () => {
+    const kit = await makeKit(planner, { date: day(43), machineId: machine.id, trailerId: trailer.id });
+    await testDb("kit_tiedowns").insert(
+      Array.from({ length: 100 }, (_, i) => ({ organisation_id: organisationId, kit_id: kit.id, position: i, label: `t${i}`, anchor_point_id: anchorId(trailer, "FL"), attachment: "direct", secures: "machine" })),
+    );
+    const res = await planner.post(`/api/v1/kits/${kit.id}/tiedowns`, { anchorPointId: anchorId(trailer, "FR"), attachment: "direct" });
+    expect(res.status).toBe(409);
+    expect(res.json.code).toBe("TOO_MANY_TIEDOWNS");
+    const whole = await planner.get(`/api/v1/kits/${kit.id}`);
+    expect(whole.status).toBe(200);
+    expect(whole.json.check.tiedowns).toHaveLength(100);
+  });
+
   it("answers 400 naming the field for bad input", async () => {
     const kit = await makeKit(planner, { date: day(42), machineId: machine.id, trailerId: trailer.id });
     const res = await planner.post(`/api/v1/kits/${kit.id}/tiedowns`, { anchorPointId: "nope", attachment: "sideways", itemIds: ["x"] });
