@@ -1,5 +1,6 @@
 import Link from "next/link";
 import { countInspectionsDue, countItemsByStatus } from "@/db/items";
+import { listKitEntries } from "@/lib/kits/kit-service";
 import { listOpenInvites } from "@/db/people";
 import { can } from "@/lib/auth/roles";
 import { requirePage } from "@/lib/auth/session";
@@ -15,6 +16,9 @@ export default async function TodayPage() {
     countInspectionsDue(principal.organisationId, addDays(today, DUE_SOON_DAYS)),
   ]);
   const invites = can(principal, "people.manage") ? await listOpenInvites(principal.organisationId) : [];
+  const tomorrow = addDays(today, 1);
+  const kits = can(principal, "fleet.view") ? await listKitEntries(principal.organisationId, tomorrow, tomorrow) : [];
+  const notPassing = kits.filter((k) => !k.pass).length;
   const tiles = [
     { label: "In service", value: byStatus.in_service ?? 0, tone: "border-ok bg-ok-bg text-ok", href: "/stock?status=in_service" },
     { label: "Tagged out", value: byStatus.tagged_out ?? 0, tone: "border-stop bg-stop-bg text-stop", href: "/stock?status=tagged_out" },
@@ -38,6 +42,15 @@ export default async function TodayPage() {
         </ul>
         <Link href="/stock" className="text-lg font-bold underline">Open the stock list</Link>
       </section>
+      {can(principal, "fleet.view") && (
+        <section aria-labelledby="kits-heading" className="flex flex-col gap-2">
+          <h2 id="kits-heading" className="text-xl font-bold">Kits for tomorrow</h2>
+          <p className="text-lg">
+            {kits.length === 0 ? "None planned yet." : `${kits.length} planned${notPassing ? `; ${notPassing} ${notPassing === 1 ? "does" : "do"} not pass yet` : ", every one passes"}.`}{" "}
+            <Link href="/kits" className="font-bold underline">Open the kits</Link>
+          </p>
+        </section>
+      )}
       {can(principal, "people.manage") && (
         <section aria-labelledby="team-heading" className="flex flex-col gap-2">
           <h2 id="team-heading" className="text-xl font-bold">Team</h2>

@@ -71,7 +71,7 @@ export function ItemForm({ yards, initial, itemId, action: save }: { yards: { id
         </div>
       )}
       {(kind === "chain" || kind === "hook") && marking !== "none" && (
-        <SelectField label="Grade" name="grade" defaultValue={v.grade ?? "70"} options={[30, 43, 70, 80, 100].map((g) => ({ value: String(g), label: `Grade ${g}` }))} error={e.grade} />
+        <SelectField label="Grade" name="grade" defaultValue={v.grade ?? "70"} options={[30, 43, 70, 80, 100].map((g) => ({ value: String(g), label: g === 43 ? "Grade 43 (also stamped 40)" : `Grade ${g}` }))} error={e.grade} />
       )}
       {kind === "binder" ? (
         <>

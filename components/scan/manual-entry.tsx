@@ -4,7 +4,22 @@ import { buttonClass } from "@/components/ui/button";
 import { ALPHABET_HINT, EXAMPLE_TAG_CODE, readTypedTagCode } from "@/lib/tags/entry";
 
 /** Typing the code printed under the QR: for a scuffed tag, a blocked camera or no camera. */
-export function ManualEntry({ onCode, busy, children }: { onCode: (code: string) => void; busy: boolean; children?: React.ReactNode }) {
+export function ManualEntry({
+  onCode,
+  busy,
+  children,
+  submitLabel = "Open item",
+  busyLabel = "Looking up…",
+  clearAfter = false,
+}: {
+  onCode: (code: string) => void;
+  busy: boolean;
+  children?: React.ReactNode;
+  submitLabel?: string;
+  busyLabel?: string;
+  /** Empty the box after each code, for entering one code after another. */
+  clearAfter?: boolean;
+}) {
   const [value, setValue] = useState("");
   const [error, setError] = useState<string | null>(null);
 
@@ -13,7 +28,7 @@ export function ManualEntry({ onCode, busy, children }: { onCode: (code: string)
     const read = readTypedTagCode(value);
     if (!read.ok) return setError(read.message);
     setError(null);
-    setValue(read.code);
+    setValue(clearAfter ? "" : read.code);
     onCode(read.code);
   }
 
@@ -52,7 +67,7 @@ export function ManualEntry({ onCode, busy, children }: { onCode: (code: string)
       </p>
       {children}
       <button type="submit" disabled={busy} className={buttonClass("primary", "w-full", "large")}>
-        {busy ? "Looking up…" : "Open item"}
+        {busy ? busyLabel : submitLabel}
       </button>
     </form>
   );

@@ -1,6 +1,7 @@
 import Link from "next/link";
 import { StatusBadge } from "@/components/ui/status-badge";
 import { STATUS_LABELS, type ItemStatus } from "@/lib/stock/labels";
+import { unmarkedChainWords } from "@/lib/stock/wll-words";
 import { dayText, tagLabelText, type TagLabelItem } from "@/lib/tags/label";
 
 export interface PublicTagItem extends TagLabelItem {
@@ -51,6 +52,7 @@ export function PublicTagView({ item }: { item: PublicTagItem }) {
         }`}
       >
         {text.wll}
+        {unmarkedChainWords(item) && <span className="mt-1 block text-xl">{unmarkedChainWords(item)}</span>}
       </p>
 
       <dl className="flex flex-col">

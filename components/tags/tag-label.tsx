@@ -1,3 +1,4 @@
+import { unmarkedChainWords } from "@/lib/stock/wll-words";
 import { tagLabelText, type TagLabelItem } from "@/lib/tags/label";
 import { tagUrl } from "@/lib/tags/qr";
 import { QrCode } from "./qr-code";
@@ -25,6 +26,7 @@ export function TagLabel({ item, size }: { item: SheetItem; size: "small" | "lar
         <p className="tag__title">{text.title}</p>
         <p className="tag__details">{details.join(" · ")}</p>
         <p className={text.hasWll ? "tag__wll" : "tag__wll tag__wll--none"}>{text.wll}</p>
+        {unmarkedChainWords(item) && <p className="tag__details">{unmarkedChainWords(item)}</p>}
         {size === "large" && <p className="tag__hint">Check before every use. Scan the QR or type the code.</p>}
       </div>
     </div>

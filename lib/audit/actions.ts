@@ -31,9 +31,43 @@ export const AUDIT_WORDS = {
   "items.import_undone": "CSV import undone",
   "import_mapping.saved": "Column mapping saved",
   "import_mapping.deleted": "Column mapping deleted",
+  "organisation.units_updated": "Units shown changed",
+  "saved_check.saved": "Securement check saved",
+  "saved_check.updated": "Saved securement check changed",
+  "saved_check.deleted": "Saved securement check deleted",
+  "machine_class.created": "Machine class added",
+  "machine.created": "Machine added",
+  "machine.updated": "Machine changed",
+  "trailer.created": "Trailer added",
+  "trailer.updated": "Trailer changed",
+  "anchor_point.inspected": "Anchor point inspected",
+  "anchor_point.tagged_out": "Anchor point tagged out",
+  "anchor_point.returned_to_service": "Anchor point returned to service",
+  "anchor_point.retired": "Anchor point retired",
+  "kit.created": "Kit planned",
+  "kit.updated": "Kit changed",
+  "kit.copied": "Kit copied to another day",
+  "kit.tiedown_added": "Tiedown added to a kit",
+  "kit.tiedown_updated": "Kit tiedown changed",
+  "kit.tiedown_removed": "Tiedown removed from a kit",
+  "kit.items_added": "Gear added to a kit",
+  "kit.item_removed": "Gear removed from a kit",
+  "kit.corners_filled": "Kit corners filled like the first",
+  "kit.draft": "Kit back to draft",
+  "kit.ready": "Kit marked ready",
+  "kit.loaded": "Kit loaded",
+  "kit.returned": "Kit returned",
 } as const satisfies Record<string, string>;
 
 export type AuditAction = keyof typeof AUDIT_WORDS;
+
+/** The audit action of a kit moving to each state. */
+export const KIT_STATE_ACTIONS = {
+  draft: "kit.draft",
+  ready: "kit.ready",
+  loaded: "kit.loaded",
+  returned: "kit.returned",
+} as const satisfies Record<string, AuditAction>;
 
 /**
  * The words for an audit row's action (a row written before an action was renamed still

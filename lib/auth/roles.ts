@@ -22,6 +22,7 @@ export type Permission =
   | "items.inspect" // periodic inspection, return to service: owner or designated person
   | "fleet.manage" // machines, trailers, kits
   | "fleet.view"
+  | "kits.load" // load a kit onto the trailer and return it, by scanning its items
   | "securement.check" // rated-limit lookup and scratch securement check
   | "reports.view"
   | "audit.view";
@@ -29,11 +30,11 @@ export type Permission =
 const GRANTS: Record<Role, readonly Permission[]> = {
   owner: [
     "people.manage", "settings.manage", "stock.view", "stock.edit", "stock.import", "stock.retire",
-    "items.check", "items.inspect", "fleet.manage", "fleet.view", "securement.check",
+    "items.check", "items.inspect", "fleet.manage", "fleet.view", "kits.load", "securement.check",
     "reports.view", "audit.view",
   ],
-  planner: ["stock.view", "stock.edit", "items.check", "fleet.manage", "fleet.view", "securement.check", "reports.view"],
-  yard_hand: ["stock.view", "items.check", "fleet.view", "securement.check"],
+  planner: ["stock.view", "stock.edit", "items.check", "fleet.manage", "fleet.view", "kits.load", "securement.check", "reports.view"],
+  yard_hand: ["stock.view", "items.check", "fleet.view", "kits.load", "securement.check"],
 };
 
 /** Permissions that a designated person gets whatever the role (periodic inspection). */

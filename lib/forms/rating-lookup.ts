@@ -35,7 +35,7 @@ export const MATERIAL_CHOICES: ReadonlyArray<Choice & { value: Material }> = [
 
 /** The grade marks of the chain table, and "no legible mark" (value ""). */
 export const GRADE_CHOICES: readonly Choice[] = [
-  ...CHAIN_GRADES.map((g) => ({ value: String(g), label: `G${g}`, sub: GRADE_NAMES[g].replace(/^grade \d+ /, "") })),
+  ...CHAIN_GRADES.map((g) => ({ value: String(g), label: `G${g}`, sub: `${GRADE_NAMES[g].replace(/^grade \d+ /, "")}${g === 43 ? ", also 40" : ""}` })),
   { value: "", label: "No mark", sub: "counts as G30" },
 ];
 

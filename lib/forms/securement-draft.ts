@@ -8,8 +8,21 @@
  *
  * @module
  */
-import type { Attachment, CargoKind } from "@/lib/securement";
-import { CHAIN_TABLE, WEBBING_TABLE } from "@/lib/securement";
+import type { FieldIssue } from "@/lib/field-issues";
+import type { Attachment, CargoKind, Finding, RopeFibre, SecurementCheckRequest } from "@/lib/securement";
+import {
+  CHAIN_TABLE,
+  isChainGrade,
+  KG_PER_LB,
+  parseGrade,
+  ROPE_FIBRES,
+  ROPE_TABLES,
+  STEEL_STRAPPING_TABLE,
+  toLb,
+  tryParseSize,
+  WEBBING_TABLE,
+  WIRE_ROPE_TABLE,
+} from "@/lib/securement";
 
 export type DraftWeightUnit = "lb" | "kg";
 export type DraftLengthUnit = "ft" | "m";
@@ -32,11 +45,16 @@ export interface CargoDraft {
 /**
  * One part of a tiedown. Chain `grade` is "30"…"100", or "" when the chain carries no
  * legible grade mark (sent as `marked: false`: rated as grade 30, 49 CFR 393.108(d)).
- * Every `wll` is the marked WLL as typed, in the draft's `wllUnit`; "" means none.
+ * Rope `fibre` is "" when the fibre is not known (rated as polypropylene, 393.108(c)).
+ * Every `wll` is the marked WLL as typed, in the draft's `wllUnit`; "" means none; so is a
+ * wire rope's `nominalStrength` (a quarter of it is its WLL, 393.108(e)(1)).
  */
 export type ComponentDraft =
   | { key: string; type: "chain"; grade: string; size: string; wll: string }
   | { key: string; type: "webbing"; width: string; wll: string }
+  | { key: string; type: "wire-rope"; size: string; construction: string; nominalStrength: string; wll: string }
+  | { key: string; type: "rope"; fibre: "" | RopeFibre; size: string; wll: string }
+  | { key: string; type: "steel-strapping"; width: string; thickness: string; wll: string }
   | { key: string; type: "binder"; wll: string; rangeFrom: string; rangeTo: string }
   | { key: string; type: "hook" | "shackle"; grade: string; wll: string }
   | { key: string; type: "anchor"; label: string; wll: string };
@@ -57,11 +75,6 @@ export interface CheckDraft {
   tiedowns: TiedownDraft[];
 }
 
-/** One problem with a request, as the API answers it. */
-export interface PathMessage {
-  path: string;
-  message: string;
-}
 
 let counter = 0;
 /** A key for React lists; unique within a page. */
@@ -78,6 +91,22 @@ export const COMPONENT_LABELS: Record<DraftComponentType, string> = {
   shackle: "Shackle",
   anchor: "Anchor point",
   webbing: "Web strap",
+  "wire-rope": "Wire rope",
+  rope: "Fibre rope",
+  "steel-strapping": "Steel strapping",
+};
+
+/** The parts a tiedown can be made of, in the order the screen offers them. */
+export const ADDABLE_PARTS: readonly DraftComponentType[] = ["chain", "binder", "hook", "shackle", "anchor", "webbing", "wire-rope", "rope", "steel-strapping"];
+
+/** Words for the rope fibres that have a 49 CFR 393.108 table; "" is a fibre not known. */
+export const FIBRE_LABELS: Record<"" | RopeFibre, string> = {
+  "": "Not known (counts as polypropylene)",
+  manila: "Manila",
+  polypropylene: "Polypropylene",
+  polyester: "Polyester",
+  nylon: "Nylon",
+  "double-braided-nylon": "Double braided nylon",
 };
 
 /** Words for the attachments (49 CFR 393.106(d)) and what each counts toward the aggregate. */
@@ -87,16 +116,34 @@ export const ATTACHMENT_LABELS: Record<Attachment, { label: string; counts: stri
   "indirect-across": { label: "Over or through, to the other side", counts: "counts its full WLL" },
 };
 
+const inchChoice = (r: { label: string }) => ({ value: `${r.label} in`, label: `${r.label} in` });
 /** Chain sizes of the 49 CFR 393.108 table, as the API accepts them ("3/8 in"). */
-export const CHAIN_SIZES = CHAIN_TABLE.rows.map((r) => ({ value: `${r.label} in`, label: `${r.label} in` }));
+export const CHAIN_SIZES = CHAIN_TABLE.rows.map(inchChoice);
 /** Webbing widths of the 49 CFR 393.108 table. */
-export const WEBBING_WIDTHS = WEBBING_TABLE.rows.map((r) => ({ value: `${r.label} in`, label: `${r.label} in` }));
+export const WEBBING_WIDTHS = WEBBING_TABLE.rows.map(inchChoice);
+/** Wire rope diameters of the 49 CFR 393.108 table. */
+export const WIRE_ROPE_SIZES = WIRE_ROPE_TABLE.rows.map(inchChoice);
+/** Fibre rope diameters of the 49 CFR 393.108 rope tables (one size column for every fibre). */
+export const ROPE_SIZES = ROPE_TABLES.polypropylene.rows.map(inchChoice);
+/** Steel strapping widths of the 49 CFR 393.108 table. */
+export const STRAPPING_WIDTHS = [...new Set(STEEL_STRAPPING_TABLE.rows.map((r) => r.width.label))].map((label) => inchChoice({ label }));
+
+/**
+ * Steel strapping thicknesses the table has for a width ("1 1/4 in" → 0.029 … 0.057 in).
+ *
+ * @example
+ * strappingThicknesses("2 in").map((t) => t.value); // ["0.044 in", "0.05 in"]
+ */
+export function strappingThicknesses(width: string): { value: string; label: string }[] {
+  return STEEL_STRAPPING_TABLE.rows.filter((r) => `${r.width.label} in` === width).map((r) => inchChoice(r.thickness));
+}
 
 /**
  * A new part with sensible starting values: grade 70, 3/8 in chain; 4 in strap; empty WLLs.
  *
  * @example
  * newComponent("binder"); // { key: "k1", type: "binder", wll: "", rangeFrom: "", rangeTo: "" }
+ * newComponent("wire-rope"); // 1/2 in, construction and nominal strength empty
  */
 export function newComponent(type: DraftComponentType): ComponentDraft {
   const key = newKey("c");
@@ -105,6 +152,12 @@ export function newComponent(type: DraftComponentType): ComponentDraft {
       return { key, type, grade: "70", size: "3/8 in", wll: "" };
     case "webbing":
       return { key, type, width: "4 in", wll: "" };
+    case "wire-rope":
+      return { key, type, size: "1/2 in", construction: "", nominalStrength: "", wll: "" };
+    case "rope":
+      return { key, type, fibre: "", size: "1/2 in", wll: "" };
+    case "steel-strapping":
+      return { key, type, width: "1 1/4 in", thickness: "0.029 in", wll: "" };
     case "binder":
       return { key, type, wll: "", rangeFrom: "", rangeTo: "" };
     case "hook":
@@ -127,6 +180,22 @@ export function newTiedown(index: number, like?: TiedownDraft): TiedownDraft {
     ? like.components.map((c) => ({ ...c, key: newKey("c") }))
     : [newComponent("chain"), newComponent("binder"), newComponent("anchor")];
   return { key: newKey("t"), label: `tiedown ${index + 1}`, attachment: like?.attachment ?? "direct", secures: "machine", components };
+}
+
+/**
+ * `count` copies of a tiedown (its attachment, what it holds and every part as entered),
+ * named after their place in the list: the "add 3 more like this one" of the screen.
+ *
+ * @example
+ * copiesOf(exampleDraft().tiedowns[0], 3, 6).map((t) => t.label); // ["tiedown 7", "tiedown 8", "tiedown 9"]
+ */
+export function copiesOf(tiedown: TiedownDraft, count: number, existing: number): TiedownDraft[] {
+  return Array.from({ length: count }, (_, i) => ({
+    ...tiedown,
+    key: newKey("t"),
+    label: `tiedown ${existing + i + 1}`,
+    components: tiedown.components.map((c) => ({ ...c, key: newKey("c") })),
+  }));
 }
 
 function corner(label: string, secures: string, size: string): TiedownDraft {
@@ -223,6 +292,20 @@ function componentRequest(c: ComponentDraft, unit: DraftWeightUnit): Record<stri
         : { type: "chain", grade: Number(c.grade), size: c.size, ...wllOf(c.wll, unit) };
     case "webbing":
       return { type: "webbing", width: c.width, ...wllOf(c.wll, unit) };
+    case "wire-rope": {
+      const nominal = readNumber(c.nominalStrength);
+      return {
+        type: "wire-rope",
+        size: c.size,
+        ...(c.construction.trim() ? { construction: c.construction.trim() } : {}),
+        ...(nominal === undefined ? {} : { nominalStrength: { value: nominal, unit } }),
+        ...wllOf(c.wll, unit),
+      };
+    }
+    case "rope":
+      return { type: "rope", ...(c.fibre ? { fibre: c.fibre } : {}), size: c.size, ...wllOf(c.wll, unit) };
+    case "steel-strapping":
+      return { type: "steel-strapping", width: c.width, thickness: c.thickness, ...wllOf(c.wll, unit) };
     case "binder":
       return { type: "binder", ...wllOf(c.wll, unit), ...(c.rangeFrom && c.rangeTo ? { chainSizeRange: [c.rangeFrom, c.rangeTo] } : {}) };
     case "hook":
@@ -273,7 +356,7 @@ export function toRequest(draft: CheckDraft): RequestBody {
  * issueAt([{ path: "cargo.weight.value", message: "The value must be a number" }], "cargo.weight");
  * // "The value must be a number"
  */
-export function issueAt(issues: readonly PathMessage[] | undefined, path: string): string | undefined {
+export function issueAt(issues: readonly FieldIssue[] | undefined, path: string): string | undefined {
   return issues?.find((i) => i.path === path || i.path.startsWith(`${path}.`))?.message;
 }
 
@@ -284,6 +367,10 @@ const FIELD_WORDS: Record<string, string> = {
   size: "size",
   grade: "grade mark",
   width: "width",
+  thickness: "thickness",
+  fibre: "fibre",
+  construction: "construction",
+  nominalStrength: "nominal strength",
   chainSizeRange: "chain sizes",
   label: "name",
   secures: "what it holds",
@@ -331,4 +418,138 @@ export function describePath(path: string, draft: CheckDraft): string {
     return w ? `${where}: ${w}` : where;
   }
   return words(parts) || "The check";
+}
+
+/** What the form marks beside a field that a finding says was left empty or not given. */
+const FIELD_MARKS: Partial<Record<Finding["code"], string>> = {
+  MISSING_WLL: "Empty: enter the WLL stamped on it. Until then this tiedown counts 0",
+  MISSING_SIZE: "Empty: the size is needed to rate it from the table",
+  BINDER_RANGE_NOT_GIVEN: "Not given: whether this binder takes the chain was not checked",
+  BINDER_CHAIN_SIZE_OUT_OF_RANGE: "This binder is not made for the chain in this tiedown: the tiedown counts 0",
+  WIRE_ROPE_RATED_FROM_TABLE: "Not given: rated from the 6 × 37 table instead of a quarter of this",
+  ROPE_FIBRE_UNKNOWN: "Not known: rated as polypropylene (manila would be lower)",
+};
+
+/**
+ * The marks a check's findings put on the form's own fields ("Empty: enter the WLL stamped
+ * on it"), at the request path of the field, so the fields to fill stand out in the form
+ * and not only in the list of findings.
+ *
+ * @example
+ * fieldMarks(result.findings);
+ * // [{ path: "tiedowns.1.components.1.wll", message: "Empty: enter the WLL stamped on it. Until then this tiedown counts 0" }]
+ */
+export function fieldMarks(findings: readonly Finding[]): FieldIssue[] {
+  return findings.flatMap((f) => {
+    const message = FIELD_MARKS[f.code];
+    return message && f.path && f.component !== undefined ? [{ path: f.path, message }] : [];
+  });
+}
+
+type Rows = readonly { label: string; inches: number; mm: number }[];
+
+/** A size as the form's menus write it ("3/8 in"), matched to a table row; other text as it is. */
+function sizeChoice(value: unknown, rows: Rows): string {
+  if (value === undefined || value === null) return "";
+  const parsed = tryParseSize(value as string | number);
+  if (!parsed) return String(value);
+  const row = rows.find((r) => (parsed.system === "metric" ? Math.abs(r.mm - parsed.mm) < 1e-6 : Math.abs(r.inches - parsed.inches) < 1e-9));
+  return row ? `${row.label} in` : parsed.display;
+}
+
+const STRAPPING_WIDTH_ROWS: Rows = [...new Map(STEEL_STRAPPING_TABLE.rows.map((r) => [r.width.label, r.width])).values()];
+const STRAPPING_THICKNESS_ROWS: Rows = [...new Map(STEEL_STRAPPING_TABLE.rows.map((r) => [r.thickness.label, r.thickness])).values()];
+
+function gradeChoice(value: unknown): string {
+  const g = value === undefined ? undefined : parseGrade(value as string | number);
+  return isChainGrade(g) ? String(g) : "";
+}
+
+/**
+ * A saved request back in the form (the reverse of {@link toRequest}), with a note for each
+ * thing the form cannot hold exactly: weights in daN and lengths in in or mm are converted,
+ * WLLs in another unit than the first one are converted into it, part labels other than an
+ * anchor's and stock ids are dropped, a chain marked with a WLL but no grade is shown as
+ * having no legible mark.
+ *
+ * @example
+ * fromRequest(toRequest(exampleDraft())).draft.tiedowns.length; // 6
+ * fromRequest(toRequest(exampleDraft())).notes; // []
+ */
+export function fromRequest(request: SecurementCheckRequest): { draft: CheckDraft; notes: string[] } {
+  const notes = new Set<string>();
+  const { cargo } = request;
+  const weights = request.tiedowns.flatMap((t) => t.components.flatMap((c) => [c.wll, c.type === "wire-rope" ? c.nominalStrength : undefined]));
+  const firstUnit = weights.find((w) => w !== undefined)?.unit;
+  const wllUnit: DraftWeightUnit = firstUnit === "kg" ? "kg" : "lb";
+  const inUnit = (w: { value: number; unit: "lb" | "kg" | "daN" } | undefined): string => {
+    if (w === undefined) return "";
+    if (w.unit === wllUnit) return String(w.value);
+    notes.add(`WLLs are shown in ${wllUnit}; some were saved in ${w.unit} and are converted`);
+    const lb = toLb(w).value;
+    return String(Number((wllUnit === "lb" ? lb : lb * KG_PER_LB).toFixed(1)));
+  };
+  const weight =
+    cargo.weight.unit === "daN"
+      ? (notes.add("The weight was saved in daN and is shown in lb"), { value: String(Number(toLb(cargo.weight).value.toFixed(1))), unit: "lb" as const })
+      : { value: String(cargo.weight.value), unit: cargo.weight.unit };
+  const length =
+    cargo.length.unit === "ft" || cargo.length.unit === "m"
+      ? { value: String(cargo.length.value), unit: cargo.length.unit }
+      : cargo.length.unit === "in"
+        ? (notes.add("The length was saved in inches and is shown in feet"), { value: String(Number((cargo.length.value / 12).toFixed(3))), unit: "ft" as const })
+        : (notes.add("The length was saved in mm and is shown in metres"), { value: String(cargo.length.value / 1000), unit: "m" as const });
+
+  const part = (c: SecurementCheckRequest["tiedowns"][number]["components"][number]): ComponentDraft => {
+    const key = newKey("c");
+    if ((c.label && c.type !== "anchor") || c.gearId) notes.add("Part names and stock ids are not shown in the form");
+    switch (c.type) {
+      case "chain": {
+        const grade = c.marked === false ? "" : gradeChoice(c.grade);
+        if (grade === "" && c.marked !== false && c.wll !== undefined) notes.add("A chain marked with a WLL but no grade is shown as having no legible mark");
+        return { key, type: "chain", grade, size: sizeChoice(c.size, CHAIN_TABLE.rows), wll: c.marked === false ? "" : inUnit(c.wll) };
+      }
+      case "webbing":
+        return { key, type: "webbing", width: sizeChoice(c.width, WEBBING_TABLE.rows), wll: inUnit(c.wll) };
+      case "wire-rope":
+        return { key, type: "wire-rope", size: sizeChoice(c.size, WIRE_ROPE_TABLE.rows), construction: c.construction ?? "", nominalStrength: inUnit(c.nominalStrength), wll: c.marked === false ? "" : inUnit(c.wll) };
+      case "rope": {
+        if (c.marked === false && c.fibre && c.fibre !== "manila") notes.add("Unlabelled rope is shown with its fibre not known (both count as polypropylene)");
+        const fibre = c.marked === false && c.fibre !== "manila" ? "" : (c.fibre ?? "");
+        return { key, type: "rope", fibre: (ROPE_FIBRES as readonly string[]).includes(fibre) ? fibre : "", size: sizeChoice(c.size, ROPE_TABLES.polypropylene.rows), wll: c.marked === false ? "" : inUnit(c.wll) };
+      }
+      case "steel-strapping":
+        return { key, type: "steel-strapping", width: sizeChoice(c.width, STRAPPING_WIDTH_ROWS), thickness: sizeChoice(c.thickness, STRAPPING_THICKNESS_ROWS), wll: inUnit(c.wll) };
+      case "binder":
+        return { key, type: "binder", wll: inUnit(c.wll), rangeFrom: sizeChoice(c.chainSizeRange?.[0], CHAIN_TABLE.rows), rangeTo: sizeChoice(c.chainSizeRange?.[1], CHAIN_TABLE.rows) };
+      case "hook":
+      case "shackle":
+        return { key, type: c.type, grade: gradeChoice(c.grade), wll: inUnit(c.wll) };
+      case "anchor":
+        return { key, type: "anchor", label: c.label ?? "", wll: inUnit(c.wll) };
+    }
+  };
+
+  const draft: CheckDraft = {
+    cargo: {
+      weight: weight.value,
+      weightUnit: weight.unit,
+      length: length.value,
+      lengthUnit: length.unit,
+      kind: cargo.kind,
+      blockedAtFront: cargo.blockedAtFront ?? false,
+      articulated: cargo.articulated ?? false,
+      articulationRestrained: cargo.articulationRestrained ?? false,
+      accessories: [...(cargo.accessories ?? [])],
+    },
+    wllUnit,
+    tiedowns: request.tiedowns.map((t, i) => ({
+      key: newKey("t"),
+      label: t.label ?? `tiedown ${i + 1}`,
+      attachment: t.attachment,
+      secures: t.secures ?? "machine",
+      components: t.components.map(part),
+    })),
+  };
+  return { draft, notes: [...notes] };
 }

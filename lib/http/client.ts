@@ -1,17 +1,14 @@
 // The browser's side of the API v1: one caller for every screen that fetches JSON, so
 // refusals read the same everywhere. Client-safe (no server imports).
 
-export interface ApiIssue {
-  path: string;
-  message: string;
-}
+import type { FieldIssue } from "@/lib/field-issues";
 
 /** A refusal from the API: its status, its sentence, the fields at fault, and the whole answer. */
 export class ApiError extends Error {
   constructor(
     readonly status: number,
     message: string,
-    readonly issues: ApiIssue[] = [],
+    readonly issues: FieldIssue[] = [],
     readonly nearest: string[] = [],
     readonly code?: string,
     /** The JSON the API answered with its refusal (an import's 422 carries its report), if any. */

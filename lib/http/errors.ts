@@ -1,12 +1,12 @@
+import type { FieldIssue } from "@/lib/field-issues";
 import { isUuid } from "./ids";
 
 // One error type for every refusal the app makes on purpose. Route handlers turn it into
 // a JSON body with its status; server actions turn it into a message on the form.
 
-export interface FieldIssue {
-  path: string;
-  message: string;
-}
+// The one zod-issue mapper and its issue type live in lib/field-issues.ts (shared with the
+// securement engine and the browser); re-exported here for the route and action wrappers.
+export { zodIssues, type FieldIssue } from "@/lib/field-issues";
 
 export class AppError extends Error {
   /**
@@ -32,27 +32,6 @@ export const notFound = (message = "Not found.") => new AppError(404, message);
 export const conflict = (message: string, issues: FieldIssue[] = []) => new AppError(409, message, issues);
 export const gone = (message: string) => new AppError(410, message);
 export const tooManyRequests = (message: string) => new AppError(429, message);
-
-interface ZodLikeIssue {
-  path: ReadonlyArray<PropertyKey>;
-  message: string;
-  code?: string;
-  keys?: ReadonlyArray<string>;
-}
-
-/**
- * zod issues as `{ path: "tiedowns.0.wll", message }`, the shape every 400 uses. An unknown
- * key in a strict object is reported at its own path ("tiedowns.0.components.1.wl").
- */
-export function zodIssues(error: { issues: ReadonlyArray<ZodLikeIssue> }): FieldIssue[] {
-  return error.issues.flatMap((issue) => {
-    const path = issue.path.map(String).join(".");
-    if (issue.code === "unrecognized_keys" && issue.keys?.length) {
-      return issue.keys.map((key) => ({ path: path ? `${path}.${key}` : key, message: `Unknown field "${key}"` }));
-    }
-    return [{ path, message: issue.message }];
-  });
-}
 
 /** A route's id parameter; anything that is not a UUID is simply not found. */
 export function uuidParam(value: string | undefined, what = "item"): string {

@@ -28,7 +28,7 @@ export function importBody(summary: ImportSummary, extra: Partial<ImportBody> & 
     delimiter: extra.delimiter,
     encoding: extra.encoding,
     rows: s.rows, created: s.created, updated: s.updated, unchanged: s.unchanged, rejected: s.rejected,
-    errors: s.errors, errorCount: s.errorCount, fatal: s.fatal,
+    errors: s.errors, errorCount: s.errorCount, fatal: s.fatal, notes: s.notes ?? [],
     headers: s.headers, mapping: s.mapping, autoMapping: s.autoMapping, unknownColumns: s.unknownColumns, setByLinkyard: s.setByLinkyard,
     sample: s.sample, preview: s.preview,
     tagSheet: extra.tagSheet ?? null,

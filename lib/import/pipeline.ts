@@ -1,6 +1,7 @@
 // The import of one file, row by row in chunks, with the organisation's stock reached only
 // through an ImportStore (the database in the app, a Map in the tests). Memory holds one
 // chunk of rows, the first errors (capped) and a few preview rows, whatever the file's size.
+import { gradeMarkNote } from "@/lib/securement";
 import type { ItemInput } from "@/lib/stock/schemas";
 import { describeItem } from "@/lib/stock/describe";
 import type { CsvFatal, CsvRecord } from "./csv";
@@ -80,6 +81,8 @@ export interface ImportSummary {
   rejected: number;
   errors: RowError[];
   errorCount: number;
+  /** How rows that went in were read, where that needs saying (grade mark 40 read as grade 43); capped like errors. */
+  notes?: RowError[];
   /** The file cannot be imported at all (broken quotes, no Kind column, …), valid rows or not. */
   fatal: boolean;
   preview: PreviewRow[];
@@ -123,6 +126,7 @@ export async function runImport(records: AsyncIterable<CsvRecord | CsvFatal>, op
   summary.unknownColumns = auto.unknown.filter((h) => mapping[h] === null);
   for (const p of problems) addError({ line: headerLine, column: p.column, message: p.message });
   const reader = new RowReader(headers, mapping, options.yards);
+  const gradeColumn = reader.columns.find((c) => c.field === "grade");
   if (!reader.has("kind") && !reader.has("tagCode") && !reader.has("serial")) addError({ line: headerLine, column: null, message: KIND_COLUMN_MISSING });
   if (summary.errorCount) {
     summary.fatal = true;
@@ -224,6 +228,8 @@ export async function runImport(records: AsyncIterable<CsvRecord | CsvFatal>, op
         continue;
       }
       const row = storedFields(checked.input, existing);
+      const note = gradeColumn && gradeMarkNote(r.fields[gradeColumn.index] ?? "");
+      if (note && (summary.notes ??= []).length < maxErrors) summary.notes.push({ line: r.line, column: gradeColumn.header, message: `${note}.` });
       if (existing) {
         const changes = rowChanges(existing, row, yardName);
         if (Object.keys(changes).length === 0) {

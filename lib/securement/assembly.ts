@@ -3,11 +3,18 @@
  * anchor point(s) it is attached to (49 CFR 393.108(a), ECFRIO-108 text, verified), and the
  * result names the limiting part. Also flags parts that do not belong together.
  *
- * Compatibility findings and their severity (no 49 CFR text makes these a rule, so they are
- * warnings labelled "Common practice"; each one already shows up in the WLL when the weak
+ * A binder used outside its chain-size range is a `fail` and the tiedown is not rated (counts
+ * 0): binders are sold for a chain-size range (5/16–3/8 in, 3/8–1/2 in, ...; the ranges are
+ * common practice), a larger chain does not seat in the binder's hooks, and the binder's
+ * marked WLL is its rating for the chain it is made for only (393.108(b) takes the marking
+ * as the rating). Shared reference §8.
+ * - `BINDER_CHAIN_SIZE_OUT_OF_RANGE` (fail): the finding names the range and the chain size.
+ * - `BINDER_RANGE_NOT_GIVEN` (warn): the binder's range is not given, so the pairing was not
+ *   checked and the tiedown is rated as if the binder takes the chain.
+ *
+ * Other compatibility findings and their severity (no 49 CFR text makes these a rule, so they
+ * are warnings labelled "Common practice"; each one already shows up in the WLL when the weak
  * part has a lower marked WLL):
- * - `BINDER_CHAIN_SIZE_OUT_OF_RANGE`: a binder is sold for a chain-size range (5/16–3/8 in,
- *   3/8–1/2 in, ...) and is used only on chain inside it.
  * - `FITTING_GRADE_BELOW_CHAIN`: a hook or shackle of a lower grade than the chain.
  * - `MIXED_CHAIN_IN_TIEDOWN`: chains of different sizes or grades in one tiedown.
  * - `ANCHOR_NOT_LISTED`: no anchor point listed, so its WLL could not be taken into account.
@@ -18,12 +25,14 @@
  *
  * @module
  */
+import type { RatingErrorCode } from "./errors";
 import { RatingError } from "./errors";
 import type { Finding } from "./findings";
 import { SOURCES } from "./findings";
+import { formatLbKg } from "./format";
 import { parseGrade } from "./grades";
-import type { ComponentRating } from "./ratings";
-import { componentWll } from "./ratings";
+import type { ComponentRating } from "./marking";
+import { componentWll } from "./marking";
 import type { Component, ComponentType, Tiedown } from "./request";
 import { TIEDOWN_MATERIALS } from "./request";
 import type { ParsedSize, SizeInput } from "./sizes";
@@ -48,7 +57,7 @@ export interface AssembledComponent {
   readonly basis: ComponentRating["basis"] | "not-rated";
   readonly source: string;
   readonly status?: ComponentRating["status"];
-  readonly error?: { readonly code: RatingError["code"]; readonly message: string; readonly nearest: readonly string[] };
+  readonly error?: { readonly code: RatingErrorCode | "BINDER_CHAIN_SIZE_OUT_OF_RANGE"; readonly message: string; readonly nearest: readonly string[] };
 }
 
 /**
@@ -125,7 +134,7 @@ export function assembleTiedown(tiedown: Tiedown, index = 0): AssembledTiedown {
       });
       for (const f of r.findings) {
         const { field, ...rest } = f;
-        findings.push({ ...rest, message: `${where}: ${f.message}`, tiedown: index, component: i, path: `${base}.components.${i}${field ? `.${field}` : ""}` });
+        findings.push({ ...rest, ...said(where, f.message), tiedown: index, component: i, path: `${base}.components.${i}${field ? `.${field}` : ""}` });
       }
     } catch (e) {
       if (!(e instanceof RatingError)) throw e;
@@ -140,7 +149,7 @@ export function assembleTiedown(tiedown: Tiedown, index = 0): AssembledTiedown {
       findings.push({
         code: e.code,
         severity: "fail",
-        message: `${where}: ${e.message}. This tiedown counts 0 toward the aggregate until it is corrected`,
+        ...said(where, `${e.message}. The tiedown counts 0 toward the aggregate until it is corrected`),
         source: e.code === "MISSING_WLL" ? SOURCES.assemblyWll : "49 CFR 393.108",
         tiedown: index,
         component: i,
@@ -148,6 +157,44 @@ export function assembleTiedown(tiedown: Tiedown, index = 0): AssembledTiedown {
       });
     }
   });
+
+  // A binder outside its chain-size range cannot seat the chain and its marking is not a
+  // rating for that chain: the binder is not rated, so the tiedown counts 0.
+  const chains = chainFacts(tiedown.components);
+  for (const p of binderPairings(tiedown.components, chains)) {
+    const binderWhere = `${name}, ${componentName(tiedown.components[p.binder]!, p.binder)}`;
+    if (p.range === undefined) {
+      findings.push({
+        code: "BINDER_RANGE_NOT_GIVEN",
+        severity: "warn",
+        ...said(
+          binderWhere,
+          `The binder's chain-size range is not given, so whether it takes the ${p.chain.display} chain (component ${p.chainIndex + 1}) was not checked; the tiedown is rated as if it does. Enter the chain sizes the binder is made for, from its stamp or its maker's data`,
+        ),
+        source: SOURCES.binderRange,
+        tiedown: index,
+        component: p.binder,
+        path: `${base}.components.${p.binder}.chainSizeRange`,
+      });
+      continue;
+    }
+    if (p.fits) continue;
+    const binder = components[p.binder]!;
+    const marking = binder.basis === "marked" ? `its marked WLL of ${formatLbKg(binder.wllLb)} holds` : "a binder's marked WLL holds";
+    const detail = `The binder is made for ${p.range[0].display} to ${p.range[1].display} chain, but the chain (component ${p.chainIndex + 1}) is ${p.chain.display}. The chain does not seat in the binder's hooks, and ${marking} only for the chain the binder is made for, so the tiedown is not rated and counts 0 toward the aggregate; use a binder made for ${p.chain.display} chain`;
+    if (binder.basis !== "not-rated") {
+      components[p.binder] = { ...binder, wllLb: 0, basis: "not-rated", error: { code: "BINDER_CHAIN_SIZE_OUT_OF_RANGE", message: detail, nearest: [] } };
+    }
+    findings.push({
+      code: "BINDER_CHAIN_SIZE_OUT_OF_RANGE",
+      severity: "fail",
+      ...said(binderWhere, detail),
+      source: SOURCES.binderRange,
+      tiedown: index,
+      component: p.binder,
+      path: `${base}.components.${p.binder}.chainSizeRange`,
+    });
+  }
 
   const rated = components.every((c) => c.basis !== "not-rated");
   let limiting: AssembledComponent | undefined;
@@ -158,7 +205,7 @@ export function assembleTiedown(tiedown: Tiedown, index = 0): AssembledTiedown {
   }
   const wllLb = rated && limiting ? limiting.wllLb : 0;
 
-  findings.push(...compatibility(tiedown, index, name));
+  findings.push(...compatibility(tiedown, index, name, chains));
 
   return {
     wllLb,
@@ -171,7 +218,56 @@ export function assembleTiedown(tiedown: Tiedown, index = 0): AssembledTiedown {
   };
 }
 
-function compatibility(tiedown: Tiedown, index: number, name: string): Finding[] {
+/** A finding's words: where it applies, then what (kept apart in `detail` for grouping). */
+function said(where: string, detail: string): { message: string; detail: string } {
+  return { message: `${where}: ${detail}`, detail };
+}
+
+interface ChainFact {
+  readonly i: number;
+  readonly size: ParsedSize | undefined;
+  readonly inches: number | undefined;
+  readonly grade: number | undefined;
+}
+
+function chainFacts(parts: readonly Component[]): ChainFact[] {
+  return parts
+    .map((c, i) => ({ c, i }))
+    .filter((x): x is { c: Extract<Component, { type: "chain" }>; i: number } => x.c.type === "chain")
+    .map(({ c, i }) => {
+      const size = parseOptionalSize(c.size);
+      return { i, size, inches: size ? chainTradeInches(size) : undefined, grade: c.marked === false || c.grade === undefined ? undefined : parseGrade(c.grade) };
+    });
+}
+
+interface BinderPairing {
+  readonly binder: number;
+  readonly chainIndex: number;
+  readonly chain: ParsedSize;
+  /** The binder's range as read, or undefined when it is not given. */
+  readonly range: readonly [ParsedSize, ParsedSize] | undefined;
+  readonly fits: boolean;
+}
+
+/** Each binder with each chain of known size in the same tiedown. */
+function binderPairings(parts: readonly Component[], chains: readonly ChainFact[]): BinderPairing[] {
+  const out: BinderPairing[] = [];
+  parts.forEach((c, i) => {
+    if (c.type !== "binder") return;
+    const lo = c.chainSizeRange ? tryParseSize(c.chainSizeRange[0]) : undefined;
+    const hi = c.chainSizeRange ? tryParseSize(c.chainSizeRange[1]) : undefined;
+    const range = lo && hi ? ([lo, hi].sort((a, b) => chainTradeInches(a) - chainTradeInches(b)) as [ParsedSize, ParsedSize]) : undefined;
+    if (c.chainSizeRange && !range) return; // unreadable: the schema refuses it before this
+    for (const chain of chains) {
+      if (!chain.size || chain.inches === undefined) continue;
+      const fits = range === undefined || (chain.inches >= chainTradeInches(range[0]) - 1e-9 && chain.inches <= chainTradeInches(range[1]) + 1e-9);
+      out.push({ binder: i, chainIndex: chain.i, chain: chain.size, range, fits });
+    }
+  });
+  return out;
+}
+
+function compatibility(tiedown: Tiedown, index: number, name: string, chains: readonly ChainFact[]): Finding[] {
   const out: Finding[] = [];
   const base = `tiedowns.${index}`;
   const parts = tiedown.components;
@@ -180,7 +276,7 @@ function compatibility(tiedown: Tiedown, index: number, name: string): Finding[]
     out.push({
       code: "NO_TIEDOWN_MATERIAL",
       severity: "warn",
-      message: `${name} lists no chain, webbing, wire rope, rope or steel strapping; its WLL is taken from the parts listed only`,
+      ...said(name, "No chain, webbing, wire rope, rope or steel strapping is listed; the tiedown's WLL is taken from the parts listed only"),
       source: SOURCES.assemblyWll,
       tiedown: index,
       path: `${base}.components`,
@@ -190,20 +286,12 @@ function compatibility(tiedown: Tiedown, index: number, name: string): Finding[]
     out.push({
       code: "ANCHOR_NOT_LISTED",
       severity: "warn",
-      message: `${name} lists no anchor point. A tiedown's WLL is the lower of its parts and the anchor points it is attached to; add the anchor point's WLL so it is taken into account`,
+      ...said(name, "No anchor point is listed. A tiedown's WLL is the lower of its parts and the anchor points it is attached to; add the anchor point's WLL so it is taken into account"),
       source: SOURCES.assemblyWll,
       tiedown: index,
       path: `${base}.components`,
     });
   }
-
-  const chains = parts
-    .map((c, i) => ({ c, i }))
-    .filter((x): x is { c: Extract<Component, { type: "chain" }>; i: number } => x.c.type === "chain")
-    .map(({ c, i }) => {
-      const size = parseOptionalSize(c.size);
-      return { i, size, inches: size ? chainTradeInches(size) : undefined, grade: c.marked === false || c.grade === undefined ? undefined : parseGrade(c.grade) };
-    });
 
   const sizes = new Set(chains.map((c) => c.inches).filter((x) => x !== undefined));
   const grades = new Set(chains.map((c) => c.grade).filter((x) => x !== undefined));
@@ -211,7 +299,7 @@ function compatibility(tiedown: Tiedown, index: number, name: string): Finding[]
     out.push({
       code: "MIXED_CHAIN_IN_TIEDOWN",
       severity: "warn",
-      message: `${name} joins chains of different ${sizes.size > 1 ? "sizes" : "grades"}${sizes.size > 1 && grades.size > 1 ? " and grades" : ""}; the weakest one sets the tiedown's WLL, and parts are usually matched to one chain size and grade`,
+      ...said(name, `Chains of different ${sizes.size > 1 ? "sizes" : "grades"}${sizes.size > 1 && grades.size > 1 ? " and grades" : ""} are joined; the weakest one sets the tiedown's WLL, and parts are usually matched to one chain size and grade`),
       source: SOURCES.commonPractice,
       tiedown: index,
       path: `${base}.components`,
@@ -219,25 +307,6 @@ function compatibility(tiedown: Tiedown, index: number, name: string): Finding[]
   }
 
   parts.forEach((c, i) => {
-    if (c.type === "binder" && c.chainSizeRange) {
-      const lo = tryParseSize(c.chainSizeRange[0]);
-      const hi = tryParseSize(c.chainSizeRange[1]);
-      if (!lo || !hi) return;
-      const [min, max] = [chainTradeInches(lo), chainTradeInches(hi)].sort((a, b) => a - b) as [number, number];
-      for (const chain of chains) {
-        if (chain.size && chain.inches !== undefined && (chain.inches < min - 1e-9 || chain.inches > max + 1e-9)) {
-          out.push({
-            code: "BINDER_CHAIN_SIZE_OUT_OF_RANGE",
-            severity: "warn",
-            message: `${name}: the binder (component ${i + 1}) is made for ${lo.display} to ${hi.display} chain, but the chain (component ${chain.i + 1}) is ${chain.size.display}; use a binder sized for the chain`,
-            source: SOURCES.commonPractice,
-            tiedown: index,
-            component: i,
-            path: `${base}.components.${i}.chainSizeRange`,
-          });
-        }
-      }
-    }
     if ((c.type === "hook" || c.type === "shackle") && c.grade !== undefined) {
       const fittingGrade = parseGrade(c.grade);
       const chainGrades = chains.map((x) => x.grade).filter((g): g is number => g !== undefined);
@@ -247,7 +316,7 @@ function compatibility(tiedown: Tiedown, index: number, name: string): Finding[]
           out.push({
             code: "FITTING_GRADE_BELOW_CHAIN",
             severity: "warn",
-            message: `${name}: the grade ${fittingGrade} ${c.type} (component ${i + 1}) is a lower grade than the grade ${top} chain; it limits the tiedown to its own WLL, and fittings are usually matched to the chain's grade`,
+            ...said(`${name}, ${componentName(c, i)}`, `The grade ${fittingGrade} ${c.type} is a lower grade than the grade ${top} chain; it limits the tiedown to its own WLL, and fittings are usually matched to the chain's grade`),
             source: SOURCES.commonPractice,
             tiedown: index,
             component: i,

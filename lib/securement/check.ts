@@ -7,7 +7,8 @@
  * - Aggregate WLL ≥ ½ cargo weight, direct and same-side tiedowns counting ½ of their WLL,
  *   across tiedowns their full WLL: 49 CFR 393.106(d) (aggregate.ts).
  * - Minimum number: 49 CFR 393.130(c)(1) (4, machines of 10,000 lb or more) or 49 CFR 393.110
- *   (by length) (minimum.ts).
+ *   (by length), read with both its imperial and its metric figures, the higher count
+ *   required (minimum.ts).
  * - Accessories lowered and secured (393.130(b)(1)); articulation restrained (393.130(b)(2)):
  *   fail at 10,000 lb or more, where 393.130 applies; warn below it, as common practice
  *   (393.130 is optional for lighter machines).
@@ -34,6 +35,7 @@
  *
  * @module
  */
+import { zodIssues } from "@/lib/field-issues";
 import { countedWll, COUNT_FACTORS, meetsAggregate, requiredAggregateWll } from "./aggregate";
 import type { AssembledComponent } from "./assembly";
 import { assembleTiedown } from "./assembly";
@@ -44,8 +46,8 @@ import { SOURCES, sortFindings } from "./findings";
 import { formatFeet, formatLbKg, formatNumber, roundHalfUp } from "./format";
 import { HEAVY_MACHINE_MIN_TIEDOWNS, isHeavyMachine, minimumTiedowns } from "./minimum";
 import type { Attachment, CargoKind, ComponentType, SecurementCheckRequest } from "./request";
-import { issuesToPaths, securementCheckRequestSchema } from "./schema";
-import { KG_PER_LB, M_PER_FT, settle, toFeet, toLb } from "./units";
+import { securementCheckRequestSchema } from "./schema";
+import { KG_PER_LB, M_PER_FT, settle, toFeet, toKg, toLb, toMillimetres } from "./units";
 
 /**
  * The Handbook's per-tiedown WLL for machines of 10,000 lb or more: 2,268 kg (5,000 lb).
@@ -117,6 +119,11 @@ export interface SecurementCheckResult {
   readonly aggregateWllLb: number;
   readonly aggregateWllKg: number;
   readonly minimumTiedowns: number;
+  /**
+   * When 49 CFR 393.110's imperial and metric figures give different minimums: both counts
+   * and which one set `minimumTiedowns` (the higher). Absent when they agree.
+   */
+  readonly minimumReadings?: { readonly imperial: number; readonly metric: number; readonly setBy: "imperial" | "metric" };
   readonly tiedownsCounted: number;
   readonly rule: string;
   readonly ruleSource: string;
@@ -164,7 +171,7 @@ function plural(n: number, word: string): string {
  */
 export function checkSecurement(request: SecurementCheckRequest): SecurementCheckResult {
   const parsed = securementCheckRequestSchema.safeParse(request);
-  if (!parsed.success) throw new RequestValidationError(issuesToPaths(parsed.error));
+  if (!parsed.success) throw new RequestValidationError(zodIssues(parsed.error));
   const { cargo, tiedowns } = parsed.data;
 
   const weightLb = settle(toLb(cargo.weight).value);
@@ -213,7 +220,15 @@ export function checkSecurement(request: SecurementCheckRequest): SecurementChec
   }
 
   // Minimum number of tiedowns, 49 CFR 393.130(c)(1) or 393.110.
-  const minimum = minimumTiedowns({ kind: cargo.kind, weightLb, lengthFt, blockedAtFront: cargo.blockedAtFront ?? false });
+  const minimum = minimumTiedowns({
+    kind: cargo.kind,
+    weightLb,
+    lengthFt,
+    blockedAtFront: cargo.blockedAtFront ?? false,
+    lengthM: settle(toMillimetres(cargo.length).value / 1000),
+    weightKg: settle(toKg(cargo.weight).value),
+  });
+  const setBy = minimum.setBy && minimum.readings ? `, set by the ${minimum.setBy} reading of ${minimum.source} (the ${minimum.setBy === "metric" ? "imperial" : "metric"} figures give ${minimum.readings[minimum.setBy === "metric" ? "imperial" : "metric"]}; where they differ the higher count is required)` : "";
   const onMachine = results.filter((t) => t.countsTowardMinimum);
   const onAccessories = results.length - onMachine.length;
   if (onMachine.length < minimum.count) {
@@ -224,7 +239,7 @@ export function checkSecurement(request: SecurementCheckRequest): SecurementChec
     findings.push({
       code: "TOO_FEW_TIEDOWNS",
       severity: "fail",
-      message: `${plural(onMachine.length, "tiedown")} ${onMachine.length === 1 ? "holds" : "hold"} ${what}; ${minimum.source} requires at least ${minimum.count} ${why}${onAccessories > 0 ? ` (the ${plural(onAccessories, "tiedown")} on accessories ${onAccessories === 1 ? "is" : "are"} not counted here)` : ""}`,
+      message: `${plural(onMachine.length, "tiedown")} ${onMachine.length === 1 ? "holds" : "hold"} ${what}; ${minimum.source} requires at least ${minimum.count} ${why}${setBy}${onAccessories > 0 ? ` (the ${plural(onAccessories, "tiedown")} on accessories ${onAccessories === 1 ? "is" : "are"} not counted here)` : ""}`,
       source: minimum.source,
       path: "tiedowns",
     });
@@ -313,6 +328,7 @@ export function checkSecurement(request: SecurementCheckRequest): SecurementChec
     aggregateWllLb: lb(aggregate),
     aggregateWllKg: kg(aggregate),
     minimumTiedowns: minimum.count,
+    ...(minimum.setBy && minimum.readings ? { minimumReadings: { ...minimum.readings, setBy: minimum.setBy } } : {}),
     tiedownsCounted: onMachine.length,
     rule: minimum.rule,
     ruleSource: minimum.source,

@@ -3,6 +3,7 @@
  *
  * @module
  */
+import type { FieldIssue } from "@/lib/field-issues";
 
 /**
  * Stable codes of {@link RatingError}.
@@ -79,17 +80,6 @@ export class RatingError extends Error {
 }
 
 /**
- * One problem in a request, with a dotted path such as `tiedowns.0.components.1.wll`.
- *
- * @example
- * const issue: PathIssue = { path: "cargo.weight.value", message: "Weight must be greater than 0" };
- */
-export interface PathIssue {
-  readonly path: string;
-  readonly message: string;
-}
-
-/**
  * A request that does not match the request schema. `checkSecurement` throws it when it is
  * called with a body that was not validated first; `issues` carries dotted paths for a 400.
  *
@@ -102,9 +92,9 @@ export interface PathIssue {
  * }
  */
 export class RequestValidationError extends Error {
-  readonly issues: readonly PathIssue[];
+  readonly issues: readonly FieldIssue[];
 
-  constructor(issues: readonly PathIssue[]) {
+  constructor(issues: readonly FieldIssue[]) {
     super(
       `The securement check request is not valid: ${issues
         .map((i) => `${i.path || "(request)"}: ${i.message}`)

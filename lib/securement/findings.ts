@@ -43,6 +43,8 @@ export const FINDING_CODES = [
   "RATED_AS_UNMARKED",
   "UNMARKED_WLL_IGNORED",
   "ROPE_FIBRE_UNKNOWN",
+  "WIRE_ROPE_RATED_FROM_TABLE",
+  "GRADE_MARK_READ_AS",
   "MARKED_ABOVE_TABLE",
   "ANCHOR_NOT_LISTED",
   "NO_TIEDOWN_MATERIAL",
@@ -50,6 +52,7 @@ export const FINDING_CODES = [
   "HANDBOOK_TIEDOWN_WLL_BELOW_5000",
   "FEWER_THAN_FOUR_CORNERS",
   "BINDER_CHAIN_SIZE_OUT_OF_RANGE",
+  "BINDER_RANGE_NOT_GIVEN",
   "FITTING_GRADE_BELOW_CHAIN",
   "MIXED_CHAIN_IN_TIEDOWN",
   "EDGE_PROTECTION_REMINDER",
@@ -66,7 +69,9 @@ export type FindingCode = (typeof FINDING_CODES)[number];
 /**
  * One finding. `tiedown` and `component` are 0-based indexes into the request, and `path`
  * is the dotted request path they point at (e.g. "tiedowns.0.components.1"), when the
- * finding is about one tiedown or component.
+ * finding is about one tiedown or component. `detail` is then the message without the
+ * words that say where ("Tiedown \"front left\", component 2 (binder): "), so that the same
+ * finding on several tiedowns can be told apart from different ones (grouping.ts).
  *
  * @example
  * const f: Finding = {
@@ -87,6 +92,7 @@ export interface Finding {
   readonly tiedown?: number;
   readonly component?: number;
   readonly path?: string;
+  readonly detail?: string;
 }
 
 /**
@@ -103,6 +109,8 @@ export const SOURCES = {
   unmarkedChain: "49 CFR 393.108(d)",
   unmarkedWireRope: "49 CFR 393.108(e)",
   unmarkedManila: "49 CFR 393.108(f)",
+  gradeMarks: "49 CFR 393.108, chain mark examples (grade 43 also stamped 40 or 400: New York State cargo manual's copy; trade practice)",
+  binderRange: "49 CFR 393.108(b) (a marked WLL is the rating for the chain the binder is made for); chain-size ranges of binders: common practice",
   minimumCount: "49 CFR 393.110",
   heavyMachineCount: "49 CFR 393.130(c)(1)",
   accessories: "49 CFR 393.130(b)(1)",

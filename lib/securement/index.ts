@@ -7,7 +7,7 @@
  * 1. A request that does not match the schema (wrong types, unknown units or keys, an
  *    unreadable size or grade, `secures` naming no declared accessory) is a zod problem:
  *    validate with `securementCheckRequestSchema.safeParse` / `ratingQuerySchema.safeParse`
- *    and answer 400 with `issuesToPaths(error)` (`[{ path: "tiedowns.0.components.1.wll", message }]`).
+ *    and answer 400 with `zodIssues(error)` (`[{ path: "tiedowns.0.components.1.wll", message }]`).
  *    `checkSecurement` validates again and throws `RequestValidationError` (same `issues`) if
  *    it was handed an unvalidated body.
  * 2. In a check, a component that cannot be rated (size not in a 393.108 table, binder,
@@ -19,11 +19,11 @@
  *    `field`; `toJSON()` gives the body): answer 400 with it. Any other exception is a bug.
  *
  * @example
- * import { checkSecurement, issuesToPaths, securementCheckRequestSchema } from "@/lib/securement";
+ * import { checkSecurement, securementCheckRequestSchema, zodIssues } from "@/lib/securement";
  *
  * export async function POST(req: Request) {
  *   const parsed = securementCheckRequestSchema.safeParse(await req.json());
- *   if (!parsed.success) return Response.json({ issues: issuesToPaths(parsed.error) }, { status: 400 });
+ *   if (!parsed.success) return Response.json({ issues: zodIssues(parsed.error) }, { status: 400 });
  *   return Response.json(checkSecurement(parsed.data));
  * }
  *
@@ -35,17 +35,23 @@ export { assembleTiedown } from "./assembly";
 export { SECUREMENT_CAUTION } from "./caution";
 export type { ComponentResult, SecurementCheckResult, TiedownResult } from "./check";
 export { HANDBOOK_MIN_TIEDOWN_WLL_LB, checkSecurement } from "./check";
-export type { PathIssue, RatingErrorCode } from "./errors";
+export type { RatingErrorCode } from "./errors";
+export type { FieldIssue } from "@/lib/field-issues";
+export { zodIssues } from "@/lib/field-issues";
 export { RatingError, RequestValidationError } from "./errors";
 export type { Finding, FindingCode, Severity } from "./findings";
 export { FINDING_CODES, SOURCES, sortFindings } from "./findings";
 export { formatLbKg, formatNumber, roundHalfUp } from "./format";
+export type { FindingGroup } from "./grouping";
+export { groupFindings } from "./grouping";
 export type { ChainGrade, GradeInput } from "./grades";
-export { CHAIN_GRADES, GRADE_NAMES, isChainGrade, parseGrade } from "./grades";
+export { CHAIN_GRADES, GRADE_NAMES, gradeMarkNote, isChainGrade, parseGrade } from "./grades";
 export type { MinimumTiedowns, MinimumTiedownsInput } from "./minimum";
 export { HEAVY_MACHINE_LB, HEAVY_MACHINE_MIN_TIEDOWNS, isHeavyMachine, minimumTiedowns } from "./minimum";
-export type { ComponentFinding, ComponentRating, DefaultRating, Material, RatingQuery } from "./ratings";
-export { componentWll, defaultRating } from "./ratings";
+export type { DefaultRating, Material, RatingQuery } from "./lookup";
+export { defaultRating, formatTableWll, manilaNote } from "./lookup";
+export type { ComponentFinding, ComponentRating } from "./marking";
+export { componentWll } from "./marking";
 export type {
   AnchorComponent,
   Attachment,
@@ -70,7 +76,6 @@ export {
   cargoSchema,
   componentSchema,
   gradeSchema,
-  issuesToPaths,
   lengthSchema,
   ratingQuerySchema,
   securementCheckRequestSchema,
@@ -78,6 +83,8 @@ export {
   tiedownSchema,
   weightSchema,
 } from "./schema";
+export type { SavedCheckAnswer, SavedCheckInput, StoredCheck } from "./saved";
+export { maySaveOver, savedCheckAnswer, savedCheckInputSchema } from "./saved";
 export type { ParsedSize, SizeInput, SizedRow } from "./sizes";
 export { findRow, inchLabel, nearestRows, parseSize, rowDisplay, sizeMatchesRow, tryParseSize } from "./sizes";
 export type { ChainRow, RopeFibre, SizeRow, StrappingRow, TableStatus, WllCell, WllTable } from "./tables";

@@ -69,15 +69,21 @@ export interface WebbingComponent extends ComponentBase {
 }
 
 /**
- * Wire rope. Unmarked wire rope (construction not given) is rated as 6 × 37 fiber core.
+ * Wire rope. Without a marked WLL it is rated at one quarter of its `nominalStrength` (the
+ * Wire Rope Users Manual's figure for its construction, 393.108(e)(1)) when that is given;
+ * otherwise from the 6 × 37 fiber core table (393.108(e)(2)), with a warning when the
+ * `construction` ("6x19 IWRC") is known but its nominal strength was not given.
  *
  * @example
  * const r: WireRopeComponent = { type: "wire-rope", size: "1/2 in" };
+ * const known: WireRopeComponent = { type: "wire-rope", size: "1/2 in", construction: "6x19 IWRC", nominalStrength: { value: 26600, unit: "lb" } };
  */
 export interface WireRopeComponent extends ComponentBase {
   readonly type: "wire-rope";
   readonly size?: SizeInput | undefined;
   readonly marked?: boolean | undefined;
+  readonly construction?: string | undefined;
+  readonly nominalStrength?: Weight | undefined;
 }
 
 /**

@@ -1,6 +1,6 @@
 /**
- * Zod 4 schemas for the securement check request and the ratings query, and a helper that
- * turns a ZodError into `{ path, message }` pairs for a 400 answer.
+ * Zod 4 schemas for the securement check request and the ratings query. A ZodError becomes
+ * `{ path, message }` pairs for a 400 answer through `zodIssues` (lib/field-issues.ts).
  *
  * Schema-level problems (wrong type, unknown unit, unreadable size or grade, a `secures`
  * that names no declared accessory, unknown keys) are zod issues. A size that reads well but
@@ -14,7 +14,6 @@
  */
 import { z } from "zod";
 import { ATTACHMENTS } from "./aggregate";
-import type { PathIssue } from "./errors";
 import { parseGrade } from "./grades";
 import type { Component, SecurementCheckRequest } from "./request";
 import { tryParseSize } from "./sizes";
@@ -82,7 +81,14 @@ const markedFlag = z.boolean().optional();
 export const componentSchema = z.discriminatedUnion("type", [
   z.strictObject({ type: z.literal("chain"), grade: gradeSchema.optional(), size: sizeSchema.optional(), marked: markedFlag, ...base }),
   z.strictObject({ type: z.literal("webbing"), width: sizeSchema.optional(), marked: markedFlag, ...base }),
-  z.strictObject({ type: z.literal("wire-rope"), size: sizeSchema.optional(), marked: markedFlag, ...base }),
+  z.strictObject({
+    type: z.literal("wire-rope"),
+    size: sizeSchema.optional(),
+    marked: markedFlag,
+    construction: z.string().trim().min(1, { error: "The construction is empty" }).max(40).optional(),
+    nominalStrength: weightSchema.optional(),
+    ...base,
+  }),
   z.strictObject({ type: z.literal("rope"), fibre: z.enum(ROPE_FIBRES).optional(), size: sizeSchema.optional(), marked: markedFlag, ...base }),
   z.strictObject({ type: z.literal("steel-strapping"), width: sizeSchema.optional(), thickness: sizeSchema.optional(), marked: markedFlag, ...base }),
   z.strictObject({ type: z.literal("binder"), chainSizeRange: z.tuple([sizeSchema, sizeSchema]).optional(), ...base }),
@@ -127,7 +133,7 @@ export const cargoSchema = z.strictObject({
  *
  * @example
  * const parsed = securementCheckRequestSchema.safeParse(body);
- * if (!parsed.success) return Response.json({ issues: issuesToPaths(parsed.error) }, { status: 400 });
+ * if (!parsed.success) return Response.json({ issues: zodIssues(parsed.error) }, { status: 400 });
  * return Response.json(checkSecurement(parsed.data));
  */
 export const securementCheckRequestSchema = z
@@ -203,25 +209,3 @@ export type RatingQueryInput = z.infer<typeof ratingQuerySchema>;
 type Assert<T extends true> = T;
 type _SchemaMatchesRequest = Assert<SecurementCheckRequestInput extends SecurementCheckRequest ? true : false>;
 type _SchemaMatchesComponent = Assert<z.infer<typeof componentSchema> extends Component ? true : false>;
-
-/**
- * Turns a ZodError into `{ path, message }` pairs with dotted paths
- * ("tiedowns.0.components.1.wll"). An unknown key is reported at its own path.
- *
- * @example
- * const r = securementCheckRequestSchema.safeParse(body);
- * if (!r.success) issuesToPaths(r.error);
- * // [{ path: "tiedowns.0.components.1.wll.value", message: "The value must be greater than 0" }]
- */
-export function issuesToPaths(error: z.ZodError): PathIssue[] {
-  const out: PathIssue[] = [];
-  for (const issue of error.issues) {
-    const path = issue.path.map((p) => String(p)).join(".");
-    if (issue.code === "unrecognized_keys") {
-      for (const key of issue.keys) out.push({ path: path ? `${path}.${key}` : key, message: `Unknown field "${key}"` });
-    } else {
-      out.push({ path, message: issue.message });
-    }
-  }
-  return out;
-}

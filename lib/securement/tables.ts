@@ -7,12 +7,17 @@
  * Under 393.108(b) these are the WLLs of tiedown material that is not marked by its maker;
  * a marked WLL is used as marked.
  *
- * Each table and row carries its verification status:
- * - "verified": read in retrieved text (JJK-108 copy of the tables, FORD-108 independent
- *   copy of the chain table; see the shared reference file).
- * - "from-memory": FROM MEMORY, not verified against the primary text. A search of stored
- *   public copies (eCFR mirrors, FMCSA pages, rope makers' tables) did not turn up the rows
- *   in question, so the values are kept as the reference gives them.
+ * Each table and row carries its verification status (shared reference, §1.4):
+ * - "verified": read in retrieved text. Sources, by table:
+ *   - chain, synthetic webbing, wire rope 1/4–3/4 in: the JJK-108 copy of the tables (the
+ *     chain table also in the independent FORD-108 copy);
+ *   - wire rope 7/8 in and 1 in, manila, polypropylene, polyester and nylon rope: the 1994
+ *     final rule's table (59 FR, 6 July 1994, "Tables to §393.102(b)(6)"), which the 2002
+ *     §393.108 tables carried over (every row it shares with JJK-108 is identical); the
+ *     manila table also in the New York State cargo manual's copy;
+ *   - steel strapping row 1: secondary copies quoting the FMCSA rules.
+ * - "from-memory": FROM MEMORY, not verified against the primary text (no copy found in the
+ *   sources read): the double braided nylon rope table and steel strapping rows 2–8.
  *
  * @module
  */
@@ -145,11 +150,13 @@ export const WEBBING_TABLE: WllTable<SizeRow> = deepFreeze({
 });
 
 // 49 CFR 393.108, wire rope (6 x 37, fiber core) table: WLL kg (lb) by diameter mm (in).
-// Rows 1/4 to 3/4 in: JJK-108 copy, verified. Rows 7/8 in and 1 in: FROM MEMORY, not verified
-// against the primary text (the retrieved copy stops at "22 (7/8").
+// Rows 1/4 to 3/4 in: JJK-108 copy, verified. Rows 7/8 in and 1 in: verified against the
+// 1994 final rule's table (59 FR, 6 July 1994), which the 2002 tables carried over; both are
+// also one quarter of the published 6 x 19 fibre-core breaking strengths, 64,400 lb and
+// 83,600 lb. (An earlier copy of these rows, from memory, said 15,700 and 20,700 lb: wrong.)
 /**
- * 49 CFR 393.108, wire rope (6 × 37, fiber core) table. Rows 1/4–3/4 in verified (JJK-108
- * copy); rows 7/8 in and 1 in FROM MEMORY, not verified against the primary text.
+ * 49 CFR 393.108, wire rope (6 × 37, fiber core) table. Every row verified: 1/4–3/4 in in
+ * the JJK-108 copy, 7/8 in and 1 in in the 1994 final rule's table the 2002 rule carried over.
  *
  * @example
  * WIRE_ROPE_TABLE.rows.find((r) => r.label === "1/2")?.lb; // 5300
@@ -158,7 +165,7 @@ export const WIRE_ROPE_TABLE: WllTable<SizeRow> = deepFreeze({
   id: "wire-rope",
   title: "49 CFR 393.108 wire rope (6 x 37, fiber core) table",
   source: "49 CFR 393.108, wire rope (6 x 37, fiber core) table",
-  status: "from-memory",
+  status: "verified",
   rows: [
     { ...size("1/4", 0.25, 7), kg: 640, lb: 1400, status: "verified" },
     { ...size("5/16", 0.3125, 8), kg: 950, lb: 2100, status: "verified" },
@@ -167,8 +174,8 @@ export const WIRE_ROPE_TABLE: WllTable<SizeRow> = deepFreeze({
     { ...size("1/2", 0.5, 13), kg: 2400, lb: 5300, status: "verified" },
     { ...size("5/8", 0.625, 16), kg: 3770, lb: 8300, status: "verified" },
     { ...size("3/4", 0.75, 20), kg: 4940, lb: 10900, status: "verified" },
-    { ...size("7/8", 0.875, 22), kg: 7140, lb: 15700, status: "from-memory" }, // FROM MEMORY, not verified against the primary text
-    { ...size("1", 1, 25), kg: 9390, lb: 20700, status: "from-memory" }, // FROM MEMORY, not verified against the primary text
+    { ...size("7/8", 0.875, 22), kg: 7300, lb: 16100, status: "verified" }, // 1994 final rule's table; 1/4 of 64,400 lb
+    { ...size("1", 1, 25), kg: 9480, lb: 20900, status: "verified" }, // 1994 final rule's table; 1/4 of 83,600 lb
   ],
 });
 
@@ -188,45 +195,48 @@ export const ROPE_FIBRES = ["manila", "polypropylene", "polyester", "nylon", "do
  */
 export type RopeFibre = (typeof ROPE_FIBRES)[number];
 
-// The rope tables share their size column: 10 (3/8), 11 (7/16), 12 (1/2), 16 (5/8), 20 (3/4), 25 (1).
-// Note the 1/2 in rope row is 12 mm (the chain and wire rope tables print 13 mm).
-const ROPE_SIZES = [size("3/8", 0.375, 10), size("7/16", 0.4375, 11), size("1/2", 0.5, 12), size("5/8", 0.625, 16), size("3/4", 0.75, 20), size("1", 1, 25)];
+// The rope tables share their size column: 10 (3/8), 11 (7/16), 13 (1/2), 16 (5/8), 20 (3/4), 25 (1).
+// The 1/2 in row is 13 mm, as in the chain and wire rope tables (1994 final rule's table and
+// the New York State cargo manual's copy; an earlier copy of this note said 12 mm: wrong).
+const ROPE_SIZES = [size("3/8", 0.375, 10), size("7/16", 0.4375, 11), size("1/2", 0.5, 13), size("5/8", 0.625, 16), size("3/4", 0.75, 20), size("1", 1, 25)];
 
-function ropeTable(id: RopeFibre, name: string, cells: ReadonlyArray<readonly [kg: number, lb: number]>): WllTable<SizeRow> {
+function ropeTable(id: RopeFibre, name: string, status: TableStatus, cells: ReadonlyArray<readonly [kg: number, lb: number]>): WllTable<SizeRow> {
   return deepFreeze({
     id: `rope-${id}`,
     title: `49 CFR 393.108 ${name} table`,
     source: `49 CFR 393.108, ${name} table`,
-    status: "from-memory",
-    rows: ROPE_SIZES.map((s, i) => ({ ...s, kg: cells[i]![0], lb: cells[i]![1], status: "from-memory" as const })),
+    status,
+    rows: ROPE_SIZES.map((s, i) => ({ ...s, kg: cells[i]![0], lb: cells[i]![1], status })),
   });
 }
 
 /**
- * The five rope tables of 49 CFR 393.108, by fibre (WLL kg, lb by diameter). All values
- * FROM MEMORY, not verified against the primary text. (The nylon lb figures for 3/8–3/4 in
- * agree with a rope maker's 3-strand nylon table, which is corroboration, not the primary
- * text. Some copies swap the nylon and double braided nylon rows; this follows the reference.)
+ * The five rope tables of 49 CFR 393.108, by fibre (WLL kg, lb by diameter). Manila,
+ * polypropylene, polyester and nylon: verified against the 1994 final rule's table (which
+ * the 2002 rule carried over; manila also in the New York State cargo manual's copy).
+ * Double braided nylon: FROM MEMORY, not verified against the primary text (some copies
+ * swap it with nylon; a rope maker's 3-strand nylon table agrees with the nylon row here).
  *
  * @example
  * ROPE_TABLES.polypropylene.rows[0]; // 3/8 in: 400 lb, 180 kg
+ * ROPE_TABLES.manila.rows[2].mm;    // 13 (the 1/2 in row)
  */
 export const ROPE_TABLES: Readonly<Record<RopeFibre, WllTable<SizeRow>>> = deepFreeze({
-  // 49 CFR 393.108, manila rope table: FROM MEMORY, not verified against the primary text.
-  manila: ropeTable("manila", "manila rope", [[90, 205], [120, 265], [150, 315], [210, 465], [290, 640], [480, 1050]]),
-  // 49 CFR 393.108, polypropylene fiber rope (3-strand and 8-strand) table: FROM MEMORY, not verified against the primary text.
-  polypropylene: ropeTable("polypropylene", "polypropylene fiber rope", [[180, 400], [240, 525], [280, 625], [420, 925], [580, 1275], [950, 2100]]),
-  // 49 CFR 393.108, polyester fiber rope (3-strand and 8-strand) table: FROM MEMORY, not verified against the primary text.
-  polyester: ropeTable("polyester", "polyester fiber rope", [[250, 555], [340, 750], [440, 960], [680, 1500], [850, 1880], [1500, 3300]]),
-  // 49 CFR 393.108, nylon rope table: FROM MEMORY, not verified against the primary text.
-  nylon: ropeTable("nylon", "nylon rope", [[130, 278], [190, 410], [240, 525], [420, 935], [640, 1420], [1140, 2520]]),
+  // 49 CFR 393.108, manila rope table: verified (1994 final rule's table; NY State cargo manual copy).
+  manila: ropeTable("manila", "manila rope", "verified", [[90, 205], [120, 265], [150, 315], [210, 465], [290, 640], [480, 1050]]),
+  // 49 CFR 393.108, polypropylene fiber rope (3-strand and 8-strand) table: verified (1994 final rule's table).
+  polypropylene: ropeTable("polypropylene", "polypropylene fiber rope", "verified", [[180, 400], [240, 525], [280, 625], [420, 925], [580, 1275], [950, 2100]]),
+  // 49 CFR 393.108, polyester fiber rope (3-strand and 8-strand) table: verified (1994 final rule's table).
+  polyester: ropeTable("polyester", "polyester fiber rope", "verified", [[250, 555], [340, 750], [440, 960], [680, 1500], [850, 1880], [1500, 3300]]),
+  // 49 CFR 393.108, nylon rope table: verified (1994 final rule's table, "Nylon Rope").
+  nylon: ropeTable("nylon", "nylon rope", "verified", [[130, 278], [190, 410], [240, 525], [420, 935], [640, 1420], [1140, 2520]]),
   // 49 CFR 393.108, double braided nylon rope table: FROM MEMORY, not verified against the primary text.
-  "double-braided-nylon": ropeTable("double-braided-nylon", "double braided nylon rope", [[150, 336], [230, 502], [300, 655], [510, 1130], [830, 1840], [1470, 3250]]),
+  "double-braided-nylon": ropeTable("double-braided-nylon", "double braided nylon rope", "from-memory", [[150, 336], [230, 502], [300, 655], [510, 1130], [830, 1840], [1470, 3250]]),
 });
 
 // 49 CFR 393.108, steel strapping table: WLL kg (lb) by width x thickness mm (in).
-// Row 1 (1 1/4 x 0.029 in, 31.7 x 0.74 mm: 540 kg, 1,190 lb): verified (secondary copies).
-// Rows 2-8: FROM MEMORY, not verified against the primary text.
+// Row 1 (1 1/4 x 0.029 in, 31.7 x 0.74 mm: 540 kg, 1,190 lb): verified (secondary copies
+// quoting the FMCSA rules). Rows 2-8: FROM MEMORY, not verified against the primary text.
 const W114 = size("1 1/4", 1.25, 31.7);
 const W2 = size("2", 2, 50.8);
 /**

@@ -1,6 +1,6 @@
 import { can, type Actor, type Permission } from "@/lib/auth/roles";
 
-export type NavIconName = "home" | "scan" | "stock" | "check" | "ratings" | "people" | "settings" | "audit" | "more";
+export type NavIconName = "home" | "scan" | "stock" | "kits" | "machines" | "trailers" | "check" | "ratings" | "people" | "settings" | "audit" | "more";
 
 export interface NavEntry {
   href: string;
@@ -15,7 +15,11 @@ const ENTRIES: readonly NavEntry[] = [
   { href: "/", label: "Today", icon: "home", primary: true },
   { href: "/scan", label: "Scan", icon: "scan", permission: "stock.view", primary: true },
   { href: "/stock", label: "Stock", icon: "stock", permission: "stock.view", primary: true },
-  { href: "/check", label: "Load check", icon: "check", permission: "securement.check", primary: true },
+  // The planner's main job, and the yard hand's loading list: in the phone's bottom bar.
+  { href: "/kits", label: "Kits", icon: "kits", permission: "fleet.view", primary: true },
+  { href: "/check", label: "Load check", icon: "check", permission: "securement.check" },
+  { href: "/machines", label: "Machines", icon: "machines", permission: "fleet.view" },
+  { href: "/trailers", label: "Trailers", icon: "trailers", permission: "fleet.view" },
   { href: "/ratings", label: "WLL lookup", icon: "ratings", permission: "securement.check" },
   { href: "/people", label: "People", icon: "people", permission: "people.manage" },
   { href: "/audit", label: "Audit log", icon: "audit", permission: "audit.view" },
@@ -24,7 +28,7 @@ const ENTRIES: readonly NavEntry[] = [
 
 /**
  * The navigation a role sees: only what it may open.
- * @example navFor({ role: "yard_hand", designated: false }).map((e) => e.href) // ["/", "/scan", "/stock", "/check", "/ratings"]
+ * @example navFor({ role: "yard_hand", designated: false }).map((e) => e.href) // ["/", "/scan", "/stock", "/kits", "/check", "/machines", "/trailers", "/ratings"]
  */
 export function navFor(actor: Actor): NavEntry[] {
   return ENTRIES.filter((e) => !e.permission || can(actor, e.permission));

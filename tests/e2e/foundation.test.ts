@@ -76,9 +76,9 @@ describe("a scanned tag before signing in", () => {
 
 describe("the shell of each role", () => {
   const cases = [
-    { who: "olive", role: "Owner", nav: ["Today", "Scan", "Stock", "Load check", "More"], more: ["People", "Audit log", "Settings"] },
-    { who: "pete", role: "Planner", nav: ["Today", "Scan", "Stock", "Load check", "More"], more: ["WLL lookup"] },
-    { who: "yara", role: "Yard hand", nav: ["Today", "Scan", "Stock", "Load check", "More"], more: ["WLL lookup"] },
+    { who: "olive", role: "Owner", nav: ["Today", "Scan", "Stock", "Kits", "More"], more: ["Load check", "Machines", "Trailers", "People", "Audit log", "Settings"] },
+    { who: "pete", role: "Planner", nav: ["Today", "Scan", "Stock", "Kits", "More"], more: ["Load check", "Machines", "Trailers", "WLL lookup"] },
+    { who: "yara", role: "Yard hand", nav: ["Today", "Scan", "Stock", "Kits", "More"], more: ["Load check", "Machines", "Trailers", "WLL lookup"] },
   ];
   for (const c of cases) {
     it(`shows ${c.role.toLowerCase()} only what the role may open, on a phone`, async () => {

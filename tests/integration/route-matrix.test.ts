@@ -4,6 +4,7 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { addMember, BASE_URL, Client, newOrganisation } from "../support/http";
 import { callAction as callActionAt, discoveredActions, type ActionRef } from "../support/actions";
 import { testDb } from "../support/db";
+import { makeKit, makeMachine, makeTrailer } from "../support/fleet";
 
 // Every route handler, page and server action, walked with every role, with no session and
 // with a person of another organisation. The tables below are the expected access, written
@@ -42,6 +43,13 @@ const API: Record<string, Access> = {
   "GET /api/v1/yards": ALL,
   "GET /api/v1/attachments/[id]": ALL,
   "POST /api/v1/securement-checks": ALL,
+  // Saved checks: every role may save, list and open them (every role may run checks); the
+  // handler lets the person who saved one, an owner or a planner change or delete it.
+  "GET /api/v1/securement-checks/saved": ALL,
+  "POST /api/v1/securement-checks/saved": ALL,
+  "GET /api/v1/securement-checks/saved/[id]": ALL,
+  "PUT /api/v1/securement-checks/saved/[id]": ALL,
+  "DELETE /api/v1/securement-checks/saved/[id]": ALL,
   "GET /api/v1/ratings": ALL,
   "GET /api/v1/tags/[code]": ALL,
   // CSV import: owners only ("stock.import").
@@ -58,6 +66,32 @@ const API: Record<string, Access> = {
   // The export is a read, but a full copy of the register with costs, made for editing and
   // importing back: owners and planners ("stock.edit"); a yard hand reads stock on screen.
   "GET /api/v1/items/export.csv": EDITORS,
+  // Machines, trailers and kits: planners and owners build ("fleet.manage"), everyone looks.
+  "GET /api/v1/machines": ALL,
+  "POST /api/v1/machines": EDITORS,
+  "GET /api/v1/machines/[id]": ALL,
+  "PUT /api/v1/machines/[id]": EDITORS,
+  "GET /api/v1/machine-classes": ALL,
+  "POST /api/v1/machine-classes": OWNER,
+  "GET /api/v1/trailers": ALL,
+  "POST /api/v1/trailers": EDITORS,
+  "GET /api/v1/trailers/[id]": ALL,
+  "PUT /api/v1/trailers/[id]": EDITORS,
+  "GET /api/v1/anchor-points/[id]/events": ALL,
+  "POST /api/v1/anchor-points/[id]/events": ALL, // anyone takes a point out of use; the service checks the role per type
+  "GET /api/v1/kits": ALL,
+  "POST /api/v1/kits": EDITORS,
+  "GET /api/v1/kits/[id]": ALL,
+  "PATCH /api/v1/kits/[id]": EDITORS,
+  "POST /api/v1/kits/[id]/tiedowns": EDITORS,
+  "PATCH /api/v1/kits/[id]/tiedowns/[tiedownId]": EDITORS,
+  "DELETE /api/v1/kits/[id]/tiedowns/[tiedownId]": EDITORS,
+  "POST /api/v1/kits/[id]/tiedowns/[tiedownId]/items": EDITORS,
+  "DELETE /api/v1/kits/[id]/tiedowns/[tiedownId]/items/[itemId]": EDITORS,
+  "POST /api/v1/kits/[id]/corners": EDITORS,
+  "GET /api/v1/kits/[id]/free-items": ALL,
+  "POST /api/v1/kits/[id]/transitions": ALL, // yard hands load and return ("kits.load"); the service checks ready/draft
+  "POST /api/v1/kits/[id]/copies": EDITORS,
 };
 
 const PAGES: Record<string, Access> = {
@@ -78,6 +112,16 @@ const PAGES: Record<string, Access> = {
   "/stock/import": OWNER,
   "/stock/import/history": OWNER,
   "/stock/import/[batchId]": OWNER,
+  "/kits": ALL,
+  "/kits/new": EDITORS,
+  "/kits/[id]": ALL,
+  "/kits/[id]/load": ALL,
+  "/machines": ALL,
+  "/machines/new": EDITORS,
+  "/machines/[id]": ALL,
+  "/trailers": ALL,
+  "/trailers/new": EDITORS,
+  "/trailers/[id]": ALL,
 };
 
 const ACTIONS: Record<string, Access> = {
@@ -94,6 +138,7 @@ const ACTIONS: Record<string, Access> = {
   "app/(app)/settings/actions.ts#createTokenAction": OWNER,
   "app/(app)/settings/actions.ts#revokeTokenAction": OWNER,
   "app/(app)/settings/actions.ts#saveIntervalsAction": OWNER,
+  "app/(app)/settings/actions.ts#saveUnitsAction": OWNER,
   "app/(app)/stock/actions.ts#createItemAction": EDITORS,
   "app/(app)/stock/actions.ts#editItemAction": EDITORS,
   "app/(app)/items/[id]/actions.ts#itemEventAction": ALL,
@@ -132,9 +177,14 @@ function discoveredPages(): string[] {
   }).map((p) => (p === "/" ? "/" : p.replace(/\/$/, "")));
 }
 
-const fill = (p: string) => p.replace("[id]", "00000000-0000-4000-8000-000000000000").replace("[eventId]", "1").replace("[code]", "3333-4444");
-/** Pages and action targets need a real item of the walking organisation. */
-const fillPage = (p: string) => p.replace("[id]", ownItemId).replace("[batchId]", ownBatchId);
+const NIL = "00000000-0000-4000-8000-000000000000";
+const fill = (p: string) =>
+  p.replace("[id]", NIL).replace("[tiedownId]", NIL).replace("[itemId]", NIL).replace("[eventId]", "1").replace("[code]", "3333-4444");
+/** Pages and action targets need a real row of the walking organisation: an item, a kit, a machine… */
+const fillPage = (p: string) => {
+  const id = p.startsWith("/kits/") ? own.kitId : p.startsWith("/machines/") ? own.machineId : p.startsWith("/trailers/") ? own.trailerId : ownItemId;
+  return p.replace("[id]", id).replace("[batchId]", ownBatchId);
+};
 const callAction = (client: Client, action: ActionRef, fields: Record<string, string> = {}) =>
   callActionAt(client, { ...action, page: fillPage(action.page) }, fields);
 
@@ -143,6 +193,7 @@ let outsider: Client;
 let victim: { organisationId: string; plannerId: string; inviteId: string };
 let ownItemId: string;
 let ownBatchId: string;
+const own = { kitId: "", machineId: "", trailerId: "" };
 
 beforeAll(async () => {
   const org = await newOrganisation("Matrix Co");
@@ -161,6 +212,10 @@ beforeAll(async () => {
   const batch = await org.owner.post("/api/v1/imports", csv);
   if (batch.status !== 201) throw new Error(`import: ${batch.status} ${batch.text}`);
   ownBatchId = batch.json.batchId;
+  const machine = await makeMachine(org.owner);
+  const trailer = await makeTrailer(org.owner);
+  const kit = await makeKit(org.owner, { date: "2030-01-02", machineId: machine.id, trailerId: trailer.id });
+  Object.assign(own, { kitId: kit.id, machineId: machine.id, trailerId: trailer.id });
 }, 60_000);
 
 afterAll(() => testDb.destroy());

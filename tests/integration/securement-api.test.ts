@@ -127,6 +127,21 @@ describe("POST /api/v1/securement-checks", () => {
     expect(res.json.tiedowns[1]).toMatchObject({ wllLb: 0, rated: false, limitedBy: "binder" });
   });
 
+  it("rates wire rope of known construction by its nominal strength, and fails a binder outside its chain-size range", async () => {
+    const body = contractExample() as any;
+    body.tiedowns[0].components[0] = { type: "wire-rope", size: "1/2 in", construction: "6x19 IWRC", nominalStrength: lb(26600) };
+    body.tiedowns[1].components[1] = { type: "binder", wll: lb(6600), chainSizeRange: ["5/16 in", "3/8 in"] };
+    body.tiedowns[1].components[0] = { type: "chain", grade: 70, size: "1/2 in" };
+    const res = await clients.planner.post("/api/v1/securement-checks", body);
+    expect(res.status).toBe(200);
+    expect(res.json.tiedowns[0].components[0]).toMatchObject({ wllLb: 6650, basis: "unmarked-rule", source: "49 CFR 393.108(e)(1): one quarter of the nominal strength (Wire Rope Users Manual)" });
+    expect(res.json.tiedowns[1]).toMatchObject({ wllLb: 0, rated: false, limitedBy: "binder" });
+    const out = res.json.findings.find((f: { code: string }) => f.code === "BINDER_CHAIN_SIZE_OUT_OF_RANGE");
+    expect(out).toMatchObject({ severity: "fail", tiedown: 1, component: 1, path: "tiedowns.1.components.1.chainSizeRange" });
+    expect(out.message).toContain("made for 5/16 in to 3/8 in chain, but the chain (component 1) is 1/2 in");
+    expect(res.json.pass).toBe(false);
+  });
+
   describe("answers 400 with the exact path of bad input", () => {
     const cases: Array<{ name: string; body: (b: any) => unknown; path: string; message?: RegExp }> = [
       { name: "missing cargo", body: (b) => ({ tiedowns: b.tiedowns }), path: "cargo" },
@@ -288,12 +303,27 @@ describe("GET /api/v1/ratings", () => {
   it("reads webbing by width, rope by fibre and size, steel strapping by width and thickness", async () => {
     expect((await get("material=webbing&width=4%20in")).json).toMatchObject({ wllLb: 4000, wllKg: 1810, source: "49 CFR 393.108, synthetic webbing table" });
     const nylon = await get("material=rope&fibre=nylon&size=1/2");
-    expect(nylon.json).toMatchObject({ material: "rope", fibre: "nylon", wllLb: 525, basis: "table", status: "from-memory" });
+    expect(nylon.json).toMatchObject({ material: "rope", fibre: "nylon", wllLb: 525, basis: "table", status: "verified" }); // 1994 final rule's table
     const unlabelled = await get("material=rope&size=1/2");
     expect(unlabelled.json).toMatchObject({ fibre: "polypropylene", basis: "unmarked-rule" });
     const strap = await get("material=steel-strapping&width=1%201/4&thickness=0.029");
     expect(strap.json).toMatchObject({ wllLb: 1190, wllKg: 540, status: "verified" });
     expect((await get("material=wire-rope&size=1/2")).json).toMatchObject({ wllLb: 5300 });
+  });
+
+  it("answers the corrected rows and says how it read a query (49 CFR 393.108; 1994 final rule's table)", async () => {
+    expect((await get("material=wire-rope&size=7/8")).json).toMatchObject({ wllLb: 16100, wllKg: 7300, status: "verified" });
+    expect((await get("material=wire-rope&size=25%20mm")).json).toMatchObject({ wllLb: 20900, wllKg: 9480, status: "verified" });
+    expect((await get("material=rope&fibre=manila&size=13%20mm")).json).toMatchObject({ wllLb: 315, wllKg: 150, row: "13 (1/2)", status: "verified" });
+    const twelve = await get("material=rope&fibre=manila&size=12%20mm");
+    expect(twelve.status).toBe(404);
+    expect(twelve.json.nearest).toEqual(["11 mm (7/16 in)", "13 mm (1/2 in)"]);
+    const g40 = await get("material=chain&grade=G40&size=3/8");
+    expect(g40.json).toMatchObject({ grade: 43, wllLb: 5400, notes: ['Grade mark "G40" is read as grade 43: grade 43 (high test) chain is also stamped 4, 40 or 400'] });
+    expect((await get("material=rope&size=1/2")).json.notes).toEqual([
+      "Rated as polypropylene (49 CFR 393.108(c)): 625 lb (280 kg). If it is manila (natural fibre), 49 CFR 393.108(f) rates it lower: 315 lb (150 kg)",
+    ]);
+    expect((await get("material=rope&fibre=double-braided-nylon&size=1/2")).json).toMatchObject({ wllLb: 655, status: "from-memory" });
   });
 
   it("answers 404 naming the nearest sizes for a size the table does not have", async () => {

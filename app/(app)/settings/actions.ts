@@ -4,6 +4,9 @@ import { z } from "zod";
 import { formAction } from "@/lib/auth/action";
 import { createApiToken, revokeToken } from "@/lib/auth/api-tokens";
 import { flagField, nameField, roleField, timeZoneField } from "@/lib/auth/schemas";
+import { UNIT_SYSTEM_LABELS } from "@/lib/kits/display";
+import { setUnitsPreference } from "@/lib/kits/fleet-service";
+import { unitsSchema } from "@/lib/kits/schemas";
 import { saveInspectionIntervals, saveOrganisation } from "@/lib/organisations/service";
 import { ITEM_KINDS, KIND_LABELS, type ItemKind } from "@/lib/stock/labels";
 
@@ -55,4 +58,11 @@ export const saveIntervalsAction = formAction("settings.manage", intervalsForm, 
   await saveInspectionIntervals(principal, input as Record<ItemKind, number>);
   revalidatePath("/settings");
   return { ok: true, message: "Inspection intervals saved. They apply from the next inspection of each item." };
+});
+
+/** Which system figures are shown in first (the other is always shown beside it). */
+export const saveUnitsAction = formAction("settings.manage", unitsSchema, async ({ units }, principal) => {
+  await setUnitsPreference(principal, units);
+  revalidatePath("/", "layout");
+  return { ok: true, message: `Figures are now shown in ${UNIT_SYSTEM_LABELS[units]} first.` };
 });

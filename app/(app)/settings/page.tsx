@@ -1,26 +1,30 @@
 import type { Metadata } from "next";
 import { CreateTokenForm, IntervalsForm, OrganisationForm, RevokeTokenButton } from "@/components/settings/settings-forms";
-import { createTokenAction, revokeTokenAction, saveIntervalsAction, saveOrganisationAction } from "./actions";
+import { UnitsForm } from "@/components/settings/units-form";
+import { getFleetSettings } from "@/db/fleet";
 import { listApiTokens } from "@/db/api-tokens";
 import { getOrganisation } from "@/db/organisations";
 import { inspectionIntervals } from "@/lib/organisations/service";
 import { ROLE_LABELS, type Role } from "@/lib/auth/roles";
 import { requirePage } from "@/lib/auth/session";
 import { formatDay, timeZones } from "@/lib/time";
+import { createTokenAction, revokeTokenAction, saveIntervalsAction, saveOrganisationAction, saveUnitsAction } from "./actions";
 
 export const metadata: Metadata = { title: "Settings" };
 
 export default async function SettingsPage() {
   const principal = await requirePage("settings.manage");
-  const [organisation, tokens, intervals] = await Promise.all([
+  const [organisation, tokens, intervals, fleet] = await Promise.all([
     getOrganisation(principal.organisationId),
     listApiTokens(principal.organisationId),
     inspectionIntervals(principal.organisationId),
+    getFleetSettings(principal.organisationId),
   ]);
   return (
     <div className="flex max-w-3xl flex-col gap-6">
       <h1 className="text-3xl font-bold">Settings</h1>
       <OrganisationForm name={organisation!.name} publicTagView={organisation!.publicTagView} timeZone={organisation!.timeZone} timeZones={timeZones()} action={saveOrganisationAction} />
+      <UnitsForm units={fleet.units} action={saveUnitsAction} />
       <IntervalsForm intervals={intervals} action={saveIntervalsAction} />
       <section aria-labelledby="tokens-heading" className="flex flex-col gap-3 rounded-xl border-2 border-ink-soft p-4">
         <h2 id="tokens-heading" className="text-xl font-bold">API tokens</h2>

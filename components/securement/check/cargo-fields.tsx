@@ -1,7 +1,8 @@
 "use client";
+import type { FieldIssue } from "@/lib/field-issues";
 import { ChoiceGroup, Toggle } from "@/components/ui/choice-group";
-import { ACCESSORY_CHOICES, issueAt, type CargoDraft, type PathMessage } from "@/lib/forms/securement-draft";
-import { QuantityBox } from "./inputs";
+import { ACCESSORY_CHOICES, issueAt, type CargoDraft } from "@/lib/forms/securement-draft";
+import { QuantityField } from "@/components/ui/field";
 
 const KIND_OPTIONS = [
   { value: "machine" as const, label: "Machine", sub: "on wheels or tracks" },
@@ -16,7 +17,7 @@ export function CargoFields({
 }: {
   cargo: CargoDraft;
   onChange: (patch: Partial<CargoDraft>) => void;
-  issues?: readonly PathMessage[];
+  issues?: readonly FieldIssue[];
 }) {
   const toggleAccessory = (name: string, on: boolean) =>
     onChange({ accessories: on ? ACCESSORY_CHOICES.filter((a) => a === name || cargo.accessories.includes(a)) : cargo.accessories.filter((a) => a !== name) });
@@ -24,7 +25,8 @@ export function CargoFields({
     <fieldset className="flex flex-col gap-4 rounded-xl border-2 border-ink p-3">
       <legend className="px-1 text-xl font-bold">The machine</legend>
       <div className="grid grid-cols-1 gap-3 sm:grid-cols-2">
-        <QuantityBox
+        <QuantityField
+          name="cargo.weight"
           label="Weight"
           value={cargo.weight}
           unit={cargo.weightUnit}
@@ -33,7 +35,8 @@ export function CargoFields({
           onUnit={(weightUnit) => onChange({ weightUnit })}
           error={issueAt(issues, "cargo.weight")}
         />
-        <QuantityBox
+        <QuantityField
+          name="cargo.length"
           label="Length"
           value={cargo.length}
           unit={cargo.lengthUnit}

@@ -1,10 +1,11 @@
 import Link from "next/link";
+import type { FieldIssue } from "@/lib/field-issues";
 import { describePath, type CheckDraft } from "@/lib/forms/securement-draft";
 import { SeverityIcon } from "../severity";
 import type { ApiError } from "../api";
 
 /** Why a check could not run: each field at fault named in words, or the session or the connection. */
-export function CheckProblem({ error, draft }: { error: ApiError; draft: CheckDraft }) {
+export function CheckProblem({ error, draft, issues = error.issues }: { error: ApiError; draft: CheckDraft; issues?: readonly FieldIssue[] }) {
   return (
     <div role="alert" className="flex flex-col gap-2 rounded-xl border-4 border-stop bg-stop-bg p-4 text-ink">
       <p className="flex items-center gap-2 text-xl font-bold">
@@ -13,9 +14,9 @@ export function CheckProblem({ error, draft }: { error: ApiError; draft: CheckDr
         </span>
         {error.status === 400 ? "Not checked: some entries need fixing" : "Not checked"}
       </p>
-      {error.issues.length > 0 ? (
+      {issues.length > 0 ? (
         <ul className="flex list-disc flex-col gap-1 pl-5 text-lg">
-          {error.issues.map((i, n) => (
+          {issues.map((i, n) => (
             <li key={`${i.path}-${n}`}>
               <strong>{describePath(i.path, draft)}:</strong> {i.message}
             </li>

@@ -1,6 +1,6 @@
 import type { RefObject } from "react";
 import type { SecurementCheckResult } from "@/lib/securement";
-import { formatNumber } from "@/lib/securement";
+import { formatNumber, groupFindings } from "@/lib/securement";
 import { CautionNote } from "../caution-note";
 import { SeverityIcon } from "../severity";
 import { FindingList } from "./finding-list";
@@ -11,7 +11,9 @@ function plural(n: number, one: string, many: string) {
 }
 
 function Verdict({ result, headingRef }: { result: SecurementCheckResult; headingRef?: RefObject<HTMLHeadingElement | null> }) {
-  const count = (s: string) => result.findings.filter((f) => f.severity === s).length;
+  // Counted as listed: the same finding on several tiedowns is one line.
+  const groups = groupFindings(result.findings);
+  const count = (s: string) => groups.filter((f) => f.severity === s).length;
   const fails = count("fail");
   const warns = count("warn");
   const notes = count("info");
@@ -77,7 +79,11 @@ function Figures({ result: r }: { result: SecurementCheckResult }) {
       </p>
       <dl className="grid grid-cols-2 gap-2">
         <Figure label="Tiedowns on the machine" value={String(r.tiedownsCounted)} sub={`of ${r.tiedowns.length} in all`} />
-        <Figure label="Minimum number" value={String(r.minimumTiedowns)} sub={r.ruleSource} />
+        <Figure
+          label="Minimum number"
+          value={String(r.minimumTiedowns)}
+          sub={r.minimumReadings ? `${r.ruleSource}, set by its ${r.minimumReadings.setBy} figures (the ${r.minimumReadings.setBy === "metric" ? "imperial" : "metric"} give ${r.minimumReadings.setBy === "metric" ? r.minimumReadings.imperial : r.minimumReadings.metric})` : r.ruleSource}
+        />
       </dl>
       <p className={`text-lg font-bold ${countMet ? "text-ok" : "text-stop"}`}>
         {countMet ? "✓ Enough tiedowns on the machine" : `✕ ${r.minimumTiedowns - r.tiedownsCounted} more needed on the machine`}
@@ -87,15 +93,17 @@ function Figures({ result: r }: { result: SecurementCheckResult }) {
   );
 }
 
-/** The answer of a check: verdict, the caution, figures, findings, and each tiedown. */
+/** The answer of a check: verdict, the caution, figures, findings, and each tiedown (`printed`: every part shown). */
 export function CheckResult({
   result,
-  stale,
+  stale = false,
   headingRef,
+  printed = false,
 }: {
   result: SecurementCheckResult;
-  stale: boolean;
+  stale?: boolean;
   headingRef?: RefObject<HTMLHeadingElement | null>;
+  printed?: boolean;
 }) {
   return (
     <section aria-labelledby="verdict-heading" className="flex flex-col gap-4">
@@ -107,8 +115,8 @@ export function CheckResult({
       <Verdict result={result} headingRef={headingRef} />
       <CautionNote text={result.caution} />
       <Figures result={result} />
-      <FindingList findings={result.findings} />
-      <TiedownResults tiedowns={result.tiedowns} />
+      <FindingList findings={result.findings} tiedownLabels={result.tiedowns.map((t) => t.label)} />
+      <TiedownResults tiedowns={result.tiedowns} printed={printed} />
     </section>
   );
 }

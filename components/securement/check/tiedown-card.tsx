@@ -1,24 +1,26 @@
 "use client";
 import { useId } from "react";
 import { ChoiceGroup } from "@/components/ui/choice-group";
+import { Field, SelectField } from "@/components/ui/field";
+import type { FieldIssue } from "@/lib/field-issues";
 import { ATTACHMENTS, type Attachment } from "@/lib/securement";
 import {
+  ADDABLE_PARTS,
   ATTACHMENT_LABELS,
   COMPONENT_LABELS,
+  FIBRE_LABELS,
   issueAt,
   newComponent,
   readNumber,
   type ComponentDraft,
-  type DraftComponentType,
   type DraftWeightUnit,
-  type PathMessage,
   type TiedownDraft,
 } from "@/lib/forms/securement-draft";
 import { ComponentEditor } from "./component-editor";
-import { SelectBox, TextBox } from "./inputs";
 
 const ATTACHMENT_OPTIONS = ATTACHMENTS.map((a) => ({ value: a, label: ATTACHMENT_LABELS[a].label, sub: ATTACHMENT_LABELS[a].counts }));
-const ADDABLE: readonly DraftComponentType[] = ["chain", "binder", "hook", "shackle", "anchor", "webbing"];
+/** How many copies "add more like this one" makes: the other three corners. */
+const COPIES = 3;
 
 /** What a tiedown is made of, part by part: ["3/8 in G70 chain", "binder 5,400 lb", "D-ring 6,000 lb"]. */
 export function partsSummary(t: TiedownDraft, unit: DraftWeightUnit): string[] {
@@ -34,6 +36,12 @@ export function partsSummary(t: TiedownDraft, unit: DraftWeightUnit): string[] {
           return `${c.size} ${c.grade ? `G${c.grade}` : "unmarked"} chain${wll(c.wll)}`;
         case "webbing":
           return `${c.width} strap${wll(c.wll)}`;
+        case "wire-rope":
+          return `${c.size} wire rope${wll(c.wll)}`;
+        case "rope":
+          return `${c.size} ${c.fibre ? FIBRE_LABELS[c.fibre].toLowerCase() : "fibre"} rope${wll(c.wll)}`;
+        case "steel-strapping":
+          return `${c.width} × ${c.thickness} steel strapping${wll(c.wll)}`;
         case "anchor":
           return `${c.label.trim() || "anchor"}${wll(c.wll)}`;
         default:
@@ -66,26 +74,33 @@ export function TiedownCard({
   unit,
   accessories,
   issues,
+  marks,
   open,
   onToggle,
   onChange,
   onRemove,
+  onCopy,
 }: {
   tiedown: TiedownDraft;
   index: number;
   unit: DraftWeightUnit;
   accessories: readonly string[];
-  issues?: readonly PathMessage[];
+  issues?: readonly FieldIssue[];
+  /** What the last check said about this form's fields left empty (see fieldMarks). */
+  marks?: readonly FieldIssue[];
   open: boolean;
   onToggle: (open: boolean) => void;
   onChange: (next: TiedownDraft) => void;
   onRemove: () => void;
+  /** Adds `count` copies of this tiedown after the last one. */
+  onCopy: (count: number) => void;
 }) {
   const t = tiedown;
   const id = useId();
   const path = `tiedowns.${index}`;
   const name = `Tiedown ${index + 1}${t.label.trim() ? `: ${t.label.trim()}` : ""}`;
   const hasIssue = issueAt(issues, path) !== undefined;
+  const markCount = (marks ?? []).filter((m) => m.path.startsWith(`${path}.`)).length;
   const securesOptions = [
     { value: "machine", label: "The machine" },
     ...accessories.map((a) => ({ value: a, label: `The ${a}` })),
@@ -112,13 +127,18 @@ export function TiedownCard({
               <SummaryParts parts={[ATTACHMENT_LABELS[t.attachment].label.split(",")[0]!, ...partsSummary(t, unit)]} />
             </span>
             {hasIssue && <span className="text-base font-bold text-stop">✕ Needs fixing</span>}
+            {!hasIssue && markCount > 0 && (
+              <span className="text-base font-bold text-stop" data-testid={`tiedown-marks-${index}`}>
+                ✕ {markCount === 1 ? "1 field to fill in" : `${markCount} fields to fill in`}
+              </span>
+            )}
           </span>
         </summary>
         <fieldset className="flex flex-col gap-3 border-t-2 border-ink-soft p-3">
           <legend className="sr-only">{name}</legend>
           <div className="grid grid-cols-2 gap-2">
-            <TextBox label="Name" value={t.label} onChange={(label) => onChange({ ...t, label })} placeholder="front left" error={issueAt(issues, `${path}.label`)} />
-            <SelectBox label="Holds" value={t.secures} onChange={(secures) => onChange({ ...t, secures })} options={securesOptions} error={issueAt(issues, `${path}.secures`)} />
+            <Field name={`${path}.label`} label="Name" value={t.label} onChange={(e) => onChange({ ...t, label: e.target.value })} placeholder="front left" autoComplete="off" error={issueAt(issues, `${path}.label`)} />
+            <SelectField name={`${path}.secures`} label="Holds" value={t.secures} onChange={(e) => onChange({ ...t, secures: e.target.value })} options={securesOptions} error={issueAt(issues, `${path}.secures`)} />
           </div>
           <ChoiceGroup<Attachment>
             legend="Attachment"
@@ -140,6 +160,7 @@ export function TiedownCard({
                   unit={unit}
                   path={`${path}.components.${i}`}
                   issues={issues}
+                  marks={marks}
                   onChange={(next) => setComponent(i, next)}
                   onRemove={() => onChange({ ...t, components: t.components.filter((_, j) => j !== i) })}
                   canRemove={t.components.length > 1}
@@ -153,7 +174,7 @@ export function TiedownCard({
           <div className="flex flex-col gap-2">
             <p className="text-base font-bold">Add a part</p>
             <div className="grid grid-cols-3 gap-2">
-              {ADDABLE.map((type) => (
+              {ADDABLE_PARTS.map((type) => (
                 <button
                   key={type}
                   type="button"
@@ -166,6 +187,13 @@ export function TiedownCard({
               ))}
             </div>
           </div>
+          <button
+            type="button"
+            onClick={() => onCopy(COPIES)}
+            className="inline-flex min-h-tap items-center justify-center rounded-lg border-2 border-ink bg-white px-4 text-lg font-bold"
+          >
+            + Add {COPIES} more like this one
+          </button>
           <button
             type="button"
             onClick={onRemove}

@@ -26,12 +26,13 @@ function limitedBy(t: TiedownResult): string {
   const part = t.components[t.limitedByIndex ?? 0];
   const word = TYPE_WORDS[t.limitedBy] ?? t.limitedBy;
   const name = t.limitedByLabel ? ` “${t.limitedByLabel}”` : "";
+  if (!t.rated && part?.error?.code === "BINDER_CHAIN_SIZE_OUT_OF_RANGE") return `The ${word}${name} is not made for this chain, so this tiedown counts 0.`;
   if (!t.rated) return `The ${word}${name} cannot be rated, so this tiedown counts 0.`;
   return `Limited by the ${word}${name}${part ? ` (part ${part.index + 1})` : ""}.`;
 }
 
 /** Each tiedown's WLL, what limits it, what it adds to the aggregate, and its parts. */
-export function TiedownResults({ tiedowns }: { tiedowns: readonly TiedownResult[] }) {
+export function TiedownResults({ tiedowns, printed = false }: { tiedowns: readonly TiedownResult[]; printed?: boolean }) {
   return (
     <section aria-labelledby="each-heading" className="flex flex-col gap-2">
       <h3 id="each-heading" className="text-xl font-bold">
@@ -55,7 +56,7 @@ export function TiedownResults({ tiedowns }: { tiedowns: readonly TiedownResult[
               Adds {formatNumber(t.countedWllLb)} lb to the aggregate: {ATTACHMENT_LABELS[t.attachment].label.toLowerCase()} {ATTACHMENT_LABELS[t.attachment].counts}.
               {!t.countsTowardMinimum && " Not counted toward the minimum number, which counts tiedowns on the machine itself."}
             </p>
-            <details className="mt-1">
+            <details className="mt-1" open={printed || undefined}>
               <summary className="flex min-h-tap cursor-pointer items-center text-base font-bold underline">Parts ({t.components.length})</summary>
               <ul className="flex flex-col gap-2 pl-1">
                 {t.components.map((c) => (

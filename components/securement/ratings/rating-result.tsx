@@ -45,6 +45,11 @@ export function RatingResult({ rating }: { rating: DefaultRating }) {
           <strong>Rated by the rule for unmarked gear.</strong> {rating.rule}.
         </p>
       )}
+      {rating.notes?.map((note) => (
+        <p key={note} className="rounded-lg border-2 border-caution bg-caution-bg p-3 text-base font-bold text-ink" data-testid="rating-note">
+          ⚠ {note}.
+        </p>
+      ))}
       <dl className="grid grid-cols-[auto_1fr] gap-x-3 gap-y-1 text-base">
         <dt className="font-bold">Source</dt>
         <dd>

@@ -14,6 +14,7 @@ const EXPECTED: Record<Permission, Role[]> = {
   "items.inspect": ["owner"],
   "fleet.manage": ["owner", "planner"],
   "fleet.view": ["owner", "planner", "yard_hand"],
+  "kits.load": ["owner", "planner", "yard_hand"],
   "securement.check": ["owner", "planner", "yard_hand"],
   "reports.view": ["owner", "planner"],
   "audit.view": ["owner"],

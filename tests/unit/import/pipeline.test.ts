@@ -31,6 +31,17 @@ describe("importing rows", () => {
     ]);
   });
 
+  it("reads grade mark 40 and 400 as grade 43 and notes it by line and column (New York State cargo manual's copy; trade stamp)", async () => {
+    const store = new MemoryStore();
+    const s = await run("Kind,Chain grade,Size\nchain,G40,3/8\nchain,70,3/8\nchain,400,1/2\n", store);
+    expect(s).toMatchObject({ created: 3, rejected: 0 });
+    expect(store.creates.map((c) => [c.row.grade, c.row.wllLb])).toEqual([[43, 5400], [70, 6600], [43, 9200]]);
+    expect(s.notes).toEqual([
+      { line: 2, column: "Chain grade", message: 'Grade mark "G40" is read as grade 43: grade 43 (high test) chain is also stamped 4, 40 or 400.' },
+      { line: 4, column: "Chain grade", message: 'Grade mark "400" is read as grade 43: grade 43 (high test) chain is also stamped 4, 40 or 400.' },
+    ]);
+  });
+
   it("reports every problem by line and column, in words", async () => {
     const text = [
       "Kind,Grade,Size,WLL (lb),Serial,Yard",

@@ -3,7 +3,7 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { assembleTiedown } from "@/lib/securement/assembly";
-import { componentWll } from "@/lib/securement/ratings";
+import { componentWll } from "@/lib/securement/marking";
 import type { Component, Tiedown } from "@/lib/securement/request";
 
 const lb = (value: number) => ({ value, unit: "lb" as const });
@@ -53,22 +53,58 @@ describe("49 CFR 393.108(a): lowest component", () => {
     expect(t.findings.map((f) => [f.code, f.severity, f.path])).toEqual([
       ["SIZE_NOT_IN_TABLE", "fail", "tiedowns.3.components.0.size"],
       ["MISSING_WLL", "fail", "tiedowns.3.components.1.wll"],
+      ["BINDER_RANGE_NOT_GIVEN", "warn", "tiedowns.3.components.1.chainSizeRange"],
     ]);
+    // the words that say where are kept apart from what, for grouping the same finding on several tiedowns
+    expect(t.findings[1]!.detail).toMatch(/^A binder must carry a marked WLL: /);
+    expect(t.findings[1]!.message).toBe(`Tiedown "rear right", component 2 (binder): ${t.findings[1]!.detail}`);
     expect(t.findings[0]!.message).toMatch(/^Tiedown "rear right", component 1 \(chain\): Size 9\/16 in is not in the 49 CFR 393\.108 chain table; nearest: 1\/2 in, 5\/8 in/);
     expect(t.components[0]!.error).toMatchObject({ code: "SIZE_NOT_IN_TABLE", nearest: ["1/2 in", "5/8 in"] });
   });
 });
 
-describe("compatibility (common practice, warn)", () => {
+describe("binder chain-size range: outside it the tiedown is not rated (common practice ranges; 393.108(b) marking; shared reference §8)", () => {
   const anchor: Component = { type: "anchor", wll: lb(10000) };
 
-  it("flags a binder used outside its chain-size range, comparing metric by the table's mm column", () => {
-    const out = assembleTiedown({ attachment: "direct", components: [{ type: "chain", grade: 70, size: "1/2" }, { type: "binder", wll: lb(5400), chainSizeRange: ["5/16", "3/8"] }, anchor] });
-    expect(out.findings).toEqual([expect.objectContaining({ code: "BINDER_CHAIN_SIZE_OUT_OF_RANGE", severity: "warn", source: "Common practice", path: "tiedowns.0.components.1.chainSizeRange" })]);
-    // 10 mm chain is the 3/8 in row: inside a 5/16-3/8 binder's range although 10 mm > 9.525 mm
-    const ok = assembleTiedown({ attachment: "direct", components: [{ type: "chain", grade: 70, size: "10 mm" }, { type: "binder", wll: lb(5400), chainSizeRange: ["5/16 in", "3/8 in"] }, anchor] });
-    expect(ok.findings).toEqual([]);
+  it("fails a binder made for 5/16-3/8 in on 1/2 in chain: counts 0, and names both sizes", () => {
+    const out = assembleTiedown({ label: "front left", attachment: "direct", components: [{ type: "chain", grade: 70, size: "1/2" }, { type: "binder", wll: lb(5400), chainSizeRange: ["5/16", "3/8"] }, anchor] });
+    expect(out).toMatchObject({ wllLb: 0, rated: false, limitedBy: "binder", limitedByIndex: 1 });
+    expect(out.findings).toEqual([expect.objectContaining({ code: "BINDER_CHAIN_SIZE_OUT_OF_RANGE", severity: "fail", tiedown: 0, component: 1, path: "tiedowns.0.components.1.chainSizeRange" })]);
+    expect(out.findings[0]!.message).toBe(
+      'Tiedown "front left", component 2 (binder): The binder is made for 5/16 in to 3/8 in chain, but the chain (component 1) is 1/2 in. The chain does not seat in the binder\'s hooks, and its marked WLL of 5,400 lb (2,449.4 kg) holds only for the chain the binder is made for, so the tiedown is not rated and counts 0 toward the aggregate; use a binder made for 1/2 in chain',
+    );
+    expect(out.findings[0]!.source).toMatch(/^49 CFR 393\.108\(b\).*common practice$/);
+    expect(out.components[1]).toMatchObject({ basis: "not-rated", wllLb: 0, error: { code: "BINDER_CHAIN_SIZE_OUT_OF_RANGE" } });
   });
+
+  it("reads a range written either way round, and a chain smaller than the range fails too", () => {
+    const small = assembleTiedown({ attachment: "direct", components: [{ type: "chain", grade: 70, size: "1/4" }, { type: "binder", wll: lb(5400), chainSizeRange: ["3/8", "5/16"] }, anchor] });
+    expect(small.rated).toBe(false);
+    expect(small.findings[0]!.message).toContain("made for 5/16 in to 3/8 in chain, but the chain (component 1) is 1/4 in");
+  });
+
+  it("compares metric sizes by the table's mm column: 10 mm chain is inside a 5/16-3/8 in binder's range", () => {
+    const ok = assembleTiedown({ attachment: "direct", components: [{ type: "chain", grade: 70, size: "10 mm" }, { type: "binder", wll: lb(5400), chainSizeRange: ["5/16 in", "3/8 in"] }, anchor] });
+    expect(ok).toMatchObject({ wllLb: 5400, rated: true });
+    expect(ok.findings).toEqual([]);
+    const edge = assembleTiedown({ attachment: "direct", components: [{ type: "chain", grade: 70, size: "5/16" }, { type: "binder", wll: lb(5400), chainSizeRange: ["8 mm", "10 mm"] }, anchor] });
+    expect(edge.rated).toBe(true);
+  });
+
+  it("without a range: rated as before (the binder's WLL counts), with a warning that the pairing was not checked", () => {
+    const out = assembleTiedown({ attachment: "direct", components: [{ type: "chain", grade: 70, size: "3/8" }, { type: "binder", wll: lb(5400) }, anchor] });
+    expect(out).toMatchObject({ wllLb: 5400, rated: true, limitedBy: "binder" });
+    expect(out.findings).toEqual([expect.objectContaining({ code: "BINDER_RANGE_NOT_GIVEN", severity: "warn", component: 1, path: "tiedowns.0.components.1.chainSizeRange" })]);
+    expect(out.findings[0]!.message).toContain("whether it takes the 3/8 in chain (component 1) was not checked; the tiedown is rated as if it does");
+  });
+
+  it("says nothing about a binder in a tiedown without chain", () => {
+    expect(assembleTiedown({ attachment: "direct", components: [{ type: "webbing", width: "4" }, { type: "binder", wll: lb(5400) }, anchor] }).findings).toEqual([]);
+  });
+});
+
+describe("compatibility (common practice, warn)", () => {
+  const anchor: Component = { type: "anchor", wll: lb(10000) };
 
   it("flags a hook or shackle of a lower grade than the chain", () => {
     const out = assembleTiedown({ attachment: "direct", components: [{ type: "chain", grade: 70, size: "3/8" }, { type: "hook", grade: 43, wll: lb(5400) }, anchor] });

@@ -109,8 +109,10 @@ describe("DERIVED machine examples (393.106(d) + 393.108 chain table + 393.130)"
 
   it("9,000 lb skid steer, four direct 5/16 in grade 70 chains → pass, aggregate 9,400 lb", () => {
     const r = check(machine(9000, CORNERS.map((c) => chainTiedown(c, g70("5/16 in"))), { length: ft(10) }));
-    expect(r).toMatchObject({ pass: true, aggregateWllLb: 9400, requiredAggregateWllLb: 4500, minimumTiedowns: 2 });
+    // 10 ft is 3.048 m, over 393.110's 3.04 m: the metric reading asks for 3, the imperial for 2 (FROM MEMORY metric figures)
+    expect(r).toMatchObject({ pass: true, aggregateWllLb: 9400, requiredAggregateWllLb: 4500, minimumTiedowns: 3, minimumReadings: { imperial: 2, metric: 3, setBy: "metric" } });
     expect(r.findings).toEqual([]);
+    expect(check(machine(9000, CORNERS.map((c) => chainTiedown(c, g70("5/16 in"))), { length: ft(9) })).minimumTiedowns).toBe(2);
   });
 
   it("CVSA example inside a check: an unmarked 5/16 in grade 70 chain counts 1,900 lb", () => {
@@ -147,10 +149,47 @@ describe("minimum count within a check", () => {
     expect(r.tiedowns.map((t) => t.countsTowardMinimum)).toEqual([true, true, true, false]);
   });
 
-  it("uses 393.110 for general cargo: 20 ft blocked → 2, unblocked → 3", () => {
-    expect(check({ cargo: { weight: lb(5000), length: ft(20), kind: "general", blockedAtFront: true }, tiedowns: [] }).minimumTiedowns).toBe(2);
-    expect(check({ cargo: { weight: lb(5000), length: ft(20), kind: "general" }, tiedowns: [] }).minimumTiedowns).toBe(3);
-    expect(check({ cargo: { weight: lb(5000), length: { value: 6.096, unit: "m" }, kind: "general" }, tiedowns: [] }).minimumTiedowns).toBe(3);
+  it("uses 393.110 for general cargo: 19 ft blocked → 2, unblocked → 3 (both readings)", () => {
+    expect(check({ cargo: { weight: lb(5000), length: ft(19), kind: "general", blockedAtFront: true }, tiedowns: [] }).minimumTiedowns).toBe(2);
+    const r = check({ cargo: { weight: lb(5000), length: ft(19), kind: "general" }, tiedowns: [] });
+    expect(r.minimumTiedowns).toBe(3);
+    expect(r.minimumReadings).toBeUndefined();
+  });
+
+  it("20 ft (6.096 m) needs one more by 393.110's metric figures: blocked 3, unblocked 4, and the finding says so", () => {
+    expect(check({ cargo: { weight: lb(5000), length: ft(20), kind: "general", blockedAtFront: true }, tiedowns: [] }).minimumTiedowns).toBe(3);
+    const r = check({ cargo: { weight: lb(5000), length: { value: 6.096, unit: "m" }, kind: "general" }, tiedowns: [] });
+    expect(r).toMatchObject({ minimumTiedowns: 4, minimumReadings: { imperial: 3, metric: 4, setBy: "metric" } });
+    expect(r.findings.find((f) => f.code === "TOO_FEW_TIEDOWNS")!.message).toContain("set by the metric reading of 49 CFR 393.110 (the imperial figures give 3; where they differ the higher count is required)");
+  });
+});
+
+describe("393.110 metric edges within a check (metric figures FROM MEMORY)", () => {
+  const strap = (label: string): Tiedown => ({ label, attachment: "indirect-across", components: [{ type: "webbing", width: "2", wll: lb(3000) }, { type: "anchor", wll: lb(5000) }] });
+  const article = (length: { value: number; unit: "m" | "ft" }, weight: { value: number; unit: "lb" | "kg" }, n: number): SecurementCheckRequest => ({
+    cargo: { weight, length, kind: "general" },
+    tiedowns: Array.from({ length: n }, (_, i) => strap(`strap ${i + 1}`)),
+  });
+
+  it("1.523 m, 350 kg on one strap: 2 required, set by the metric reading", () => {
+    const r = check(article({ value: 1.523, unit: "m" }, { value: 350, unit: "kg" }, 1));
+    expect(r).toMatchObject({ pass: false, minimumTiedowns: 2, minimumReadings: { imperial: 1, metric: 2, setBy: "metric" } });
+    const f = r.findings.find((x) => x.code === "TOO_FEW_TIEDOWNS")!;
+    expect(f).toMatchObject({ severity: "fail", source: "49 CFR 393.110" });
+    expect(f.message).toContain("set by the metric reading");
+    expect(r.rule).toMatch(/^49 CFR 393\.110, read with its metric figures: /);
+    expect(check(article({ value: 1.523, unit: "m" }, { value: 350, unit: "kg" }, 2)).pass).toBe(true);
+  });
+
+  it("3.045 m on two straps: 3 required, set by the metric reading", () => {
+    const r = check(article({ value: 3.045, unit: "m" }, { value: 400, unit: "kg" }, 2));
+    expect(r).toMatchObject({ pass: false, minimumTiedowns: 3, minimumReadings: { imperial: 2, metric: 3, setBy: "metric" } });
+  });
+
+  it("4 ft, 1,101 lb (499.4 kg) on one strap: 2 required, set by the imperial reading", () => {
+    const r = check(article({ value: 4, unit: "ft" }, { value: 1101, unit: "lb" }, 1));
+    expect(r).toMatchObject({ pass: false, minimumTiedowns: 2, minimumReadings: { imperial: 2, metric: 1, setBy: "imperial" } });
+    expect(r.findings.find((x) => x.code === "TOO_FEW_TIEDOWNS")!.message).toContain("set by the imperial reading of 49 CFR 393.110 (the metric figures give 1;");
   });
 });
 
@@ -198,11 +237,38 @@ describe("guidance and common practice never fail", () => {
     expect(r.findings).toEqual([expect.objectContaining({ code: "FEWER_THAN_FOUR_CORNERS", severity: "warn", source: "Common practice" })]);
   });
 
-  it("a binder outside its range and a low-grade hook warn but do not fail", () => {
-    const t: Tiedown = { attachment: "direct", components: [{ type: "chain", grade: 70, size: "1/2" }, { type: "binder", wll: lb(9200), chainSizeRange: ["5/16", "3/8"] }, { type: "hook", grade: 43, wll: lb(9200) }, { type: "anchor", wll: lb(15000) }] };
+  it("a low-grade hook warns but does not fail", () => {
+    const t: Tiedown = { attachment: "direct", components: [{ type: "chain", grade: 70, size: "1/2" }, { type: "binder", wll: lb(9200), chainSizeRange: ["3/8", "1/2"] }, { type: "hook", grade: 43, wll: lb(9200) }, { type: "anchor", wll: lb(15000) }] };
     const r = check(machine(12000, [t, t, t, t]));
     expect(r.pass).toBe(true);
-    expect(new Set(codes(r))).toEqual(new Set(["BINDER_CHAIN_SIZE_OUT_OF_RANGE", "FITTING_GRADE_BELOW_CHAIN"]));
+    expect(new Set(codes(r))).toEqual(new Set(["FITTING_GRADE_BELOW_CHAIN"]));
+  });
+});
+
+describe("binder chain-size range (common practice range; 393.108(b) marking)", () => {
+  it("a binder outside its range fails: that tiedown is not rated and counts 0, the finding names both sizes", () => {
+    const bad: Tiedown = { label: "front left", attachment: "direct", components: [{ type: "chain", grade: 70, size: "1/2" }, { type: "binder", wll: lb(9200), chainSizeRange: ["5/16", "3/8"] }, { type: "anchor", wll: lb(15000) }] };
+    const good = (label: string): Tiedown => ({ label, attachment: "direct", components: [{ type: "chain", grade: 70, size: "1/2" }, { type: "binder", wll: lb(9200), chainSizeRange: ["1/2", "5/8"] }, { type: "anchor", wll: lb(15000) }] });
+    const r = check(machine(12000, [bad, good("front right"), good("rear left"), good("rear right")]));
+    expect(r.pass).toBe(false);
+    expect(r.tiedowns[0]).toMatchObject({ wllLb: 0, countedWllLb: 0, rated: false, limitedBy: "binder" });
+    expect(r.aggregateWllLb).toBe(3 * 4600);
+    const f = r.findings.find((x) => x.code === "BINDER_CHAIN_SIZE_OUT_OF_RANGE")!;
+    expect(f).toMatchObject({ severity: "fail", tiedown: 0, component: 1, path: "tiedowns.0.components.1.chainSizeRange" });
+    expect(f.message).toContain("made for 5/16 in to 3/8 in chain");
+    expect(f.message).toContain("the chain (component 1) is 1/2 in");
+    expect(f.message).toContain("counts 0");
+  });
+
+  it("a binder whose range is not given is rated as before, with a warning that says so", () => {
+    const t: Tiedown = { label: "x", attachment: "direct", components: [{ type: "chain", grade: 70, size: "3/8" }, { type: "binder", wll: lb(5400) }, { type: "anchor", wll: lb(9000) }] };
+    const r = check(machine(12000, [t, t, t, t]));
+    expect(r.pass).toBe(true);
+    expect(r.tiedowns[0]).toMatchObject({ wllLb: 5400, rated: true });
+    const f = r.findings.filter((x) => x.code === "BINDER_RANGE_NOT_GIVEN");
+    expect(f).toHaveLength(4);
+    expect(f[0]).toMatchObject({ severity: "warn", path: "tiedowns.0.components.1.chainSizeRange" });
+    expect(f[0]!.message).toContain("whether it takes the 3/8 in chain (component 1) was not checked");
   });
 });
 
@@ -236,6 +302,30 @@ describe("component problems come back as findings, not exceptions", () => {
       expect(e).toBeInstanceOf(RequestValidationError);
       expect((e as RequestValidationError).issues.map((i) => i.path)).toEqual(["cargo.weight.value", "tiedowns.0.components.0.wll.unit"]);
     }
+  });
+});
+
+describe("every material in a check (49 CFR 393.108)", () => {
+  it("wire rope at a quarter of its nominal strength (e)(1), rope of unknown fibre (c)/(f), steel strapping, grade mark 40", () => {
+    const anchor = { type: "anchor" as const, wll: lb(20000) };
+    const r = check({
+      cargo: { weight: lb(9000), length: ft(9), kind: "general" },
+      tiedowns: [
+        { label: "wire", attachment: "indirect-across", components: [{ type: "wire-rope", size: "1/2 in", construction: "6x19 IWRC", nominalStrength: lb(26600) }, anchor] },
+        { label: "cable", attachment: "indirect-across", components: [{ type: "wire-rope", size: "1/2 in", construction: "6x19 IWRC" }, anchor] },
+        { label: "rope", attachment: "indirect-across", components: [{ type: "rope", size: "13 mm" }, anchor] },
+        { label: "band", attachment: "indirect-across", components: [{ type: "steel-strapping", width: "2 in", thickness: "0.050 in" }, anchor] },
+        { label: "g40", attachment: "direct", components: [{ type: "chain", grade: "G40", size: "3/8" }, anchor] },
+      ],
+    });
+    expect(r.tiedowns.map((t) => t.wllLb)).toEqual([6650, 5300, 625, 2650, 5400]);
+    expect(r.aggregateWllLb).toBe(6650 + 5300 + 625 + 2650 + 2700);
+    expect(r.tiedowns[3]!.components[0]).toMatchObject({ status: "from-memory" }); // steel strapping row 8: FROM MEMORY
+    expect(r.tiedowns[2]!.components[0]).toMatchObject({ status: "verified", tableWllKg: 280 });
+    const byCode = (code: string) => r.findings.filter((f) => f.code === code);
+    expect(byCode("WIRE_ROPE_RATED_FROM_TABLE").map((f) => f.tiedown)).toEqual([1]);
+    expect(byCode("ROPE_FIBRE_UNKNOWN")[0]!.message).toContain("rates it lower: 315 lb (150 kg)");
+    expect(byCode("GRADE_MARK_READ_AS")[0]).toMatchObject({ severity: "info", tiedown: 4, path: "tiedowns.4.components.0.grade" });
   });
 });
 

@@ -1,7 +1,9 @@
 // Chain grades and their marks: 49 CFR 393.108, chain mark examples (JJK-108 copy, verified):
 // G30 = 3 / 30 / 300; G43 = 4 / 43 / 430; G70 = 7 / 70 / 700; G80 = 8 / 80 / 800; G100 = 10 / 100 / 1000.
+// Grade 43 is also stamped 4 / 40 / 400: the New York State cargo manual's copy of the table,
+// and the trade's common stamp for high test (shared reference §1.4).
 import { describe, expect, it } from "vitest";
-import { CHAIN_GRADES, isChainGrade, parseGrade } from "@/lib/securement/grades";
+import { CHAIN_GRADES, gradeMarkNote, isChainGrade, parseGrade } from "@/lib/securement/grades";
 
 describe("parseGrade", () => {
   it.each([
@@ -16,6 +18,13 @@ describe("parseGrade", () => {
       expect(parseGrade(String(m))).toBe(grade);
       expect(parseGrade(`G${m}`)).toBe(grade);
     }
+  });
+
+  it("reads 40 and 400 as grade 43, and says so (New York State cargo manual's copy; trade stamp)", () => {
+    for (const m of [40, "40", "G40", "grade 400", 400]) expect(parseGrade(m)).toBe(43);
+    expect(gradeMarkNote("G40")).toBe('Grade mark "G40" is read as grade 43: grade 43 (high test) chain is also stamped 4, 40 or 400');
+    expect(gradeMarkNote(400)).toContain("is read as grade 43");
+    for (const m of [4, 43, 430, "G70", 30, "alloy"]) expect(gradeMarkNote(m)).toBeUndefined();
   });
 
   it("reads written forms", () => {

@@ -1,6 +1,7 @@
-// Zod schemas of the request and the ratings query, and issuesToPaths().
+// Zod schemas of the request and the ratings query, read through the one issue mapper (zodIssues).
 import { describe, expect, it } from "vitest";
-import { issuesToPaths, ratingQuerySchema, securementCheckRequestSchema } from "@/lib/securement/schema";
+import { zodIssues } from "@/lib/field-issues";
+import { ratingQuerySchema, securementCheckRequestSchema } from "@/lib/securement/schema";
 
 const contract = {
   cargo: { weight: { value: 9800, unit: "lb" }, length: { value: 16, unit: "ft" }, kind: "machine", blockedAtFront: false, articulated: false, accessories: ["bucket", "blade"] },
@@ -21,7 +22,7 @@ const contract = {
 function paths(body: unknown) {
   const r = securementCheckRequestSchema.safeParse(body);
   if (r.success) return [];
-  return issuesToPaths(r.error);
+  return zodIssues(r.error);
 }
 
 describe("securementCheckRequestSchema", () => {
@@ -39,6 +40,7 @@ describe("securementCheckRequestSchema", () => {
       { type: "chain", grade: "G70", size: "10 mm", marked: false, label: "chain 7", gearId: "c-7" },
       { type: "webbing", width: "1 3/4", wll: { value: 1500, unit: "daN" } },
       { type: "wire-rope", size: 0.5 },
+      { type: "wire-rope", size: "1/2", construction: "6x19 IWRC", nominalStrength: { value: 26600, unit: "lb" } },
       { type: "rope", fibre: "double-braided-nylon", size: "1/2\"" },
       { type: "steel-strapping", width: "1-1/4 in", thickness: "0.029 in" },
       { type: "hook", grade: 70, wll: { value: 6600, unit: "lb" } },
@@ -72,6 +74,15 @@ describe("securementCheckRequestSchema", () => {
     expect(paths(body).map((p) => p.path)).toEqual(["tiedowns.0.components.0.type", "tiedowns.1.components", "tiedowns.2.components.0.grade"]);
   });
 
+  it("reads a wire rope's construction and nominal strength (393.108(e)(1)), and refuses bad ones at their path", () => {
+    const body = structuredClone(contract) as any;
+    body.tiedowns[0].components[0] = { type: "wire-rope", size: "1/2", construction: " ", nominalStrength: { value: -1, unit: "lb" } };
+    expect(paths(body)).toEqual([
+      { path: "tiedowns.0.components.0.construction", message: "The construction is empty" },
+      { path: "tiedowns.0.components.0.nominalStrength.value", message: "The value must be greater than 0" },
+    ]);
+  });
+
   it("checks secures against the declared accessories", () => {
     const body = structuredClone(contract) as any;
     body.tiedowns[0].secures = "boom";
@@ -101,10 +112,10 @@ describe("ratingQuerySchema", () => {
   it("asks for the fields the material needs", () => {
     const r = ratingQuerySchema.safeParse({ material: "steel-strapping", width: "2" });
     expect(r.success).toBe(false);
-    expect(issuesToPaths(r.error!)).toEqual([{ path: "thickness", message: "A thickness is needed for steel-strapping" }]);
+    expect(zodIssues(r.error!)).toEqual([{ path: "thickness", message: "A thickness is needed for steel-strapping" }]);
     const w = ratingQuerySchema.safeParse({ material: "webbing", size: "4" });
-    expect(issuesToPaths(w.error!).map((i) => i.path)).toEqual(["width"]);
+    expect(zodIssues(w.error!).map((i) => i.path)).toEqual(["width"]);
     const m = ratingQuerySchema.safeParse({ material: "cable", size: "1/2" });
-    expect(issuesToPaths(m.error!)).toEqual([{ path: "material", message: "The material must be chain, webbing, wire-rope, rope or steel-strapping" }]);
+    expect(zodIssues(m.error!)).toEqual([{ path: "material", message: "The material must be chain, webbing, wire-rope, rope or steel-strapping" }]);
   });
 });

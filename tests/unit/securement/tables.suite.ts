@@ -1,10 +1,11 @@
 // Every cell of the 49 CFR 393.108 default-WLL tables, both published columns (kg and lb),
-// transcribed by hand from the shared reference file, independent of the implementation's
-// table objects. Each lookup goes through the public defaultRating() and is checked against
+// transcribed by hand from the shared reference file (corrected: wire rope 7/8 and 1 in, rope
+// 1/2 in = 13 mm), independent of the implementation's table objects. Cells still FROM
+// MEMORY: the double braided nylon table and steel strapping rows 2-8. Each lookup goes through the public defaultRating() and is checked against
 // the printed column for that unit (the kg and lb columns are separately rounded: never
 // converted one from the other).
 import { describe, expect, it } from "vitest";
-import { defaultRating } from "@/lib/securement/ratings";
+import { defaultRating } from "@/lib/securement/lookup";
 import { CHAIN_TABLE, ROPE_TABLES, STEEL_STRAPPING_TABLE, WEBBING_TABLE, WIRE_ROPE_TABLE } from "@/lib/securement/tables";
 
 type Cell = readonly [kg: number, lb: number];
@@ -77,7 +78,10 @@ describe("49 CFR 393.108, synthetic webbing table (verified)", () => {
 });
 
 // 49 CFR 393.108, wire rope (6 x 37, fiber core) table. [mm, in, kg, lb, status]
-// 1/4 to 3/4 in: JJK-108 copy, verified. 7/8 in and 1 in: FROM MEMORY, not verified against the primary text.
+// 1/4 to 3/4 in: JJK-108 copy, verified. 7/8 in and 1 in: verified against the 1994 final
+// rule's table (59 FR, 6 July 1994, "Tables to §393.102(b)(6)"), which the 2002 §393.108 tables
+// carried over (every row it shares with JJK-108 is identical); also 1/4 of the published
+// 6 x 19 fibre-core breaking strengths, 64,400 lb and 83,600 lb (shared reference §1.4).
 const WIRE_ROPE = [
   [7, "1/4", 640, 1400, "verified"],
   [8, "5/16", 950, 2100, "verified"],
@@ -86,52 +90,65 @@ const WIRE_ROPE = [
   [13, "1/2", 2400, 5300, "verified"],
   [16, "5/8", 3770, 8300, "verified"],
   [20, "3/4", 4940, 10900, "verified"],
-  [22, "7/8", 7140, 15700, "from-memory"], // FROM MEMORY, not verified against the primary text
-  [25, "1", 9390, 20700, "from-memory"], // FROM MEMORY, not verified against the primary text
+  [22, "7/8", 7300, 16100, "verified"], // 1994 final rule's table (an earlier from-memory 7,140 kg / 15,700 lb was wrong)
+  [25, "1", 9480, 20900, "verified"], // 1994 final rule's table (an earlier from-memory 9,390 kg / 20,700 lb was wrong)
 ] as const;
 
-describe("49 CFR 393.108, wire rope (6 x 37, fiber core) table", () => {
+describe("49 CFR 393.108, wire rope (6 x 37, fiber core) table (verified)", () => {
   it.each(WIRE_ROPE)("%i mm (%s in): %i kg (%i lb), %s", (mm, inch, kg, lb, status) => {
     expect(defaultRating({ material: "wire-rope", size: `${inch} in` })).toMatchObject({ wllKg: kg, wllLb: lb, status, source: "49 CFR 393.108, wire rope (6 x 37, fiber core) table" });
     expect(defaultRating({ material: "wire-rope", size: `${mm} mm` })).toMatchObject({ wllKg: kg, wllLb: lb });
   });
-  it("has exactly these rows", () => {
+  it("has exactly these rows, and the table as a whole is verified", () => {
     expect(WIRE_ROPE_TABLE.rows.map((r) => [r.mm, r.label, r.kg, r.lb, r.status])).toEqual(WIRE_ROPE.map((r) => [...r]));
+    expect(WIRE_ROPE_TABLE.status).toBe("verified");
+  });
+  it("7/8 in and 1 in are one quarter of the 6 x 19 fibre-core breaking strengths (64,400 and 83,600 lb)", () => {
+    expect(defaultRating({ material: "wire-rope", size: "7/8" }).wllLb).toBe(64400 / 4);
+    expect(defaultRating({ material: "wire-rope", size: "1 in" }).wllLb).toBe(83600 / 4);
   });
 });
 
-// 49 CFR 393.108, rope tables. All FROM MEMORY, not verified against the primary text (the
-// nylon lb figures for 3/8-3/4 in agree with a rope maker's 3-strand nylon table, which is
-// corroboration only). Sizes mm (in): 10 (3/8), 11 (7/16), 12 (1/2), 16 (5/8), 20 (3/4), 25 (1).
-const ROPE_SIZES = [[10, "3/8"], [11, "7/16"], [12, "1/2"], [16, "5/8"], [20, "3/4"], [25, "1"]] as const;
-const ROPES: ReadonlyArray<readonly [fibre: "manila" | "polypropylene" | "polyester" | "nylon" | "double-braided-nylon", source: string, cells: readonly Cell[]]> = [
-  // 49 CFR 393.108, manila rope table: FROM MEMORY, not verified against the primary text.
-  ["manila", "49 CFR 393.108, manila rope table", [[90, 205], [120, 265], [150, 315], [210, 465], [290, 640], [480, 1050]]],
-  // 49 CFR 393.108, polypropylene fiber rope table: FROM MEMORY, not verified against the primary text.
-  ["polypropylene", "49 CFR 393.108, polypropylene fiber rope table", [[180, 400], [240, 525], [280, 625], [420, 925], [580, 1275], [950, 2100]]],
-  // 49 CFR 393.108, polyester fiber rope table: FROM MEMORY, not verified against the primary text.
-  ["polyester", "49 CFR 393.108, polyester fiber rope table", [[250, 555], [340, 750], [440, 960], [680, 1500], [850, 1880], [1500, 3300]]],
-  // 49 CFR 393.108, nylon rope table: FROM MEMORY, not verified against the primary text.
-  ["nylon", "49 CFR 393.108, nylon rope table", [[130, 278], [190, 410], [240, 525], [420, 935], [640, 1420], [1140, 2520]]],
+// 49 CFR 393.108, rope tables. Sizes mm (in): 10 (3/8), 11 (7/16), 13 (1/2), 16 (5/8), 20 (3/4), 25 (1);
+// the 1/2 in row is 13 mm (1994 final rule's table and the New York State cargo manual's copy).
+// Manila, polypropylene, polyester, nylon: verified against the 1994 final rule's table (manila
+// also in the New York State cargo manual's copy; the nylon lb figures for 3/8-3/4 in also agree
+// with a rope maker's 3-strand nylon table). Double braided nylon: FROM MEMORY, not verified
+// against the primary text (not found in any source read).
+const ROPE_SIZES = [[10, "3/8"], [11, "7/16"], [13, "1/2"], [16, "5/8"], [20, "3/4"], [25, "1"]] as const;
+type Fibre = "manila" | "polypropylene" | "polyester" | "nylon" | "double-braided-nylon";
+const ROPES: ReadonlyArray<readonly [fibre: Fibre, source: string, status: "verified" | "from-memory", cells: readonly Cell[]]> = [
+  // 49 CFR 393.108, manila rope table: verified (1994 final rule's table; NY State cargo manual copy).
+  ["manila", "49 CFR 393.108, manila rope table", "verified", [[90, 205], [120, 265], [150, 315], [210, 465], [290, 640], [480, 1050]]],
+  // 49 CFR 393.108, polypropylene fiber rope table: verified (1994 final rule's table).
+  ["polypropylene", "49 CFR 393.108, polypropylene fiber rope table", "verified", [[180, 400], [240, 525], [280, 625], [420, 925], [580, 1275], [950, 2100]]],
+  // 49 CFR 393.108, polyester fiber rope table: verified (1994 final rule's table).
+  ["polyester", "49 CFR 393.108, polyester fiber rope table", "verified", [[250, 555], [340, 750], [440, 960], [680, 1500], [850, 1880], [1500, 3300]]],
+  // 49 CFR 393.108, nylon rope table: verified (1994 final rule's table, "Nylon Rope").
+  ["nylon", "49 CFR 393.108, nylon rope table", "verified", [[130, 278], [190, 410], [240, 525], [420, 935], [640, 1420], [1140, 2520]]],
   // 49 CFR 393.108, double braided nylon rope table: FROM MEMORY, not verified against the primary text.
-  ["double-braided-nylon", "49 CFR 393.108, double braided nylon rope table", [[150, 336], [230, 502], [300, 655], [510, 1130], [830, 1840], [1470, 3250]]],
+  ["double-braided-nylon", "49 CFR 393.108, double braided nylon rope table", "from-memory", [[150, 336], [230, 502], [300, 655], [510, 1130], [830, 1840], [1470, 3250]]],
 ];
 
-describe("49 CFR 393.108, rope tables (FROM MEMORY, not verified against the primary text)", () => {
-  for (const [fibre, source, cells] of ROPES) {
+describe("49 CFR 393.108, rope tables", () => {
+  for (const [fibre, source, status, cells] of ROPES) {
     ROPE_SIZES.forEach(([mm, inch], i) => {
       const [kg, lb] = cells[i]!;
-      it(`${fibre}, ${mm} mm (${inch} in): ${kg} kg (${lb} lb)`, () => {
-        expect(defaultRating({ material: "rope", fibre, size: `${inch} in` })).toMatchObject({ wllKg: kg, wllLb: lb, source, status: "from-memory", fibre, basis: "table" });
+      it(`${fibre}, ${mm} mm (${inch} in): ${kg} kg (${lb} lb), ${status}`, () => {
+        expect(defaultRating({ material: "rope", fibre, size: `${inch} in` })).toMatchObject({ wllKg: kg, wllLb: lb, source, status, fibre, basis: "table" });
         expect(defaultRating({ material: "rope", fibre, size: `${mm} mm` })).toMatchObject({ wllKg: kg, wllLb: lb });
       });
     });
-    it(`${fibre}: exactly these rows`, () => {
-      expect(ROPE_TABLES[fibre].rows.map((r) => [r.mm, r.label, r.kg, r.lb])).toEqual(ROPE_SIZES.map(([mm, inch], i) => [mm, inch, ...cells[i]!]));
+    it(`${fibre}: exactly these rows, table ${status}`, () => {
+      expect(ROPE_TABLES[fibre].rows.map((r) => [r.mm, r.label, r.kg, r.lb, r.status])).toEqual(ROPE_SIZES.map(([mm, inch], i) => [mm, inch, ...cells[i]!, status]));
+      expect(ROPE_TABLES[fibre].status).toBe(status);
     });
   }
-  it("the 1/2 in rope row is 12 mm (the chain and wire rope tables print 13 mm)", () => {
-    expect(() => defaultRating({ material: "rope", fibre: "nylon", size: "13 mm" })).toThrowError("nearest: 12 mm (1/2 in), 16 mm (5/8 in)");
+  it("13 mm finds the 1/2 in rope row; 12 mm is not a row and names the nearest (1994 final rule's table)", () => {
+    expect(defaultRating({ material: "rope", fibre: "nylon", size: "13 mm" })).toMatchObject({ wllLb: 525, wllKg: 240, row: "13 (1/2)", size: "1/2 in" });
+    expect(() => defaultRating({ material: "rope", fibre: "nylon", size: "12 mm" })).toThrowError(
+      "Size 12 mm is not in the 49 CFR 393.108 nylon rope table; nearest: 11 mm (7/16 in), 13 mm (1/2 in)",
+    );
   });
 });
 

@@ -3,11 +3,11 @@ import { barFor, navFor } from "@/lib/shell/nav";
 
 describe("navFor", () => {
   it("shows a yard hand only what a yard hand may open", () => {
-    expect(navFor({ role: "yard_hand", designated: false }).map((e) => e.href)).toEqual(["/", "/scan", "/stock", "/check", "/ratings"]);
+    expect(navFor({ role: "yard_hand", designated: false }).map((e) => e.href)).toEqual(["/", "/scan", "/stock", "/kits", "/check", "/machines", "/trailers", "/ratings"]);
   });
   it("shows an owner the people, audit and settings pages", () => {
     expect(navFor({ role: "owner", designated: false }).map((e) => e.href)).toEqual([
-      "/", "/scan", "/stock", "/check", "/ratings", "/people", "/audit", "/settings",
+      "/", "/scan", "/stock", "/kits", "/check", "/machines", "/trailers", "/ratings", "/people", "/audit", "/settings",
     ]);
   });
   it("keeps people and settings from a planner", () => {
@@ -18,6 +18,12 @@ describe("navFor", () => {
 });
 
 describe("barFor", () => {
+  it("puts the kits in the bottom bar of every role, and the scratch load check behind More", () => {
+    for (const role of ["owner", "planner", "yard_hand"] as const) {
+      expect(barFor({ role, designated: false }).map((e) => e.href)).toEqual(["/", "/scan", "/stock", "/kits", "/more"]);
+    }
+  });
+
   it("fits the phone's bottom bar: at most five entries, the rest behind More", () => {
     for (const role of ["owner", "planner", "yard_hand"] as const) {
       const bar = barFor({ role, designated: false });

@@ -12,6 +12,8 @@ describe("item input", () => {
     const r = itemInputSchema.parse({ kind: "chain", marking: "grade", grade: "7", size: '3/8"' });
     expect(r).toMatchObject({ grade: 70, size: "3/8" });
     expect(itemInputSchema.parse({ kind: "chain", marking: "grade", grade: 80, size: "10 mm" }).size).toBe("10 mm");
+    // grade 43 is also stamped 40 or 400 (New York State cargo manual's copy of the 393.108 table)
+    expect(itemInputSchema.parse({ kind: "chain", marking: "grade", grade: "G40", size: "3/8" }).grade).toBe(43);
   });
 
   it("names the field at fault, with the nearest table sizes", () => {

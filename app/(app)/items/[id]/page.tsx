@@ -12,6 +12,7 @@ import { requireItemPage } from "@/lib/stock/page-item";
 import type { ItemKind, ItemStatus } from "@/lib/stock/labels";
 import { itemRating } from "@/lib/stock/rating";
 import { describeItem, sizeLabel } from "@/lib/stock/describe";
+import { unmarkedChainWords } from "@/lib/stock/wll-words";
 import { formatDay } from "@/lib/time";
 import { certificateAction, itemEventAction } from "./actions";
 
@@ -51,9 +52,12 @@ export default async function ItemPage({ params }: { params: Promise<{ id: strin
       <section aria-labelledby="wll-heading" className="rounded-xl border-2 border-ink p-4">
         <h2 id="wll-heading" className="text-base font-bold text-ink-soft">Working load limit</h2>
         {item.wllLb ? (
-          <p className="text-5xl font-bold">
-            {lb(item.wllLb)} <span className="text-2xl">({kg(item.wllLb)})</span>
-          </p>
+          <>
+            <p className="text-5xl font-bold">
+              {lb(item.wllLb)} <span className="text-2xl">({kg(item.wllLb)})</span>
+            </p>
+            {unmarkedChainWords(item) && <p className="text-xl font-bold">{unmarkedChainWords(item)}</p>}
+          </>
         ) : (
           <p className="text-2xl font-bold text-stop">Cannot be rated: do not use it in a tiedown</p>
         )}

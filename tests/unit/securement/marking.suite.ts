@@ -1,8 +1,8 @@
-// Component ratings: the 49 CFR 393.108 rules for marked and unmarked material
-// (393.108(a)-(f): ECFRIO-108 / SC-108 text, verified) and the default-rating lookup.
+// The marking rules: the 49 CFR 393.108 rules for marked and unmarked material
+// (393.108(a)-(f): ECFRIO-108 / SC-108 text, verified).
 import { describe, expect, it } from "vitest";
 import { RatingError } from "@/lib/securement/errors";
-import { componentWll, defaultRating } from "@/lib/securement/ratings";
+import { componentWll } from "@/lib/securement/marking";
 
 function ratingError(fn: () => unknown): RatingError {
   try {
@@ -13,40 +13,6 @@ function ratingError(fn: () => unknown): RatingError {
   }
   throw new Error("expected a RatingError");
 }
-
-describe("defaultRating", () => {
-  it("answers the brief's example (chain table, verified)", () => {
-    expect(defaultRating({ material: "chain", grade: 70, size: "3/8 in" })).toMatchObject({ material: "chain", wllLb: 6600, wllKg: 2990, source: "49 CFR 393.108, chain table" });
-  });
-
-  it("accepts grade marks", () => {
-    expect(defaultRating({ material: "chain", grade: "G7", size: "1/2" }).wllLb).toBe(11300);
-    expect(defaultRating({ material: "chain", grade: 800, size: "1/2" }).wllLb).toBe(12000);
-  });
-
-  it("applies 393.108(d) when no grade is given: grade 30 proof coil", () => {
-    expect(defaultRating({ material: "chain", size: "3/8" })).toMatchObject({ wllLb: 2650, wllKg: 1200, grade: 30, basis: "unmarked-rule" });
-  });
-
-  it("applies 393.108(c) when no fibre is given: polypropylene (FROM MEMORY table, not verified)", () => {
-    expect(defaultRating({ material: "rope", size: "1/2" })).toMatchObject({ wllLb: 625, wllKg: 280, fibre: "polypropylene", basis: "unmarked-rule" });
-  });
-
-  it("throws typed errors an API can answer with", () => {
-    const e1 = ratingError(() => defaultRating({ material: "chain", grade: 70, size: "9/16 in" }));
-    expect(e1).toMatchObject({ code: "SIZE_NOT_IN_TABLE", nearest: ["1/2 in", "5/8 in"], field: "size" });
-    expect(e1.message).toBe("Size 9/16 in is not in the 49 CFR 393.108 chain table; nearest: 1/2 in, 5/8 in");
-    const e2 = ratingError(() => defaultRating({ material: "chain", grade: 80, size: "7/16" }));
-    expect(e2).toMatchObject({ code: "SIZE_NOT_IN_TABLE", nearest: ["3/8 in", "1/2 in"] });
-    expect(ratingError(() => defaultRating({ material: "chain", grade: 120, size: "3/8" })).code).toBe("UNKNOWN_GRADE");
-    expect(ratingError(() => defaultRating({ material: "chain", grade: 70 })).code).toBe("MISSING_SIZE");
-    expect(ratingError(() => defaultRating({ material: "webbing" })).code).toBe("MISSING_SIZE");
-    expect(ratingError(() => defaultRating({ material: "steel-strapping", width: "2" })).code).toBe("MISSING_SIZE");
-    expect(ratingError(() => defaultRating({ material: "rope", fibre: "sisal", size: "1/2" })).code).toBe("UNKNOWN_FIBRE");
-    expect(ratingError(() => defaultRating({ material: "chain", grade: 70, size: "big" })).code).toBe("INVALID_SIZE");
-    expect(ratingError(() => defaultRating({ material: "cable" as never, size: "1/2" })).code).toBe("UNKNOWN_MATERIAL");
-  });
-});
 
 describe("componentWll: marked WLL (393.108(b))", () => {
   it("uses a marked WLL as marked, in any unit", () => {
@@ -104,23 +70,74 @@ describe("componentWll: unmarked material", () => {
     expect(w.findings.map((f) => f.code)).toEqual(["UNMARKED_WLL_IGNORED"]);
   });
 
-  it("rates unlabelled synthetic cordage as polypropylene (393.108(c); rope tables FROM MEMORY, not verified)", () => {
+  it("rates unlabelled synthetic cordage as polypropylene (393.108(c); rope tables verified, 1994 final rule)", () => {
     expect(componentWll({ type: "rope", fibre: "nylon", size: "1/2", marked: false })).toMatchObject({ wllLb: 625, basis: "unmarked-rule" });
-    const unknown = componentWll({ type: "rope", size: "1/2" });
-    expect(unknown).toMatchObject({ wllLb: 625, basis: "unmarked-rule" });
-    expect(unknown.findings[0]).toMatchObject({ code: "ROPE_FIBRE_UNKNOWN", severity: "warn" });
-    expect(unknown.findings[0]!.message).toContain("315 lb"); // manila 1/2 in, lower
     expect(componentWll({ type: "rope", fibre: "nylon", size: "1/2" })).toMatchObject({ wllLb: 525, basis: "table" });
   });
 
-  it("rates unmarked manila from the manila table (393.108(f); FROM MEMORY, not verified)", () => {
+  it("rope of unknown fibre: polypropylene (393.108(c)), and the warning gives the lower manila figure too (393.108(f))", () => {
+    const unknown = componentWll({ type: "rope", size: "1/2" });
+    expect(unknown).toMatchObject({ wllLb: 625, tableWllKg: 280, basis: "unmarked-rule" });
+    expect(unknown.findings).toEqual([
+      {
+        code: "ROPE_FIBRE_UNKNOWN",
+        severity: "warn",
+        message: "The 1/2 in rope's fibre is not given. Rated as polypropylene (49 CFR 393.108(c)): 625 lb (280 kg). If it is manila (natural fibre), 49 CFR 393.108(f) rates it lower: 315 lb (150 kg)",
+        source: "49 CFR 393.108(c); 49 CFR 393.108(f)",
+        field: "fibre",
+      },
+    ]);
+    // every size: the manila figure is the lower one
+    for (const size of ["3/8", "7/16", "13 mm", "5/8", "3/4", "1"]) {
+      const f = componentWll({ type: "rope", size }).findings[0]!;
+      const [pp, manila] = [...f.message.matchAll(/: ([\d,]+) lb/g)].map((m) => Number(m[1]!.replace(",", "")));
+      expect(manila!).toBeLessThan(pp!);
+    }
+  });
+
+  it("rates unmarked manila from the manila table (393.108(f); verified, 1994 final rule)", () => {
     expect(componentWll({ type: "rope", fibre: "manila", size: "3/4", marked: false })).toMatchObject({ wllLb: 640, basis: "table" });
   });
 
-  it("rates unmarked wire rope as 6 x 37 fiber core (393.108(e)(2))", () => {
+  it("rates unmarked wire rope of unknown construction as 6 x 37 fiber core (393.108(e)(2))", () => {
     const r = componentWll({ type: "wire-rope", size: "1/2" });
-    expect(r).toMatchObject({ wllLb: 5300, tableWllKg: 2400 });
+    expect(r).toMatchObject({ wllLb: 5300, tableWllKg: 2400, findings: [] });
     expect(r.source).toContain("393.108(e)(2)");
+    expect(componentWll({ type: "wire-rope", size: "1 in" }).wllLb).toBe(20900); // corrected row, 1994 final rule's table
+  });
+
+  it("rates unmarked wire rope at one quarter of its nominal strength when that is given (393.108(e)(1))", () => {
+    const r = componentWll({ type: "wire-rope", size: "1/2", construction: "6x19 IWRC", nominalStrength: { value: 26600, unit: "lb" } });
+    expect(r).toMatchObject({ wllLb: 6650, basis: "unmarked-rule", description: "1/2 in 6x19 IWRC wire rope" });
+    expect(r.tableWllKg).toBeUndefined();
+    expect(r.source).toBe("49 CFR 393.108(e)(1): one quarter of the nominal strength (Wire Rope Users Manual)");
+    expect(r.findings).toEqual([expect.objectContaining({ code: "RATED_AS_UNMARKED", severity: "info", source: "49 CFR 393.108(e)(1)" })]);
+    expect(r.findings[0]!.message).toContain("one quarter of its nominal strength of 26,600 lb (12,065.6 kg): 6,650 lb (3,016.4 kg)");
+    // in kg, and without a size or construction: still a quarter
+    expect(componentWll({ type: "wire-rope", nominalStrength: { value: 12000, unit: "kg" } }).wllLb).toBeCloseTo(3000 / 0.45359237, 4);
+    // a marked WLL governs (393.108(b))
+    expect(componentWll({ type: "wire-rope", size: "1/2", nominalStrength: { value: 26600, unit: "lb" }, wll: { value: 5000, unit: "lb" } })).toMatchObject({ wllLb: 5000, basis: "marked" });
+  });
+
+  it("known construction but no nominal strength: the 6 x 37 table, with a warning that it stands in only for the missing nominal strength", () => {
+    const r = componentWll({ type: "wire-rope", size: "1/2", construction: "6x19 IWRC" });
+    expect(r).toMatchObject({ wllLb: 5300, tableWllKg: 2400, basis: "table" });
+    expect(r.findings).toEqual([expect.objectContaining({ code: "WIRE_ROPE_RATED_FROM_TABLE", severity: "warn", source: "49 CFR 393.108(e)(1)", field: "nominalStrength" })]);
+    expect(r.findings[0]!.message).toContain("is rated from the 49 CFR 393.108 wire rope (6 x 37, fiber core) table (5,300 lb (2,400 kg)) only because no nominal strength was given");
+  });
+
+  it("refuses a nominal strength that is not above 0", () => {
+    expect(ratingError(() => componentWll({ type: "wire-rope", size: "1/2", nominalStrength: { value: 0, unit: "lb" } }))).toMatchObject({ code: "MISSING_WLL", field: "nominalStrength" });
+  });
+
+  it("reads grade mark 40 as grade 43 and notes it, on chain and on fittings", () => {
+    const c = componentWll({ type: "chain", grade: "G40", size: "3/8" });
+    expect(c).toMatchObject({ wllLb: 5400, basis: "table", description: "3/8 in grade 43 chain" });
+    expect(c.findings).toEqual([expect.objectContaining({ code: "GRADE_MARK_READ_AS", severity: "info", field: "grade" })]);
+    expect(componentWll({ type: "chain", grade: 400, size: "3/8", wll: { value: 5400, unit: "lb" } }).findings.map((f) => f.code)).toEqual(["GRADE_MARK_READ_AS"]);
+    expect(componentWll({ type: "hook", grade: 40, wll: { value: 5400, unit: "lb" } }).findings.map((f) => f.code)).toEqual(["GRADE_MARK_READ_AS"]);
+    // unmarked chain is not read for its grade at all
+    expect(componentWll({ type: "chain", grade: 40, size: "3/8", marked: false }).findings.map((f) => f.code)).toEqual(["RATED_AS_UNMARKED"]);
   });
 
   it("rates steel strapping by width and thickness", () => {

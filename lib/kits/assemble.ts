@@ -1,0 +1,205 @@
+/**
+ * From stored rows (db/fleet.ts, db/kits.ts) to the planner's model (model.ts), with the
+ * usability verdict of every item and anchor point for the day that matters: the kit's date.
+ * The verdict is lib/stock/usability.ts's, never derived again here.
+ *
+ * @module
+ */
+import { describeItem } from "@/lib/stock/describe";
+import type { ItemStatus } from "@/lib/stock/labels";
+import { itemUsability } from "@/lib/stock/usability";
+import type { AnchorPoint, AnchorStatus, Coupling, Kit, KitItem, KitState, KitTiedown, Machine, MachinePoint, Side, Trailer, TrailerType } from "./model";
+import type { Attachment } from "@/lib/securement";
+
+/** A machine as db/fleet.ts reads it. */
+export interface StoredMachine {
+  id: string;
+  name: string;
+  machineClass: string;
+  weightLb: number;
+  lengthMm: number;
+  widthMm: number | null;
+  heightMm: number | null;
+  articulated: boolean;
+  accessories: string[];
+  tiedownPoints: MachinePoint[];
+  cgFromFrontMm: number | null;
+}
+
+/** A trailer as db/fleet.ts reads it (its anchor points apart). */
+export interface StoredTrailer {
+  id: string;
+  name: string;
+  trailerType: TrailerType;
+  coupling: Coupling;
+  deckLengthMm: number;
+  tiltLengthMm: number;
+  deckWidthMm: number | null;
+  gvwrLb: number;
+  emptyWeightLb: number;
+  emptyTongueWeightLb: number;
+  hitchToAxleMm: number;
+  hitchToDeckFrontMm: number | null;
+}
+
+/** An anchor point as db/fleet.ts reads it. */
+export interface StoredAnchor {
+  id: string;
+  trailerId: string;
+  label: string;
+  side: Side;
+  positionMm: number;
+  wllLb: number;
+  status: AnchorStatus;
+  nextInspectionDue: string | null;
+  lastInspectedOn: string | null;
+}
+
+/** An item of stock as db/kits.ts reads it for a kit. */
+export interface StoredKitItem {
+  id: string;
+  tagCode: string;
+  kind: string;
+  grade: number | null;
+  gradeMarked: boolean;
+  size: string | null;
+  markedWllLb: number | null;
+  wllLb: number | null;
+  status: string;
+  nextInspectionDue: string | null;
+  details: Record<string, unknown>;
+}
+
+/** A tiedown row, with its items in order. */
+export interface StoredTiedown {
+  id: string;
+  kitId: string;
+  label: string;
+  anchorPointId: string;
+  attachment: Attachment;
+  secures: string;
+  machinePoint: string | null;
+  items: StoredKitItem[];
+}
+
+/** A kit row. */
+export interface StoredKit {
+  id: string;
+  date: string;
+  job: string;
+  site: string | null;
+  state: KitState;
+  machineId: string;
+  trailerId: string;
+  articulationRestrained: boolean;
+  machineFrontFromDeckFrontMm: number | null;
+}
+
+/**
+ * @example
+ * toMachine(row).accessories; // ["bucket", "blade"]
+ */
+export function toMachine(row: StoredMachine): Machine {
+  return { ...row, accessories: [...row.accessories], tiedownPoints: [...row.tiedownPoints] };
+}
+
+/**
+ * An anchor point with its verdict for a day.
+ *
+ * @example
+ * toAnchor(row, "2026-12-03").usable.ok; // false when it is out of use
+ */
+export function toAnchor(row: StoredAnchor, on: string): AnchorPoint {
+  return {
+    id: row.id,
+    label: row.label,
+    side: row.side,
+    positionMm: row.positionMm,
+    wllLb: row.wllLb,
+    status: row.status,
+    nextInspectionDue: row.nextInspectionDue,
+    lastInspectedOn: row.lastInspectedOn,
+    usable: itemUsability({ status: row.status as ItemStatus, nextInspectionDue: row.nextInspectionDue, wllLb: row.wllLb }, on),
+  };
+}
+
+/**
+ * A trailer with its anchor points judged for a day, front to back, left before right.
+ *
+ * @example
+ * toTrailer(row, anchors, "2026-12-03").anchorPoints.length;
+ */
+export function toTrailer(row: StoredTrailer, anchors: readonly StoredAnchor[], on: string): Trailer {
+  const sideOrder: Record<Side, number> = { left: 0, centre: 1, right: 2 };
+  return {
+    ...row,
+    anchorPoints: anchors
+      .filter((a) => a.trailerId === row.id)
+      .sort((a, b) => a.positionMm - b.positionMm || sideOrder[a.side] - sideOrder[b.side] || a.label.localeCompare(b.label))
+      .map((a) => toAnchor(a, on)),
+  };
+}
+
+/**
+ * An item of stock as a kit sees it, with its verdict for the kit's date.
+ *
+ * @example
+ * toKitItem(row, "2026-12-03").description; // "Chain, grade 70, 3/8 in"
+ */
+export function toKitItem(row: StoredKitItem, on: string): KitItem {
+  return {
+    id: row.id,
+    tagCode: row.tagCode,
+    kind: row.kind,
+    description: describeItem(row),
+    grade: row.grade,
+    gradeMarked: row.gradeMarked,
+    size: row.size,
+    markedWllLb: row.markedWllLb,
+    wllLb: row.wllLb,
+    details: row.details ?? {},
+    usable: itemUsability({ status: row.status as ItemStatus, nextInspectionDue: row.nextInspectionDue, wllLb: row.wllLb }, on),
+  };
+}
+
+/**
+ * A whole kit in the model, every part judged for the kit's date.
+ *
+ * @example
+ * const k = toKit(kitRow, machineRow, trailerRow, anchorRows, tiedownRows);
+ * kitVerdict(k).pass;
+ */
+export function toKit(
+  row: StoredKit,
+  machine: StoredMachine,
+  trailer: StoredTrailer,
+  anchors: readonly StoredAnchor[],
+  tiedowns: readonly StoredTiedown[],
+): Kit {
+  const used = new Set(tiedowns.map((t) => t.anchorPointId));
+  // Retired points stay out of the trailer's list unless this kit still uses one.
+  const shown = anchors.filter((a) => a.status !== "retired" || used.has(a.id));
+  const kitTiedowns: KitTiedown[] = tiedowns
+    .filter((t) => t.kitId === row.id)
+    .map((t) => ({
+      id: t.id,
+      label: t.label,
+      anchorPointId: t.anchorPointId,
+      attachment: t.attachment,
+      secures: t.secures,
+      machinePoint: t.machinePoint,
+      items: t.items.map((i) => toKitItem(i, row.date)),
+    }));
+  return {
+    id: row.id,
+    date: row.date,
+    job: row.job,
+    site: row.site,
+    state: row.state,
+    machine: toMachine(machine),
+    trailer: toTrailer(trailer, shown, row.date),
+    articulationRestrained: row.articulationRestrained,
+    machineFrontFromDeckFrontMm: row.machineFrontFromDeckFrontMm,
+    tiedowns: kitTiedowns,
+  };
+}

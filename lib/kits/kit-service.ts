@@ -1,0 +1,482 @@
+import "server-only";
+import type { Knex } from "knex";
+import { db } from "@/db";
+import { writeAudit } from "@/db/audit";
+import { KIT_STATE_ACTIONS, type AuditAction } from "@/lib/audit/actions";
+import * as fleet from "@/db/fleet";
+import * as items from "@/db/items";
+import * as kits from "@/db/kits";
+import { can, type Permission } from "@/lib/auth/roles";
+import type { Principal } from "@/lib/auth/session";
+import { config } from "@/lib/config";
+import { AppError, badRequest, fieldError, forbidden, notFound } from "@/lib/http/errors";
+import { sendMail } from "@/lib/mail/send";
+import { damageReportMail } from "@/lib/mail/templates";
+import type { ItemStatus } from "@/lib/stock/labels";
+import { describeItem } from "@/lib/stock/describe";
+import { nextStatus } from "@/lib/stock/status";
+import { itemUsability, type UsabilityReason } from "@/lib/stock/usability";
+import { kitItemJson, kitJson, kitListEntry, type KitJson } from "./answers";
+import { toAnchor, toKit, toKitItem, type StoredKit, type StoredKitItem } from "./assemble";
+import { addDays } from "./dates";
+import { compareScan, kitEventNote, transitionRule } from "./lifecycle";
+import { cornerPlans, suggestItems, type CornerPlan } from "./matching";
+import { MAX_KIT_TIEDOWNS, type Kit } from "./model";
+import { kitVerdict } from "./plan";
+import type { KitCreateInput, KitPatchInput, TiedownInput, TiedownPatchInput, TransitionInput } from "./schemas";
+
+// Kits: building them (draft only), their life from draft to returned, copies. Every change
+// locks the kit row first and the item rows next (in id order), then writes the change, the
+// history entries and one audit row in the same transaction. The database's unique key on
+// (item_id, kit_date) is the last word on "one kit per item per date".
+
+function require(actor: Principal, permission: Permission) {
+  if (!can(actor, permission)) throw forbidden();
+}
+
+function audit(actor: Principal, action: AuditAction, kitId: string, after: unknown, trx: Knex, before?: unknown) {
+  return writeAudit({ organisationId: actor.organisationId, actorId: actor.userId, action, entity: "kit", entityId: kitId, before, after }, trx);
+}
+
+// Reading
+
+/** Whole kits in the model, judged for their own dates, in a few queries whatever their number. */
+async function modelsOf(organisationId: string, rows: StoredKit[], trx: Knex = db): Promise<Kit[]> {
+  if (!rows.length) return [];
+  const machineIds = [...new Set(rows.map((r) => r.machineId))];
+  const trailerIds = [...new Set(rows.map((r) => r.trailerId))];
+  const [machines, trailers, anchors, tiedowns] = await Promise.all([
+    fleet.getMachinesByIds(organisationId, machineIds, trx),
+    fleet.getTrailersByIds(organisationId, trailerIds, trx),
+    fleet.listAnchorPoints(organisationId, trailerIds, { withRetired: true }, trx),
+    kits.listTiedowns(organisationId, rows.map((r) => r.id), trx),
+  ]);
+  return rows.map((row) => {
+    const machine = machines.find((m) => m.id === row.machineId)!;
+    const trailer = trailers.find((t) => t.id === row.trailerId)!;
+    return toKit(row, machine, trailer, anchors.filter((a) => a.trailerId === row.trailerId), tiedowns.filter((t) => t.kitId === row.id));
+  });
+}
+
+export async function loadKit(organisationId: string, id: string, trx: Knex = db): Promise<Kit | undefined> {
+  const row = await kits.getKit(organisationId, id, trx);
+  return row ? (await modelsOf(organisationId, [row], trx))[0] : undefined;
+}
+
+/** GET /api/v1/kits/{id}: the kit with its check, blockers, practice points and verdict. */
+export async function kitAnswer(organisationId: string, id: string): Promise<KitJson> {
+  const kit = await loadKit(organisationId, id);
+  if (!kit) throw notFound("No such kit.");
+  return kitJson(kit);
+}
+
+/** Kits from one date to another, each with its verdict. */
+export async function listKitEntries(organisationId: string, from: string, to: string) {
+  return (await modelsOf(organisationId, await kits.listKits(organisationId, from, to))).map(kitListEntry);
+}
+
+// Creating and editing
+
+async function requireMachineAndTrailer(organisationId: string, machineId: string, trailerId: string, trx: Knex) {
+  const machine = await fleet.getMachine(organisationId, machineId, trx);
+  if (!machine) throw notFound("No such machine.");
+  const trailer = await fleet.getTrailer(organisationId, trailerId, trx);
+  if (!trailer) throw notFound("No such trailer.");
+  return { machine, trailer };
+}
+
+export async function createKit(actor: Principal, input: KitCreateInput): Promise<string> {
+  require(actor, "fleet.manage");
+  return db.transaction(async (trx) => {
+    const { machine } = await requireMachineAndTrailer(actor.organisationId, input.machineId, input.trailerId, trx);
+    const id = await kits.insertKit(
+      actor.organisationId,
+      { ...input, site: input.site ?? null, articulationRestrained: machine.articulated ? input.articulationRestrained : false, createdBy: actor.userId },
+      trx,
+    );
+    await audit(actor, "kit.created", id, input, trx);
+    return id;
+  });
+}
+
+async function lockDraft(actor: Principal, kitId: string, trx: Knex): Promise<StoredKit> {
+  const kit = await kits.lockKit(actor.organisationId, kitId, trx);
+  if (!kit) throw notFound("No such kit.");
+  if (kit.state !== "draft") {
+    throw new AppError(409, `The kit is ${kit.state}: put it back to draft to change it.`, [], { code: "KIT_NOT_DRAFT", state: kit.state });
+  }
+  return kit;
+}
+
+/** The job, site and articulation lock of a kit; the lock changes the check, so only in a draft. */
+export async function patchKit(actor: Principal, kitId: string, input: KitPatchInput): Promise<void> {
+  require(actor, "fleet.manage");
+  await db.transaction(async (trx) => {
+    const kit = await kits.lockKit(actor.organisationId, kitId, trx);
+    if (!kit) throw notFound("No such kit.");
+    if (input.articulationRestrained !== undefined && kit.state !== "draft") {
+      throw new AppError(409, `The kit is ${kit.state}: put it back to draft to change it.`, [], { code: "KIT_NOT_DRAFT", state: kit.state });
+    }
+    if (kit.state === "returned") throw new AppError(409, "The kit has been returned; its record stays as it was.", [], { code: "KIT_RETURNED" });
+    await kits.updateKit(actor.organisationId, kitId, { job: input.job, site: input.site, articulationRestrained: input.articulationRestrained }, trx);
+    await audit(actor, "kit.updated", kitId, input, trx, kit);
+  });
+}
+
+/** The kit's anchor point, which must be on its trailer and may be used on its date. */
+async function requireAnchor(actor: Principal, kit: StoredKit, anchorPointId: string, trx: Knex) {
+  const anchor = await fleet.getAnchorPoint(actor.organisationId, anchorPointId, trx);
+  if (!anchor) throw notFound("No such anchor point.");
+  if (anchor.trailerId !== kit.trailerId) throw fieldError("anchorPointId", "This anchor point is on another trailer; choose one on the kit's trailer.");
+  const usable = toAnchor(anchor, kit.date).usable;
+  if (!usable.ok) {
+    throw new AppError(409, `Anchor point ${anchor.label} may not be used on ${kit.date}. ${usable.reasons.map((r) => r.message).join(" ")}`, [], {
+      code: "ANCHOR_NOT_USABLE",
+      anchorPointId,
+      reasons: usable.reasons,
+    });
+  }
+  return anchor;
+}
+
+async function requireSecures(organisationId: string, kit: StoredKit, secures: string, trx: Knex): Promise<string> {
+  if (secures.toLowerCase() === "machine") return "machine";
+  const machine = await fleet.getMachine(organisationId, kit.machineId, trx);
+  const accessory = machine?.accessories.find((a) => a.toLowerCase() === secures.toLowerCase());
+  if (!accessory) {
+    throw fieldError("secures", `"${secures}" is not on ${machine?.name ?? "the machine"}: use "machine"${machine?.accessories.length ? ` or one of ${machine.accessories.join(", ")}` : ""}.`);
+  }
+  return accessory;
+}
+
+function tooManyTiedowns() {
+  return new AppError(409, `A kit holds at most ${MAX_KIT_TIEDOWNS} tiedowns, the most one securement check takes.`, [], { code: "TOO_MANY_TIEDOWNS" });
+}
+
+/**
+ * Puts items into a tiedown of a locked kit: every item of the organisation, locked, may be
+ * used on the kit's date (the usability verdict), and is in no kit that date.
+ */
+async function putItems(actor: Principal, kit: StoredKit, tiedownId: string, itemIds: string[], trx: Knex): Promise<void> {
+  if (!itemIds.length) return;
+  const locked = await kits.lockItemsForKit(actor.organisationId, itemIds, trx);
+  for (const id of itemIds) {
+    const item = locked.find((i) => i.id === id);
+    if (!item) throw new AppError(404, "No such item in your stock.", [], { itemId: id });
+    const usable = toKitItem(item, kit.date).usable;
+    if (!usable.ok) {
+      throw new AppError(409, `${item.tagCode} may not be used on ${kit.date}. ${usable.reasons.map((r) => r.message).join(" ")}`, [], {
+        code: "ITEM_NOT_USABLE",
+        itemId: id,
+        reasons: usable.reasons,
+      });
+    }
+  }
+  // Under the item locks no other kit can take these items meanwhile; the unique key backs it.
+  const held = await kits.kitsHolding(actor.organisationId, itemIds, kit.date, trx);
+  if (held.length) throw takenError(held[0]!, kit, locked);
+  await kits.insertKitItems(actor.organisationId, { id: kit.id, date: kit.date }, tiedownId, itemIds, trx);
+}
+
+function takenError(holder: { itemId: string; kitId: string; job: string }, kit: { id: string; date: string }, known: StoredKitItem[] = []) {
+  const tag = known.find((i) => i.id === holder.itemId)?.tagCode ?? "This item";
+  const where = holder.kitId === kit.id ? "is already in this kit" : `is already in the kit for ${holder.job} on ${kit.date}`;
+  return new AppError(409, `${tag} ${where}.`, [], { code: "ITEM_IN_OTHER_KIT", itemId: holder.itemId, kitId: holder.kitId });
+}
+
+/**
+ * Runs a kit change; a refusal by the (item_id, kit_date) key, which only a race between two
+ * requests reaches past the check in putItems, becomes the same 409 naming the kit that holds it.
+ */
+async function guardTaken<T>(actor: Principal, kitId: string, work: () => Promise<T>): Promise<T> {
+  try {
+    return await work();
+  } catch (error) {
+    const e = error as { code?: string; constraint?: string; detail?: string };
+    if (e?.code !== "23505" || e.constraint !== kits.KIT_ITEM_DATE_KEY) throw error;
+    const match = /\(item_id, kit_date\)=\(([0-9a-f-]{36}), (\d{4}-\d{2}-\d{2})\)/.exec(e.detail ?? "");
+    const kit = await kits.getKit(actor.organisationId, kitId);
+    if (match && kit) {
+      const [holder] = await kits.kitsHolding(actor.organisationId, [match[1]!], match[2]!);
+      if (holder) throw takenError(holder, kit, await kits.getItemsForKit(actor.organisationId, [holder.itemId]));
+    }
+    throw new AppError(409, "An item was taken by another kit at the same moment. Look again and retry.", [], { code: "ITEM_IN_OTHER_KIT" });
+  }
+}
+
+export async function addTiedown(actor: Principal, kitId: string, input: TiedownInput): Promise<string> {
+  require(actor, "fleet.manage");
+  return guardTaken(actor, kitId, () =>
+    db.transaction(async (trx) => {
+      const kit = await lockDraft(actor, kitId, trx);
+      const anchor = await requireAnchor(actor, kit, input.anchorPointId, trx);
+      const secures = await requireSecures(actor.organisationId, kit, input.secures, trx);
+      if ((await kits.countTiedowns(kitId, trx)) >= MAX_KIT_TIEDOWNS) throw tooManyTiedowns();
+      const position = await kits.nextTiedownPosition(kitId, trx);
+      const label = input.label || input.machinePoint || (secures === "machine" ? `tiedown ${position + 1}` : secures);
+      const id = await kits.insertTiedown(actor.organisationId, kitId, { label, anchorPointId: anchor.id, attachment: input.attachment, secures, machinePoint: input.machinePoint ?? null }, position, trx);
+      await putItems(actor, kit, id, input.itemIds, trx);
+      await audit(actor, "kit.tiedown_added", kitId, { tiedownId: id, ...input, label, secures }, trx);
+      return id;
+    }),
+  );
+}
+
+export async function patchTiedown(actor: Principal, kitId: string, tiedownId: string, input: TiedownPatchInput): Promise<void> {
+  require(actor, "fleet.manage");
+  await db.transaction(async (trx) => {
+    const kit = await lockDraft(actor, kitId, trx);
+    const tiedown = (await kits.listTiedowns(actor.organisationId, [kitId], trx)).find((t) => t.id === tiedownId);
+    if (!tiedown) throw notFound("No such tiedown in this kit.");
+    if (input.anchorPointId) await requireAnchor(actor, kit, input.anchorPointId, trx);
+    const secures = input.secures === undefined ? undefined : await requireSecures(actor.organisationId, kit, input.secures, trx);
+    await kits.updateTiedown(actor.organisationId, kitId, tiedownId, { ...input, secures }, trx);
+    await audit(actor, "kit.tiedown_updated", kitId, { tiedownId, ...input }, trx);
+  });
+}
+
+export async function removeTiedown(actor: Principal, kitId: string, tiedownId: string): Promise<void> {
+  require(actor, "fleet.manage");
+  await db.transaction(async (trx) => {
+    await lockDraft(actor, kitId, trx);
+    if (!(await kits.deleteTiedown(actor.organisationId, kitId, tiedownId, trx))) throw notFound("No such tiedown in this kit.");
+    await audit(actor, "kit.tiedown_removed", kitId, { tiedownId }, trx);
+  });
+}
+
+export async function addItems(actor: Principal, kitId: string, tiedownId: string, itemIds: string[]): Promise<void> {
+  require(actor, "fleet.manage");
+  await guardTaken(actor, kitId, () =>
+    db.transaction(async (trx) => {
+      const kit = await lockDraft(actor, kitId, trx);
+      const tiedown = (await kits.listTiedowns(actor.organisationId, [kitId], trx)).find((t) => t.id === tiedownId);
+      if (!tiedown) throw notFound("No such tiedown in this kit.");
+      if (tiedown.items.length + itemIds.length > 10) throw fieldError("itemIds", "At most 10 items in one tiedown.");
+      await putItems(actor, kit, tiedownId, itemIds, trx);
+      await audit(actor, "kit.items_added", kitId, { tiedownId, itemIds }, trx);
+    }),
+  );
+}
+
+export async function removeItem(actor: Principal, kitId: string, tiedownId: string, itemId: string): Promise<void> {
+  require(actor, "fleet.manage");
+  await db.transaction(async (trx) => {
+    await lockDraft(actor, kitId, trx);
+    if (!(await kits.deleteKitItem(actor.organisationId, kitId, tiedownId, itemId, trx))) throw notFound("No such item in this tiedown.");
+    await audit(actor, "kit.item_removed", kitId, { tiedownId, itemId }, trx);
+  });
+}
+
+// Quick building
+
+/** Free items for the kit's date that may be used that day, and those that fit a tiedown. */
+export async function freeItems(actor: Principal, kitId: string, options: { forTiedownId?: string; kind?: string }) {
+  require(actor, "fleet.view");
+  const kit = await loadKit(actor.organisationId, kitId);
+  if (!kit) throw notFound("No such kit.");
+  const free = (await kits.itemsFreeOn(actor.organisationId, kit.date, { kind: options.kind })).map((i) => toKitItem(i, kit.date)).filter((i) => i.usable.ok);
+  const tiedown = options.forTiedownId ? kit.tiedowns.find((t) => t.id === options.forTiedownId) : undefined;
+  if (options.forTiedownId && !tiedown) throw notFound("No such tiedown in this kit.");
+  const suggestions = tiedown ? suggestItems(tiedown.items, free).map((s) => ({ itemId: s.item.id, reason: s.reason })) : [];
+  return { date: kit.date, data: free.map(kitItemJson), suggestions };
+}
+
+/**
+ * "Use the same for all four corners": copies a tiedown's attachment and sorts of items to
+ * the machine's other corners, on free anchor points of the same side, with free items of
+ * the same kind, grade and size (lib/kits/matching.ts). Corners that could not be filled
+ * are answered with what was missing.
+ */
+export async function fillCorners(actor: Principal, kitId: string, fromTiedownId: string): Promise<CornerPlan[]> {
+  require(actor, "fleet.manage");
+  return guardTaken(actor, kitId, () =>
+    db.transaction(async (trx) => {
+      await lockDraft(actor, kitId, trx);
+      const kit = (await loadKit(actor.organisationId, kitId, trx))!;
+      const from = kit.tiedowns.find((t) => t.id === fromTiedownId);
+      if (!from) throw notFound("No such tiedown in this kit.");
+      if (!from.items.length) throw fieldError("fromTiedownId", "Put the items into this tiedown first; its items are what is copied.");
+      const free = (await kits.itemsFreeOn(actor.organisationId, kit.date, {}, trx)).map((i) => toKitItem(i, kit.date));
+      const plans = cornerPlans(kit, from, free);
+      if (kit.tiedowns.length + plans.filter((p) => !p.tiedownId && p.anchorPointId).length > MAX_KIT_TIEDOWNS) throw tooManyTiedowns();
+      const stored = (await kits.getKit(actor.organisationId, kitId, trx))!;
+      let position = await kits.nextTiedownPosition(kitId, trx);
+      for (const plan of plans) {
+        if (!plan.anchorPointId) continue;
+        const tiedownId =
+          plan.tiedownId ??
+          (await kits.insertTiedown(actor.organisationId, kitId, { label: plan.label, anchorPointId: plan.anchorPointId, attachment: plan.attachment, secures: "machine", machinePoint: plan.machinePoint }, position++, trx));
+        await putItems(actor, stored, tiedownId, [...plan.itemIds], trx);
+      }
+      await audit(actor, "kit.corners_filled", kitId, { fromTiedownId, plans }, trx);
+      return plans;
+    }),
+  );
+}
+
+// Life of a kit
+
+function itemBrief(i: { id: string; tagCode: string; description: string }) {
+  return { id: i.id, tagCode: i.tagCode, description: i.description };
+}
+
+async function notifyDamage(actor: Principal, damaged: { item: StoredKitItem; note: string }[]) {
+  if (!damaged.length) return;
+  const owners = await items.ownersOf(actor.organisationId);
+  await Promise.all(
+    damaged.flatMap(({ item, note }) =>
+      owners.map((o) =>
+        sendMail(damageReportMail({ to: o.email, reporterName: actor.name, itemDescription: describeItem(item), tagCode: item.tagCode, defects: [], note, link: `${config.APP_URL}/items/${item.id}` })).catch((error) =>
+          console.error("damage e-mail failed", error),
+        ),
+      ),
+    ),
+  );
+}
+
+/**
+ * Takes a kit a step along draft → ready → loaded → returned (or ready → draft):
+ * - ready: only when the kit passes (the engine's check and no blocker);
+ * - loaded: the yard hand's scan must be exactly the kit's items, and the kit must still
+ *   pass on its date (gear tagged out since it was marked ready stops it);
+ * - returned: everything must be scanned back (or reported lost); damaged items are tagged
+ *   out and lost ones marked lost, in the same transaction.
+ * Every step writes an entry into each item's history and an audit row.
+ */
+export async function transitionKit(actor: Principal, kitId: string, input: TransitionInput): Promise<void> {
+  require(actor, "kits.load");
+  const tagged: { item: StoredKitItem; note: string }[] = [];
+  await db.transaction(async (trx) => {
+    const row = await kits.lockKit(actor.organisationId, kitId, trx);
+    if (!row) throw notFound("No such kit.");
+    const rule = transitionRule(row.state, input.to);
+    if ("error" in rule) throw new AppError(409, rule.error, [], { code: "TRANSITION_NOT_ALLOWED", state: row.state });
+    require(actor, rule.permission);
+
+    const ids = await kits.kitItemIds(actor.organisationId, kitId, trx);
+    const locked = await kits.lockItemsForKit(actor.organisationId, ids, trx);
+    const kit = (await modelsOf(actor.organisationId, [row], trx))[0]!;
+    const all = kit.tiedowns.flatMap((t) => t.items);
+
+    if (input.to === "ready" || input.to === "loaded") {
+      const verdict = kitVerdict(kit);
+      if (!verdict.pass) {
+        const fails = verdict.check.findings.filter((f) => f.severity === "fail").map((f) => f.message);
+        throw new AppError(409, `The kit cannot be ${input.to === "ready" ? "marked ready" : "loaded"}: ${[...verdict.blockers.map((b) => b.message), ...fails].join(" ")}`, [], {
+          code: "KIT_DOES_NOT_PASS",
+          blockers: verdict.blockers,
+          findings: verdict.check.findings.filter((f) => f.severity === "fail"),
+        });
+      }
+    }
+
+    if (input.to === "loaded" || input.to === "returned") {
+      const lost = new Set(input.lost.map((l) => l.itemId));
+      const scanned = input.scannedItemIds ?? [];
+      const { missing, unexpected } = compareScan(ids, [...scanned, ...lost]);
+      const both = scanned.filter((id) => lost.has(id));
+      if (missing.length || unexpected.length || both.length) {
+        const strangers = (await kits.getItemsForKit(actor.organisationId, unexpected, trx)).map((i) => toKitItem(i, row.date));
+        const named = (list: string[]) =>
+          list.map((id) => itemBrief(all.find((i) => i.id === id) ?? strangers.find((i) => i.id === id) ?? { id, tagCode: "unknown", description: "Not an item of your stock" }));
+        const parts = [
+          missing.length ? `not scanned: ${named(missing).map((i) => i.tagCode).join(", ")}` : "",
+          unexpected.length ? `not in this kit: ${named(unexpected).map((i) => i.tagCode).join(", ")}` : "",
+          both.length ? `both scanned and reported lost: ${named(both).map((i) => i.tagCode).join(", ")}` : "",
+        ].filter(Boolean);
+        throw new AppError(409, `The scan does not match the kit (${parts.join("; ")}). The kit stays ${row.state}.`, [], {
+          code: "SCAN_MISMATCH",
+          missing: named(missing),
+          unexpected: named(unexpected),
+          both: named(both),
+        });
+      }
+      const notInKit = [...input.damaged, ...input.lost].map((d) => d.itemId).filter((id) => !ids.includes(id));
+      if (notInKit.length) throw badRequest("Only items of this kit can be reported damaged or lost.", [{ path: "damaged", message: "Only items of this kit can be reported damaged or lost." }]);
+    }
+
+    const note = kitEventNote(row, input.to);
+    for (const id of ids) {
+      await items.insertEvents([{ organisationId: actor.organisationId, itemId: id, type: "kit", outcome: input.to, note, actorId: actor.userId }], trx);
+    }
+    for (const d of input.damaged) {
+      const item = locked.find((i) => i.id === d.itemId)!;
+      const next = nextStatus(item.status as ItemStatus, "tag_out");
+      if ("error" in next) continue; // already out of use: the kit entry and the note below say it
+      await items.insertEvents([{ organisationId: actor.organisationId, itemId: item.id, type: "tag_out", note: `Reported damaged on return (${row.job}, ${row.date}): ${d.note}`, actorId: actor.userId }], trx);
+      await items.updateItem(actor.organisationId, item.id, { status: next.status }, trx);
+      await writeAudit({ organisationId: actor.organisationId, actorId: actor.userId, action: "item.tagged_out", entity: "item", entityId: item.id, after: { status: next.status, note: d.note, kitId } }, trx);
+      tagged.push({ item, note: d.note });
+    }
+    for (const l of input.lost) {
+      const item = locked.find((i) => i.id === l.itemId)!;
+      const next = nextStatus(item.status as ItemStatus, "lost");
+      if ("error" in next) continue;
+      await items.insertEvents([{ organisationId: actor.organisationId, itemId: item.id, type: "lost", note: `Not back from ${row.job} (${row.date}): ${l.note}`, actorId: actor.userId }], trx);
+      await items.updateItem(actor.organisationId, item.id, { status: next.status }, trx);
+      await writeAudit({ organisationId: actor.organisationId, actorId: actor.userId, action: "item.lost", entity: "item", entityId: item.id, after: { status: next.status, note: l.note, kitId } }, trx);
+    }
+    await kits.updateKit(actor.organisationId, kitId, { state: input.to }, trx);
+    await audit(actor, KIT_STATE_ACTIONS[input.to], kitId, { state: input.to, scannedItemIds: input.scannedItemIds, damaged: input.damaged, lost: input.lost }, trx, { state: row.state });
+  });
+  await notifyDamage(actor, tagged);
+}
+
+/**
+ * A copy of a kit for another date, as a draft: the same machine, trailer and tiedowns; each
+ * item only when it may be used on the new date and is in no kit that day. What was left
+ * out is answered, with the reason.
+ */
+export async function copyKit(actor: Principal, kitId: string, input: { date: string; job?: string; site?: string | null }) {
+  require(actor, "fleet.manage");
+  return guardTaken(actor, kitId, () =>
+    db.transaction(async (trx) => {
+      const source = await loadKit(actor.organisationId, kitId, trx);
+      if (!source) throw notFound("No such kit.");
+      const row = (await kits.getKit(actor.organisationId, kitId, trx))!;
+      const copyId = await kits.insertKit(
+        actor.organisationId,
+        {
+          date: input.date,
+          job: input.job ?? source.job,
+          site: input.site === undefined ? source.site : input.site,
+          machineId: row.machineId,
+          trailerId: row.trailerId,
+          articulationRestrained: source.articulationRestrained,
+          machineFrontFromDeckFrontMm: source.machineFrontFromDeckFrontMm,
+          copiedFrom: kitId,
+          createdBy: actor.userId,
+        },
+        trx,
+      );
+      const copy = { id: copyId, date: input.date };
+      const wanted = source.tiedowns.flatMap((t) => t.items.map((i) => i.id));
+      const locked = await kits.lockItemsForKit(actor.organisationId, wanted, trx);
+      const held = await kits.kitsHolding(actor.organisationId, wanted, input.date, trx);
+      const leftOut: { itemId: string; tagCode: string; description: string; tiedownLabel: string; code: string; reasons: UsabilityReason[] | null; kitId: string | null; message: string }[] = [];
+      for (const [position, t] of source.tiedowns.entries()) {
+        const tiedownId = await kits.insertTiedown(actor.organisationId, copyId, { label: t.label, anchorPointId: t.anchorPointId, attachment: t.attachment, secures: t.secures, machinePoint: t.machinePoint }, position, trx);
+        const keep: string[] = [];
+        for (const item of t.items) {
+          const stored = locked.find((i) => i.id === item.id)!;
+          const usable = itemUsability({ status: stored.status as ItemStatus, nextInspectionDue: stored.nextInspectionDue, wllLb: stored.wllLb }, input.date);
+          const holder = held.find((h) => h.itemId === item.id);
+          if (!usable.ok) {
+            leftOut.push({ itemId: item.id, tagCode: item.tagCode, description: item.description, tiedownLabel: t.label, code: "ITEM_NOT_USABLE", reasons: usable.reasons, kitId: null, message: usable.reasons.map((r) => r.message).join(" ") });
+          } else if (holder) {
+            leftOut.push({ itemId: item.id, tagCode: item.tagCode, description: item.description, tiedownLabel: t.label, code: "ITEM_IN_OTHER_KIT", reasons: null, kitId: holder.kitId, message: `In the kit for ${holder.job} on ${input.date}.` });
+          } else keep.push(item.id);
+        }
+        await kits.insertKitItems(actor.organisationId, copy, tiedownId, keep, trx);
+      }
+      await audit(actor, "kit.copied", copyId, { from: kitId, date: input.date, leftOut: leftOut.map((l) => l.itemId) }, trx);
+      return { id: copyId, leftOut };
+    }),
+  );
+}
+
+/** Loaded kits of earlier days: gear still out on jobs. */
+export async function kitsStillOut(organisationId: string, before: string) {
+  const rows = (await kits.listKits(organisationId, addDays(before, -92), addDays(before, -1))).filter((k) => k.state === "loaded");
+  return (await modelsOf(organisationId, rows)).map(kitListEntry);
+}

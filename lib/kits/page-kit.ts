@@ -1,0 +1,24 @@
+import "server-only";
+import { notFound } from "next/navigation";
+import { getFleetSettings } from "@/db/fleet";
+import type { Permission } from "@/lib/auth/roles";
+import { requirePage } from "@/lib/auth/session";
+import { isUuid } from "@/lib/http/ids";
+import { kitJson } from "./answers";
+import { dayIn } from "./dates";
+import { loadKit } from "./kit-service";
+
+/**
+ * For the kit pages: the signed-in person (sign-in or 403 otherwise), the kit of their
+ * organisation named by the path as the API answers it (404 for a malformed id or another
+ * organisation's), the organisation's units and today's date in its time zone.
+ */
+export async function requireKitPage(permission: Permission, params: Promise<{ id: string }>) {
+  const principal = await requirePage(permission);
+  const { id } = await params;
+  if (!isUuid(id)) notFound();
+  const kit = await loadKit(principal.organisationId, id);
+  if (!kit) notFound();
+  const settings = await getFleetSettings(principal.organisationId);
+  return { principal, kit: kitJson(kit), units: settings.units, today: dayIn(settings.timeZone) };
+}
