@@ -19,8 +19,11 @@ export interface OpenBrowser {
   close: () => Promise<void>;
 }
 
-/** A fresh profile each time; `phone` gives a 390x844 touch viewport; `scale` is the device pixel ratio. */
-export async function openBrowser(options: { phone?: boolean; extraArgs?: string[]; scale?: number } = {}): Promise<OpenBrowser> {
+/**
+ * A fresh profile each time; `phone` gives a 390x844 touch viewport; `scale` is the device
+ * pixel ratio; `timezoneId` the browser's own time zone (an IANA name).
+ */
+export async function openBrowser(options: { phone?: boolean; extraArgs?: string[]; scale?: number; timezoneId?: string } = {}): Promise<OpenBrowser> {
   const dir = mkdtempSync(path.join(tmpdir(), "linkyard-chromium-"));
   const context = await chromium.launchPersistentContext(dir, {
     executablePath: process.env.CHROMIUM_PATH ?? "/usr/bin/chromium",
@@ -30,6 +33,7 @@ export async function openBrowser(options: { phone?: boolean; extraArgs?: string
     deviceScaleFactor: options.scale ?? 1,
     hasTouch: options.phone ?? false,
     isMobile: options.phone ?? false,
+    ...(options.timezoneId && { timezoneId: options.timezoneId }),
   });
   return {
     context,
