@@ -4,7 +4,7 @@ import { useActionState, useState } from "react";
 import { buttonClass, SubmitButton, type ButtonVariant } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
 import { FormAlert } from "@/components/ui/form-alert";
-import { initialFormState, type FormAction } from "@/lib/forms/state";
+import { initialFormState, type FormAction, type FormState } from "@/lib/forms/state";
 import type { CheckPoint } from "@/lib/stock/checklists";
 import type { MeasurementSpec } from "@/lib/stock/inspection";
 
@@ -45,6 +45,17 @@ function PhotoField({ name = "photo", label, accept, error }: { name?: "photo" |
   );
 }
 
+/** What a check or an inspection came to, with the way back to the item (and on to the next tag). */
+function Recorded({ state, itemId, scanNext = false }: { state: FormState; itemId: string; scanNext?: boolean }) {
+  return (
+    <div className="flex flex-col gap-4">
+      <FormAlert state={state} />
+      <Link href={`/items/${itemId}`} className={buttonClass("primary")}>Back to the item</Link>
+      {scanNext && <Link href="/scan" className={buttonClass("secondary")}>Scan the next tag</Link>}
+    </div>
+  );
+}
+
 /** Yes / no per defect, big enough for a gloved thumb. "No" is not preselected: every point is answered on purpose. */
 function Checklist({ points, errors }: { points: readonly CheckPoint[]; errors?: Record<string, string> }) {
   return (
@@ -75,15 +86,7 @@ function Checklist({ points, errors }: { points: readonly CheckPoint[]; errors?:
 export function PreUseCheckForm({ itemId, points, notUsable, action: record }: { itemId: string; points: readonly CheckPoint[]; notUsable?: React.ReactNode; action: FormAction }) {
   const [state, action] = useActionState(record, initialFormState);
   if (!state.ok && notUsable) return <>{notUsable}</>;
-  if (state.ok) {
-    return (
-      <div className="flex flex-col gap-4">
-        <FormAlert state={state} />
-        <Link href={`/items/${itemId}`} className={buttonClass("primary")}>Back to the item</Link>
-        <Link href="/scan" className={buttonClass("secondary")}>Scan the next tag</Link>
-      </div>
-    );
-  }
+  if (state.ok) return <Recorded state={state} itemId={itemId} scanNext />;
   return (
     <form action={action} className="flex flex-col gap-4" noValidate>
       <input type="hidden" name="type" value="check" />
@@ -99,14 +102,7 @@ export function PreUseCheckForm({ itemId, points, notUsable, action: record }: {
 
 export function InspectionForm({ itemId, points, measurements, action: record }: { itemId: string; points: readonly CheckPoint[]; measurements: readonly MeasurementSpec[]; action: FormAction }) {
   const [state, action] = useActionState(record, initialFormState);
-  if (state.ok) {
-    return (
-      <div className="flex flex-col gap-4">
-        <FormAlert state={state} />
-        <Link href={`/items/${itemId}`} className={buttonClass("primary")}>Back to the item</Link>
-      </div>
-    );
-  }
+  if (state.ok) return <Recorded state={state} itemId={itemId} />;
   return (
     <form action={action} className="flex flex-col gap-4" noValidate>
       <input type="hidden" name="type" value="inspection" />

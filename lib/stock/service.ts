@@ -120,6 +120,21 @@ async function changeStatus(trx: Tx, actor: Principal, id: string, change: Statu
   return { item, status: next.status };
 }
 
+/** The item of the organisation and its checklist's answers read: the outcome, or a 400 naming the answers. */
+async function checklistOf(actor: Principal, id: string, answers: CheckAnswer[]) {
+  const current = await itemOf(actor, id);
+  const outcome = preUseOutcome(current.kind, answers);
+  if ("error" in outcome) throw badRequest(outcome.error, [{ path: "answers", message: outcome.error }]);
+  return { current, outcome };
+}
+
+/** The item of the actor's organisation, or a 404. */
+async function itemOf(actor: Principal, id: string): Promise<items.ItemRecord> {
+  const item = await items.getItem(actor.organisationId, id);
+  if (!item) throw notFound("No such item in your stock.");
+  return item;
+}
+
 export interface PreUseCheckInput {
   answers: CheckAnswer[];
   note?: string;
@@ -132,10 +147,7 @@ export interface PreUseCheckInput {
  */
 export async function recordPreUseCheck(actor: Principal, id: string, input: PreUseCheckInput) {
   mustBeAllowed(actor, "items.check");
-  const current = await items.getItem(actor.organisationId, id);
-  if (!current) throw notFound("No such item in your stock.");
-  const outcome = preUseOutcome(current.kind, input.answers);
-  if ("error" in outcome) throw badRequest(outcome.error, [{ path: "answers", message: outcome.error }]);
+  const { current, outcome } = await checklistOf(actor, id, input.answers);
   if (outcome.outcome === "fail" && !input.note?.trim() && !(input.photo && input.photo.size > 0)) {
     throw fieldError("note", "Say what is wrong, or add a photo, so the owner can judge the damage.");
   }
@@ -158,8 +170,7 @@ export async function recordPreUseCheck(actor: Principal, id: string, input: Pre
 /** Report damage outside a check: tags the item out at once. */
 export async function tagOut(actor: Principal, id: string, input: { note: string; photo?: File | null }) {
   mustBeAllowed(actor, "items.check");
-  const current = await items.getItem(actor.organisationId, id);
-  if (!current) throw notFound("No such item in your stock.");
+  const current = await itemOf(actor, id);
   await withUpload(actor, input.photo, "damage-photo", "photo", (stored) =>
     audited(actor, async (trx, audit) => {
       const { status } = await changeStatus(trx, actor, id, "tag_out");
@@ -194,11 +205,8 @@ export interface InspectionInput {
 /** Periodic inspection by an owner or designated person. */
 export async function recordInspection(actor: Principal, id: string, input: InspectionInput) {
   mustBeAllowed(actor, "items.inspect");
-  const current = await items.getItem(actor.organisationId, id);
-  if (!current) throw notFound("No such item in your stock.");
+  const { current, outcome } = await checklistOf(actor, id, input.answers);
   const kind = current.kind;
-  const outcome = preUseOutcome(kind, input.answers);
-  if ("error" in outcome) throw badRequest(outcome.error, [{ path: "answers", message: outcome.error }]);
   const measured = evaluateMeasurements(kind, current.size, input.measurements);
   const problem = verdictProblem(input.verdict, outcome.defects.length, measured);
   if (problem) throw fieldError("verdict", problem);
@@ -267,7 +275,7 @@ export async function correctEvent(actor: Principal, itemId: string, eventId: nu
 /** A maker's certificate or other document kept with the item. */
 export async function attachCertificate(actor: Principal, id: string, file: File) {
   mustBeAllowed(actor, "stock.edit");
-  if (!(await items.getItem(actor.organisationId, id))) throw notFound("No such item in your stock.");
+  await itemOf(actor, id);
   await withUpload(actor, file, "certificate", "certificate", async (stored) => {
     if (!stored) throw fieldError("certificate", "Choose a file.");
     await audited(actor, async (trx, audit) => {
