@@ -153,6 +153,11 @@ export async function deleteTiedown(organisationId: string, kitId: string, id: s
   return (await trx("kit_tiedowns").where({ organisation_id: organisationId, kit_id: kitId, id }).delete()) > 0;
 }
 
+/** Removes every tiedown of a kit (a proposal replaces them) and so frees their items for the date. */
+export async function deleteAllTiedowns(organisationId: string, kitId: string, trx: Knex): Promise<number> {
+  return trx("kit_tiedowns").where({ organisation_id: organisationId, kit_id: kitId }).delete();
+}
+
 /**
  * Puts items into a tiedown. A second kit for the same item on the same date is refused by
  * the database (unique key KIT_ITEM_DATE_KEY, SQLSTATE 23505).
@@ -220,6 +225,30 @@ export async function itemsFreeOn(organisationId: string, date: string, options:
     .select(ITEM_COLUMNS);
   if (options.kind) q.where("i.kind", options.kind);
   return q;
+}
+
+/**
+ * The stock a proposal chooses from: every item of the given kinds that is not retired, with
+ * the kit (and its job) that holds it on the date, if any. Whether each may be used that day
+ * is the caller's question (the usability verdict).
+ */
+export async function stockWithHoldersOn(
+  organisationId: string,
+  date: string,
+  kinds: readonly string[],
+  trx: Knex = db,
+): Promise<(StoredKitItem & { holderKitId: string | null; holderJob: string | null })[]> {
+  return trx("items as i")
+    .leftJoin("kit_items as ki", function () {
+      this.on("ki.item_id", "=", "i.id").andOn("ki.kit_date", "=", trx.raw("?::date", [date]));
+    })
+    .leftJoin("kits as k", "k.id", "ki.kit_id")
+    .where("i.organisation_id", organisationId)
+    .whereNot("i.status", "retired")
+    .whereIn("i.kind", kinds as string[])
+    .orderBy([{ column: "i.kind" }, { column: "i.tag_code" }])
+    .limit(5000)
+    .select([...ITEM_COLUMNS, "ki.kit_id as holderKitId", "k.job as holderJob"]);
 }
 
 /** Kits that use a trailer's anchor point on or after a date, not yet returned (for the trailer page). */

@@ -72,7 +72,7 @@ type Point = { label: string; side: string; position_mm: number; wll_lb: number;
 
 const TRAILERS: { row: Record<string, unknown>; points: Point[] }[] = [
   {
-    row: { name: "Deck 20 tilt", trailer_type: "tilt-deck", coupling: "pintle", deck_length_mm: ft(20), tilt_length_mm: ft(20), deck_width_mm: 2080, gvwr_lb: 14000, empty_weight_lb: 3600, empty_tongue_weight_lb: 450, hitch_to_axle_mm: ft(21), hitch_to_deck_front_mm: 1500 },
+    row: { name: "Deck 20 tilt", trailer_type: "tilt-deck", coupling: "pintle", deck_length_mm: ft(20), tilt_length_mm: ft(20), deck_width_mm: 2080, gvwr_lb: 14000, empty_weight_lb: 3600, empty_tongue_weight_lb: 450, hitch_to_axle_mm: ft(18), hitch_to_deck_front_mm: 1500 },
     points: [
       { label: "L1", side: "left", position_mm: 200, wll_lb: 6600 },
       { label: "R1", side: "right", position_mm: 200, wll_lb: 6600 },
@@ -160,9 +160,9 @@ export async function seed(knex: Knex): Promise<void> {
       return item.id;
     };
 
-    async function kit(k: { job: string; site: string; machine: string; trailer: string; tiedowns: { label: string; anchor: string; secures?: string; machinePoint?: string; attachment?: string; items: string[] }[] }) {
+    async function kit(k: { job: string; site: string; machine: string; trailer: string; placedMm?: number; tiedowns: { label: string; anchor: string; secures?: string; machinePoint?: string; attachment?: string; items: string[] }[] }) {
       const [row] = await trx("kits")
-        .insert({ organisation_id: organisationId, date: tomorrow, job: k.job, site: k.site, machine_id: machine(k.machine), trailer_id: trailers.get(k.trailer), created_by: PLANNER })
+        .insert({ organisation_id: organisationId, date: tomorrow, job: k.job, site: k.site, machine_id: machine(k.machine), trailer_id: trailers.get(k.trailer), machine_front_from_deck_front_mm: k.placedMm ?? null, created_by: PLANNER })
         .returning("id");
       for (const [position, t] of k.tiedowns.entries()) {
         const [td] = await trx("kit_tiedowns")
@@ -175,12 +175,15 @@ export async function seed(knex: Knex): Promise<void> {
 
     const corner = (label: string, anchor: string, items: string[]) => ({ label, anchor, machinePoint: label, items });
     // Passes: four corners of 3/8 in grade 70 chain with 5,400 lb binders, and the bucket
-    // and blade each held by a 5/16 in chain (49 CFR 393.130(b)(1)).
+    // and blade each held by a 5/16 in chain (49 CFR 393.130(b)(1)). The machine's front sits
+    // 1 m back from the deck front: about 1,460 lb on the pintle, 12.5 % of the loaded
+    // 11,700 lb, inside the 10–15 % band (lib/kits/placement.ts).
     await kit({
       job: "Hollins driveway",
       site: "14 Quarry Lane, Hollins",
       machine: "Marten",
       trailer: "Deck 20 tilt",
+      placedMm: 1000,
       tiedowns: [
         corner("front left", "L1", ["CH7-38", "BR-516-38"]),
         corner("front right", "R1", ["CH7-38", "BR-516-38"]),
@@ -193,7 +196,8 @@ export async function seed(knex: Knex): Promise<void> {
     // Does not pass: a 10,400 lb loader needs four tiedowns on the machine (49 CFR
     // 393.130(c)(1)) and has three; the rear right was planned on R3 before the yard found
     // that stake pocket bent; nothing holds the bucket; the rear left is the old proof coil
-    // chain with no grade mark, rated as grade 30 (49 CFR 393.108(d)).
+    // chain with no grade mark, rated as grade 30 (49 CFR 393.108(d)). Not placed: the
+    // gooseneck's hitch-to-deck-front distance has not been measured.
     await kit({
       job: "Brookside culvert",
       site: "Brookside Road culvert, by the mill bridge",

@@ -28,7 +28,13 @@ export function KitCard({ kit, canEdit, canLoad, copyTo }: { kit: KitListEntry; 
       </div>
       {!kit.pass && kit.state !== "returned" && (
         <p className="text-base font-bold text-stop">
-          {[kit.failCount ? plural(kit.failCount, "finding") + " against the rule" : "", kit.blockerCount ? plural(kit.blockerCount, "part") + " not usable that day" : ""].filter(Boolean).join(" · ") || "Not checked yet"}
+          {[
+            kit.failCount ? plural(kit.failCount, "finding") + " against the rule" : "",
+            kit.blockerCount ? plural(kit.blockerCount, "part") + " not usable that day" : "",
+            kit.placementFailCount ? "the hitch or the GVWR" : "",
+          ]
+            .filter(Boolean)
+            .join(" · ") || "Not checked yet"}
         </p>
       )}
       {canLoad && kit.state === "ready" && (

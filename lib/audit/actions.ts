@@ -53,6 +53,8 @@ export const AUDIT_WORDS = {
   "kit.items_added": "Gear added to a kit",
   "kit.item_removed": "Gear removed from a kit",
   "kit.corners_filled": "Kit corners filled like the first",
+  "kit.placed": "Machine placed on the kit's deck",
+  "kit.proposal_applied": "Proposed kit used in place of the tiedowns",
   "kit.draft": "Kit back to draft",
   "kit.ready": "Kit marked ready",
   "kit.loaded": "Kit loaded",

@@ -8,7 +8,8 @@
  */
 import type { SecurementCheckResult, TiedownResult } from "@/lib/securement";
 import { MACHINE_CLASS_LABELS, ANCHOR_STATUS_LABELS, KIT_STATE_LABELS, TRAILER_TYPE_LABELS, type AnchorPoint, type BuiltInMachineClass, type Kit, type KitItem, type Machine, type Trailer } from "./model";
-import { checkedTiedowns, kitVerdict, type KitBlocker, type PracticePoint } from "./plan";
+import type { Placement } from "./placement";
+import { checkedTiedowns, kitVerdict, placementFails, type KitBlocker, type PracticePoint } from "./plan";
 import { lbQuantity, mmQuantity } from "./quantities";
 
 /**
@@ -126,11 +127,14 @@ export type KitItemJson = ReturnType<typeof kitItemJson>;
  * A kit as GET /api/v1/kits/{id} answers it: the issue's shape (`tiedowns[].itemIds`,
  * `check`), plus each tiedown's items with their verdict and its line of the check
  * (`result`, null when the tiedown is left out of the check), the blockers, the
- * common-practice points, and `pass` (the check passes and nothing blocks).
+ * common-practice points, where the machine sits and what the hitch carries (`placement`,
+ * lib/kits/placement.ts; null when the machine is not placed or the trailer lacks a figure,
+ * and `placementMissing` says which), and `pass` (the check passes, nothing blocks, and the
+ * placement has no fail: no negative tongue weight, not over the GVWR).
  *
  * @example
  * const k = kitJson(kit);
- * k.pass === (k.check.pass && k.blockers.length === 0); // true
+ * k.pass === (k.check.pass && k.blockers.length === 0 && !k.placement?.findings.some((f) => f.severity === "fail")); // true
  */
 export function kitJson(kit: Kit) {
   const verdict = kitVerdict(kit);
@@ -160,6 +164,8 @@ export function kitJson(kit: Kit) {
     check: verdict.check as SecurementCheckResult,
     blockers: verdict.blockers as KitBlocker[],
     practice: verdict.practice as PracticePoint[],
+    placement: verdict.placement as Placement | null,
+    placementMissing: verdict.placementMissing,
     pass: verdict.pass,
   };
 }
@@ -187,6 +193,7 @@ export function kitListEntry(kit: Kit) {
     itemCount: kit.tiedowns.reduce((n, t) => n + t.items.length, 0),
     failCount: verdict.check.findings.filter((f) => f.severity === "fail").length,
     blockerCount: verdict.blockers.length,
+    placementFailCount: placementFails(verdict.placement).length,
   };
 }
 export type KitListEntry = ReturnType<typeof kitListEntry>;

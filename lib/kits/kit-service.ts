@@ -21,9 +21,10 @@ import { toAnchor, toKit, toKitItem, type StoredKit, type StoredKitItem } from "
 import { addDays } from "./dates";
 import { compareScan, kitEventNote, transitionRule } from "./lifecycle";
 import { cornerPlans, suggestItems, type CornerPlan } from "./matching";
-import { MAX_KIT_TIEDOWNS, type Kit } from "./model";
-import { kitVerdict } from "./plan";
-import type { KitCreateInput, KitPatchInput, TiedownInput, TiedownPatchInput, TransitionInput } from "./schemas";
+import { MAX_KIT_TIEDOWNS, type Kit, type KitItem } from "./model";
+import { kitVerdict, placementFails } from "./plan";
+import { PROPOSAL_KINDS, proposalStock, proposeKit, type Proposal } from "./proposal";
+import type { KitCreateInput, KitPatchInput, PlacementInput, TiedownInput, TiedownPatchInput, TransitionInput } from "./schemas";
 
 // Kits: building them (draft only), their life from draft to returned, copies. Every change
 // locks the kit row first and the item rows next (in id order), then writes the change, the
@@ -267,6 +268,96 @@ export async function removeItem(actor: Principal, kitId: string, tiedownId: str
   });
 }
 
+// Where the machine sits
+
+/**
+ * Saves where the machine sits on the deck (its front, back from the deck front; null takes
+ * it away). Only in a draft: a ready kit was checked as it stood, placement included (a
+ * placement can fail the kit), so it goes back to draft to be moved, like its tiedowns.
+ */
+export async function placeKit(actor: Principal, kitId: string, input: PlacementInput): Promise<void> {
+  require(actor, "fleet.manage");
+  await db.transaction(async (trx) => {
+    const kit = await lockDraft(actor, kitId, trx);
+    const mm = input.machineFrontFromDeckFrontMm;
+    if (mm !== null) {
+      const trailer = (await fleet.getTrailer(actor.organisationId, kit.trailerId, trx))!;
+      if (mm > trailer.deckLengthMm) {
+        throw fieldError("machineFrontFromDeckFront", `The machine's front would sit behind the rear of ${trailer.name}'s deck (${trailer.deckLengthMm} mm long); give a distance from 0 to ${trailer.deckLengthMm} mm.`);
+      }
+    }
+    await kits.updateKit(actor.organisationId, kitId, { machineFrontFromDeckFrontMm: mm }, trx);
+    await audit(actor, "kit.placed", kitId, { machineFrontFromDeckFrontMm: mm }, trx, { machineFrontFromDeckFrontMm: kit.machineFrontFromDeckFrontMm });
+  });
+}
+
+// A proposed kit
+
+/** The stock a proposal of this kit chooses from, and what it may not use with why (lib/kits/proposal.ts). */
+async function stockForProposal(organisationId: string, kit: Kit, trx: Knex) {
+  const rows = await kits.stockWithHoldersOn(organisationId, kit.date, PROPOSAL_KINDS, trx);
+  return proposalStock(
+    kit.id,
+    rows.map(({ holderKitId, holderJob, ...row }) => ({ item: toKitItem(row, kit.date), holder: holderKitId ? { kitId: holderKitId, job: holderJob ?? "another job" } : null })),
+  );
+}
+
+/** A proposal as the API answers it: the tiedowns (the POST tiedowns body), its check and verdict, what is missing, notes, and the items it names. */
+function proposalAnswer(proposal: Proposal, free: readonly KitItem[]) {
+  const named = new Set(proposal.tiedowns.flatMap((t) => t.itemIds));
+  return {
+    tiedowns: proposal.tiedowns,
+    check: proposal.check,
+    pass: proposal.pass,
+    missing: proposal.missing,
+    notes: proposal.notes,
+    items: free.filter((i) => named.has(i.id)).map(kitItemJson),
+  };
+}
+export type ProposalAnswer = ReturnType<typeof proposalAnswer> & { applied: boolean };
+
+/**
+ * "Propose a kit" (lib/kits/proposal.ts) from the gear free and usable on the kit's date.
+ * Without `apply` nothing is saved. With `apply`, in one transaction: the draft is locked,
+ * the proposal worked out again from the stock as it stands, every item it names locked (in
+ * id order, once, so that it never waits in a circle with another kit's change), and the
+ * kit's tiedowns replaced through the same path as adding items by hand (usability on the
+ * kit's date, no other kit holding the item that day, the (item_id, kit_date) key as the
+ * last word): a planner adding one of those items by hand at the same moment either gets it
+ * (and the proposal is refused with 409 naming that kit) or is refused. A proposal that does
+ * not pass is not saved (409 PROPOSAL_DOES_NOT_PASS, with what is missing).
+ */
+export async function proposeForKit(actor: Principal, kitId: string, options: { apply: boolean }): Promise<ProposalAnswer> {
+  require(actor, "fleet.manage");
+  if (!options.apply) {
+    const kit = await loadKit(actor.organisationId, kitId);
+    if (!kit) throw notFound("No such kit.");
+    const { free, unavailable } = await stockForProposal(actor.organisationId, kit, db);
+    return { ...proposalAnswer(proposeKit(kit, free, unavailable), free), applied: false };
+  }
+  return guardTaken(actor, kitId, () =>
+    db.transaction(async (trx) => {
+      const row = await lockDraft(actor, kitId, trx);
+      const kit = (await modelsOf(actor.organisationId, [row], trx))[0]!;
+      const { free, unavailable } = await stockForProposal(actor.organisationId, kit, trx);
+      const proposal = proposeKit(kit, free, unavailable);
+      if (!proposal.pass) {
+        throw new AppError(409, `The proposal does not pass, so it was not saved. ${proposal.missing.join(" ")}`, [], { code: "PROPOSAL_DOES_NOT_PASS", missing: proposal.missing });
+      }
+      await kits.lockItemsForKit(actor.organisationId, proposal.tiedowns.flatMap((t) => [...t.itemIds]), trx);
+      await kits.deleteAllTiedowns(actor.organisationId, kitId, trx);
+      for (const [position, t] of proposal.tiedowns.entries()) {
+        await requireAnchor(actor, row, t.anchorPointId, trx);
+        const id = await kits.insertTiedown(actor.organisationId, kitId, { label: t.label, anchorPointId: t.anchorPointId, attachment: t.attachment, secures: t.secures, machinePoint: t.machinePoint }, position, trx);
+        await putItems(actor, row, id, [...t.itemIds], trx);
+      }
+      const before = kit.tiedowns.map((t) => ({ label: t.label, anchorPointId: t.anchorPointId, itemIds: t.items.map((i) => i.id) }));
+      await audit(actor, "kit.proposal_applied", kitId, { tiedowns: proposal.tiedowns }, trx, { tiedowns: before });
+      return { ...proposalAnswer(proposal, free), applied: true };
+    }),
+  );
+}
+
 // Quick building
 
 /** Free items for the kit's date that may be used that day, and those that fit a tiedown. */
@@ -362,10 +453,12 @@ export async function transitionKit(actor: Principal, kitId: string, input: Tran
       const verdict = kitVerdict(kit);
       if (!verdict.pass) {
         const fails = verdict.check.findings.filter((f) => f.severity === "fail").map((f) => f.message);
-        throw new AppError(409, `The kit cannot be ${input.to === "ready" ? "marked ready" : "loaded"}: ${[...verdict.blockers.map((b) => b.message), ...fails].join(" ")}`, [], {
+        const placement = placementFails(verdict.placement);
+        throw new AppError(409, `The kit cannot be ${input.to === "ready" ? "marked ready" : "loaded"}: ${[...verdict.blockers.map((b) => b.message), ...fails, ...placement.map((f) => f.message)].join(" ")}`, [], {
           code: "KIT_DOES_NOT_PASS",
           blockers: verdict.blockers,
           findings: verdict.check.findings.filter((f) => f.severity === "fail"),
+          placementFindings: placement,
         });
       }
     }

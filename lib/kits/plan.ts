@@ -15,6 +15,7 @@ import { checkSecurement, type Component, type SecurementCheckRequest, type Secu
 import { itemComponent } from "@/lib/stock/rating";
 import type { ItemKind } from "@/lib/stock/labels";
 import type { AnchorPoint, Kit, KitItem, KitTiedown } from "./model";
+import { kitPlacement, type Placement, type PlacementFinding } from "./placement";
 
 const MACHINE = "machine";
 
@@ -212,15 +213,46 @@ export function practicePoints(kit: Kit): PracticePoint[] {
 }
 
 /**
- * A kit's whole verdict: the engine's check of its plan, the gear it may not use, and the
- * common-practice points. `pass` is the engine's pass with no blocker.
+ * The placement findings that stop a kit: a negative tongue weight (the trailer would lift
+ * the hitch) and a loaded weight over the GVWR (lib/kits/placement.ts). A share outside the
+ * band is a warning only, and a kit not placed yet, or whose trailer lacks a figure, is not
+ * stopped: placing the machine is not asked by 49 CFR 393, so the kit can still pass
+ * without it (the builder says what is missing).
+ *
+ * @example
+ * placementFails(placeMachine(machine, trailer, 6000)).map((f) => f.code); // ["TONGUE_WEIGHT_NEGATIVE"]
+ */
+export function placementFails(placement: Placement | null): PlacementFinding[] {
+  return placement ? placement.findings.filter((f) => f.severity === "fail") : [];
+}
+
+/**
+ * A kit's whole verdict: the engine's check of its plan, the gear it may not use, where the
+ * machine sits and what the hitch carries (`placement`, null with `placementMissing` saying
+ * why), and the common-practice points. `pass` is the engine's pass with no blocker and no
+ * placement fail ({@link placementFails}); a kit that does not pass cannot be marked ready.
  *
  * @example
  * const v = kitVerdict(kit);
- * v.check.aggregateWllLb; v.blockers; v.practice; v.pass;
+ * v.check.aggregateWllLb; v.blockers; v.placement?.tongueWeightLb; v.practice; v.pass;
  */
-export function kitVerdict(kit: Kit): { pass: boolean; check: SecurementCheckResult; blockers: KitBlocker[]; practice: PracticePoint[] } {
+export function kitVerdict(kit: Kit): {
+  pass: boolean;
+  check: SecurementCheckResult;
+  blockers: KitBlocker[];
+  practice: PracticePoint[];
+  placement: Placement | null;
+  placementMissing: string[];
+} {
   const check = checkSecurement(kitCheckRequest(kit));
   const blockers = kitBlockers(kit);
-  return { pass: check.pass && blockers.length === 0, check, blockers, practice: practicePoints(kit) };
+  const { placement, missing } = kitPlacement(kit);
+  return {
+    pass: check.pass && blockers.length === 0 && placementFails(placement).length === 0,
+    check,
+    blockers,
+    practice: practicePoints(kit),
+    placement,
+    placementMissing: missing,
+  };
 }

@@ -54,7 +54,7 @@ import {
 } from "@/lib/securement";
 import type { UsabilityCode } from "@/lib/stock/usability";
 import type { AnchorPoint, BuiltInMachineClass, Kit, KitItem, KitTiedown, MachinePoint, Side } from "./model";
-import { kitVerdict } from "./plan";
+import { kitVerdict, placementFails } from "./plan";
 import { formatMetres } from "./placement";
 
 /**
@@ -99,6 +99,41 @@ export function strapsAllowed(machineClass: string): boolean {
 export interface UnavailableItem {
   readonly item: KitItem;
   readonly reason: { readonly code: "NOT_USABLE" } | { readonly code: "IN_OTHER_KIT"; readonly kitId: string; readonly job: string };
+}
+
+/**
+ * The kinds of gear a proposal is made of (chains, binders, web straps); only these are read
+ * from stock for it.
+ *
+ * @example
+ * PROPOSAL_KINDS.includes("binder"); // true
+ */
+export const PROPOSAL_KINDS = ["chain", "binder", "web-strap"] as const;
+
+/**
+ * Splits the stock for a proposal on `kit`'s date into what it may choose from and what it
+ * may not, with why: an item is free when its usability verdict for the date says yes and no
+ * other kit holds it that day (the items this kit holds now count as free, since a proposal
+ * replaces its tiedowns); otherwise it is unavailable, held by another kit (named) or not
+ * usable.
+ *
+ * @example
+ * const { free, unavailable } = proposalStock("k-1", [{ item: chain, holder: null }, { item: binder, holder: { kitId: "k-2", job: "Mill Road" } }]);
+ * free.length;                 // 1
+ * unavailable[0].reason.code;  // "IN_OTHER_KIT"
+ */
+export function proposalStock(
+  kitId: string,
+  stock: readonly { readonly item: KitItem; readonly holder: { readonly kitId: string; readonly job: string } | null }[],
+): { free: KitItem[]; unavailable: UnavailableItem[] } {
+  const free: KitItem[] = [];
+  const unavailable: UnavailableItem[] = [];
+  for (const { item, holder } of stock) {
+    if (holder && holder.kitId !== kitId) unavailable.push({ item, reason: { code: "IN_OTHER_KIT", kitId: holder.kitId, job: holder.job } });
+    else if (!item.usable.ok) unavailable.push({ item, reason: { code: "NOT_USABLE" } });
+    else free.push(item);
+  }
+  return { free, unavailable };
 }
 
 /**
@@ -581,6 +616,8 @@ export function proposeKit(kit: Kit, free: readonly KitItem[], unavailable: read
     // Anything else the check fails on that gear cannot fix (an articulation joint not locked, …).
     const explained = new Set(["AGGREGATE_WLL_BELOW_REQUIRED", "TOO_FEW_TIEDOWNS", "ACCESSORY_NOT_SECURED"]);
     for (const f of verdict.check.findings) if (f.severity === "fail" && (!explained.has(f.code) || gaps.length === 0)) missing.push(`${f.message} (${f.source}).`);
+    // Where the machine sits can fail the kit whatever the gear (over the GVWR, a lifting hitch).
+    for (const f of placementFails(verdict.placement)) missing.push(`${f.message} Source: ${f.source}.`);
   }
   return { tiedowns: proposed, check: verdict.check, pass: verdict.pass, missing, notes };
 }

@@ -237,7 +237,7 @@ export type KitCreateInput = z.output<typeof kitCreateSchema>;
 /**
  * Changes to a kit's words and facts (not its date, machine or trailer: a kit for another
  * date is a copy; another machine or trailer is another kit). Where the machine sits on the
- * deck is saved by the placement's own route (issue 13).
+ * deck is saved by its own route (PUT /api/v1/kits/{id}/placement, {@link placementSchema}).
  *
  * @example
  * kitPatchSchema.parse({ articulationRestrained: true });
@@ -250,6 +250,30 @@ export const kitPatchSchema = z
   })
   .refine((p) => Object.values(p).some((v) => v !== undefined), { error: "Send at least one field to change." });
 export type KitPatchInput = z.output<typeof kitPatchSchema>;
+
+/**
+ * Where the machine sits: its front, measured back from the front of the deck; null takes
+ * the placement away. The service also refuses a front behind the deck's rear.
+ *
+ * @example
+ * placementSchema.parse({ machineFrontFromDeckFront: { value: 2, unit: "ft" } }); // { machineFrontFromDeckFrontMm: 610 }
+ */
+export const placementSchema = z
+  .strictObject({
+    machineFrontFromDeckFront: lengthField("distance from the deck's front to the machine's front", 0, MAX_LENGTH_MM).nullable(),
+  })
+  .transform((p) => ({ machineFrontFromDeckFrontMm: p.machineFrontFromDeckFront }));
+export type PlacementInput = z.output<typeof placementSchema>;
+
+/**
+ * `?apply=true` saves the proposal; anything else only shows it.
+ *
+ * @example
+ * proposalQuerySchema.parse({ apply: "true" }); // { apply: true }
+ */
+export const proposalQuerySchema = z
+  .object({ apply: z.enum(["true", "false"], { error: "apply is true or false." }).optional() })
+  .transform((q) => ({ apply: q.apply === "true" }));
 
 const itemIds = z
   .array(uuid("An item id"), { error: "itemIds lists item ids." })

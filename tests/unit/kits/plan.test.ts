@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { checkSecurement } from "@/lib/securement";
-import { kitBlockers, kitCheckRequest, kitVerdict, practicePoints } from "@/lib/kits/plan";
+import { kitBlockers, kitCheckRequest, kitVerdict, placementFails, practicePoints } from "@/lib/kits/plan";
 import { anchor, binder, chain, excavator, kit, tiedown, trailer } from "./fixtures";
 
 describe("kitCheckRequest", () => {
@@ -98,5 +98,41 @@ describe("practicePoints", () => {
     const k = kit({ machine: { ...excavator, accessories: ["blade"] } });
     const points = practicePoints({ ...k, tiedowns: [...k.tiedowns, tiedown("blade", "c1", [chain(), binder()], { secures: "blade" })] });
     expect(points.filter((p) => p.met === false)).toEqual([]);
+  });
+});
+
+describe("kitVerdict: where the machine sits", () => {
+  // Hand figures for the fixture: trailer 5,000 lb empty, 600 lb on the tongue, GVWR 22,000 lb,
+  // hitch to axle 6,700 mm, hitch to deck front 1,500 mm; machine 12,000 lb, 5,791 mm long,
+  // CG not recorded (the middle, 2,895.5 mm). At 300 mm back: x = 1,500 + 300 + 2,895.5 =
+  // 4,695.5 mm; T = 600 + 12,000 × (6,700 − 4,695.5) / 6,700 = 4,190 lb (24.6 % of 17,000 lb).
+  it("carries the placement, whose warnings leave the kit passing", () => {
+    const v = kitVerdict(kit({ machineFrontFromDeckFrontMm: 300 }));
+    expect(v.placement?.tongueWeightLb).toBe(4190);
+    expect(v.placement?.findings.map((f) => [f.code, f.severity])).toContainEqual(["TONGUE_SHARE_ABOVE_BAND", "warn"]);
+    expect(placementFails(v.placement)).toEqual([]);
+    expect(v.pass).toBe(true);
+  });
+
+  it("fails the kit when the trailer would lift the hitch, or the loaded trailer is over its GVWR", () => {
+    // Axle 3,000 mm from the hitch: the CG (4,395.5 mm) sits behind it; T = 600 + 12,000 × (3,000 − 4,395.5) / 3,000 = −4,982 lb.
+    const lifting = kitVerdict(kit({ machineFrontFromDeckFrontMm: 0, trailer: { ...trailer, hitchToAxleMm: 3000 } }));
+    expect(lifting.check.pass).toBe(true);
+    expect(lifting.placement?.tongueWeightLb).toBe(-4982);
+    expect(placementFails(lifting.placement).map((f) => f.code)).toEqual(["TONGUE_WEIGHT_NEGATIVE"]);
+    expect(lifting.pass).toBe(false);
+    const heavy = kitVerdict(kit({ machineFrontFromDeckFrontMm: 300, trailer: { ...trailer, gvwrLb: 16000 } }));
+    expect(placementFails(heavy.placement).map((f) => f.code)).toEqual(["OVER_GVWR"]);
+    expect(heavy.pass).toBe(false);
+  });
+
+  it("does not stop a kit that is not placed yet, and says what is missing", () => {
+    const v = kitVerdict(kit({ machineFrontFromDeckFrontMm: null }));
+    expect(v.placement).toBeNull();
+    expect(v.placementMissing).toEqual(["The machine has not been placed on the deck yet."]);
+    expect(v.pass).toBe(true);
+    const unmeasured = kitVerdict(kit({ machineFrontFromDeckFrontMm: 300, trailer: { ...trailer, hitchToDeckFrontMm: null } }));
+    expect(unmeasured.placement).toBeNull();
+    expect(unmeasured.placementMissing).toEqual(["The distance from Deck 20's hitch point to the front of its deck has not been measured."]);
   });
 });

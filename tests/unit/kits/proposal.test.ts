@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 import type { Kit, KitItem, KitTiedown } from "@/lib/kits/model";
 import { kitVerdict } from "@/lib/kits/plan";
-import { proposeKit, strapsAllowed, type Proposal, type UnavailableItem } from "@/lib/kits/proposal";
+import { proposalStock, proposeKit, strapsAllowed, type Proposal, type UnavailableItem } from "@/lib/kits/proposal";
 import { anchor, binder, chain } from "./fixtures";
 import { passingScene, splitTilt } from "./scenes";
 
@@ -22,6 +22,15 @@ function applied(kit: Kit, p: Proposal, stock: readonly KitItem[]): Kit {
   const tiedowns: KitTiedown[] = p.tiedowns.map((t, i) => ({ id: `saved-${i}`, ...t, items: t.itemIds.map((id) => byId.get(id)!) }));
   return { ...kit, tiedowns };
 }
+/**
+ * The kit with a 12,500 lb machine, on the same trailer rated 20,000 lb: Split tilt 20's
+ * 14,000 lb GVWR would fail the placement (3,900 + 12,500 lb), which these gear tests are not about.
+ */
+const heavier = (k: Kit, over: Partial<Kit["machine"]> = {}): Kit => ({
+  ...k,
+  machine: { ...k.machine, weightLb: 12500, name: "Marten 55 excavator", ...over },
+  trailer: { ...k.trailer, gvwrLb: 20000 },
+});
 const sizesOf = (p: Proposal, stock: readonly KitItem[]) => p.tiedowns.map((t) => t.itemIds.map((id) => stock.find((i) => i.id === id)!).filter((i) => i.kind === "chain").map((i) => i.size));
 
 describe("proposeKit: a proposal that passes", () => {
@@ -96,7 +105,7 @@ describe("proposeKit: a proposal that passes", () => {
   });
 
   it("keeps to the Handbook's 5,000 lb a tiedown on a machine of 10,000 lb or more when free gear allows, and says when it cannot", () => {
-    const heavy = { ...kit, machine: { ...kit.machine, weightLb: 12500, name: "Marten 55 excavator" } };
+    const heavy = heavier(kit);
     const p = proposeKit(heavy, stock);
     expect(p.pass).toBe(true);
     // 5/16 in grade 70 is 4,700 lb, below 5,000: 3/8 in with a 5,400 lb binder is the lightest that reaches it.
@@ -140,7 +149,7 @@ describe("proposeKit: saying what is missing", () => {
     const stock = [...times(3, () => g70("3/8", 6600)), ...times(6, smallBinder)];
     const inKit = times(2, () => g70("3/8", 6600));
     const elsewhere: UnavailableItem[] = inKit.map((item) => ({ item, reason: { code: "IN_OTHER_KIT", kitId: "k-2", job: "Hollins driveway" } }));
-    const heavy = { ...kit, machine: { ...kit.machine, weightLb: 12500, name: "Marten 55 excavator" } };
+    const heavy = heavier(kit);
     const p = proposeKit(heavy, stock, elsewhere);
     // Three tiedowns on a machine of 10,000 lb or more: 49 CFR 393.130(c)(1) asks for four.
     expect(p.pass).toBe(false);
@@ -155,7 +164,7 @@ describe("proposeKit: saying what is missing", () => {
   });
 
   it("says when binders run short before chains do", () => {
-    const heavy = { ...kit, machine: { ...kit.machine, weightLb: 12500, name: "Marten 55 excavator" } };
+    const heavy = heavier(kit);
     const stock = [...times(6, () => g70("3/8", 6600)), ...times(2, smallBinder)];
     const tagged = smallBinder({ usable: taggedOut });
     const p = proposeKit(heavy, stock, [{ item: tagged, reason: { code: "NOT_USABLE" } }]);
@@ -167,7 +176,7 @@ describe("proposeKit: saying what is missing", () => {
   });
 
   it("says how far short the strongest free gear falls, and which stronger gear is not free", () => {
-    const heavy = { ...kit, machine: { ...kit.machine, weightLb: 12500, name: "Marten 55 excavator", accessories: [] } };
+    const heavy = heavier(kit, { accessories: [] });
     // 1/4 in grade 43 chain: 2,600 lb. Four count 4 × 1,300 = 5,200 lb against 6,250 lb.
     const weak = times(4, () => chain({ description: "Chain, grade 43, 1/4 in", grade: 43, size: "1/4", wllLb: 2600 }));
     const binders = times(4, () => smallBinder({ details: { mechanism: "ratchet", chainSizeRange: ["1/4", "5/16"] } }));
@@ -190,6 +199,40 @@ describe("proposeKit: saying what is missing", () => {
     expect(gap).toBe(
       "No anchor point on the left side ahead of the machine's front left tie-down point (0.85 m (2 ft 9 in) from the deck front) for the front left tiedown: L1 is out of use (Tagged out: bent D-ring.).",
     );
+  });
+});
+
+describe("proposeKit: where the machine sits", () => {
+  it("says that the loaded trailer is over its GVWR, which no gear mends, and does not pass", () => {
+    const stock = [...times(6, () => g70("3/8", 6600)), ...times(6, smallBinder)];
+    // 3,900 lb empty + 12,500 lb machine = 16,400 lb on a 14,000 lb GVWR.
+    const over = { ...passingScene(), tiedowns: [], machine: { ...passingScene().machine, weightLb: 12500 } };
+    const p = proposeKit(over, stock);
+    expect(p.check.pass).toBe(true);
+    expect(p.pass).toBe(false);
+    expect(p.missing).toEqual([
+      "The loaded trailer weighs 16,400 lb (7,438.9 kg) (empty 3,900 lb plus the machine's 12,500 lb), 2,400 lb over its GVWR of 14,000 lb (6,350.3 kg). Use a trailer rated for the load; moving the machine does not change this. Source: The trailer maker's GVWR (on its certification label; 49 CFR 567.4, from memory).",
+    ]);
+  });
+});
+
+describe("proposalStock", () => {
+  it("counts the kit's own items as free, names the kit holding another, and keeps out what may not be used", () => {
+    const mine = g70("3/8", 6600);
+    const loose = smallBinder();
+    const held = g70("3/8", 6600);
+    const out = smallBinder({ usable: taggedOut });
+    const { free, unavailable } = proposalStock("k-pass", [
+      { item: mine, holder: { kitId: "k-pass", job: "Hollins driveway" } },
+      { item: loose, holder: null },
+      { item: held, holder: { kitId: "k-2", job: "Mill Road culvert" } },
+      { item: out, holder: null },
+    ]);
+    expect(free.map((i) => i.id)).toEqual([mine.id, loose.id]);
+    expect(unavailable).toEqual([
+      { item: held, reason: { code: "IN_OTHER_KIT", kitId: "k-2", job: "Mill Road culvert" } },
+      { item: out, reason: { code: "NOT_USABLE" } },
+    ]);
   });
 });
 

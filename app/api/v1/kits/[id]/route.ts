@@ -6,7 +6,7 @@ import { kitPatchSchema } from "@/lib/kits/schemas";
 /** The kit: machine, trailer (anchor points judged for the kit's date), tiedowns, check, blockers, practice, pass. */
 export const GET = route("fleet.view", {}, async ({ principal, params }) => kitAnswer(principal.organisationId, uuidParam(params.id, "kit")));
 
-/** Job and site; in draft also whether the articulation is locked, and where the machine sits. */
+/** Job and site; in draft also whether the articulation is locked (where the machine sits: PUT …/placement). */
 export const PATCH = route("fleet.manage", { body: kitPatchSchema }, async ({ principal, params, body }) => {
   const id = uuidParam(params.id, "kit");
   await patchKit(principal, id, body);
