@@ -17,7 +17,7 @@ export function KitActions({ kitId, canEdit, canLoad }: { kitId: string; canEdit
   const move = useKitChange(kitId, (to: "ready" | "draft") => apiJson<KitJson>(`/api/v1/kits/${kitId}/transitions`, { method: "POST", body: JSON.stringify({ to }) }));
   if (!kit) return null;
   return (
-    <section aria-labelledby="next-heading" className="flex flex-col gap-3">
+    <section aria-labelledby="next-heading" className="flex flex-col gap-3 print:hidden">
       <h2 id="next-heading" className="text-2xl font-bold">Next</h2>
       {kit.state === "draft" && canEdit && (
         <>

@@ -5,6 +5,8 @@ import { SeverityIcon } from "@/components/securement/severity";
 import { writtenDate } from "@/lib/kits/dates";
 import { formatCheckWeight, type UnitSystem } from "@/lib/kits/display";
 import type { KitJson } from "@/lib/kits/answers";
+import { bandWords } from "@/lib/kits/placement";
+import { formatNumber } from "@/lib/securement";
 import { useKit } from "./use-kit";
 
 function plural(n: number, one: string, many = `${one}s`) {
@@ -15,16 +17,26 @@ function plural(n: number, one: string, many = `${one}s`) {
 function headline(kit: KitJson): string {
   if (kit.pass) return `Meets the published minimums, and every part may be used on ${writtenDate(kit.date)}.`;
   const fails = kit.check.findings.filter((f) => f.severity === "fail").length;
+  const placed = placementFailsOf(kit).length;
   const parts = [
     fails ? plural(fails, "finding does not meet the rule", "findings do not meet the rule") : "",
     kit.blockers.length ? `${plural(kit.blockers.length, "part")} may not be used on ${writtenDate(kit.date)}` : "",
+    placed ? "where the machine sits fails the hitch or the GVWR" : "",
   ].filter(Boolean);
   return `${parts.join("; ")}.`.replace(/^./, (c) => c.toUpperCase());
 }
 
-/** What stops the kit, most serious first: the rule's findings, then gear out of use that day. */
+function placementFailsOf(kit: KitJson) {
+  return kit.placement?.findings.filter((f) => f.severity === "fail") ?? [];
+}
+
+/** What stops the kit, most serious first: the rule's findings, gear out of use that day, then where the machine sits. */
 function Reasons({ kit }: { kit: KitJson }) {
-  const reasons = [...kit.check.findings.filter((f) => f.severity === "fail").map((f) => `${f.message} (${f.source})`), ...kit.blockers.map((b) => b.message)];
+  const reasons = [
+    ...kit.check.findings.filter((f) => f.severity === "fail").map((f) => `${f.message} (${f.source})`),
+    ...kit.blockers.map((b) => b.message),
+    ...placementFailsOf(kit).map((f) => f.message),
+  ];
   const shown = reasons.slice(0, 4);
   return (
     <ul className="flex flex-col gap-1 text-lg font-bold text-stop" data-testid="kit-reasons">
@@ -72,11 +84,39 @@ export function KitVerdictSummary({ kitId, units }: { kitId: string; units: Unit
           <span aria-hidden="true">{countMet ? "✓ " : "✕ "}</span>
           {plural(c.tiedownsCounted, "tiedown")} on the machine, {c.minimumTiedowns} needed ({c.ruleSource})
         </li>
+        <PlacementLine kit={kit} />
       </ul>
       <a href="#verdict-details" className="flex min-h-tap items-center text-lg font-bold underline">
         Every figure, finding and reminder
       </a>
     </section>
+  );
+}
+
+/** The hitch in one line: the tongue weight and its band, or why it is not worked out. */
+function PlacementLine({ kit }: { kit: KitJson }) {
+  const p = kit.placement;
+  if (!p) {
+    return (
+      <li data-testid="verdict-placement">
+        <span aria-hidden="true">• </span>
+        Tongue weight not worked out: {kit.placementMissing.join(" ")}{" "}
+        <a href="#placement" className="font-bold underline">
+          Where the machine sits
+        </a>
+      </li>
+    );
+  }
+  const fails = placementFailsOf(kit);
+  const share = `${formatNumber(p.tongueWeightShare * 100)} %`;
+  const band = bandWords(p.band);
+  const inBand = p.tongueWeightShare >= p.band.min && p.tongueWeightShare <= p.band.max;
+  return (
+    <li className={fails.length ? "font-bold text-stop" : inBand ? "" : "font-bold text-caution"} data-testid="verdict-placement">
+      <span aria-hidden="true">{fails.length ? "✕ " : inBand ? "✓ " : "! "}</span>
+      Tongue weight {formatNumber(p.tongueWeightLb)} lb, {share} of the loaded {formatNumber(p.trailerGrossLb)} lb (band {band}
+      {inBand ? "" : ", outside it"}); GVWR {formatNumber(p.gvwrLb)} lb{p.trailerGrossLb > p.gvwrLb ? ", over it" : ""}.
+    </li>
   );
 }
 

@@ -109,7 +109,7 @@ export function TiedownCard({
   const holds = t.secures === "machine" ? "the machine" : `the ${t.secures}`;
   const attachment = ATTACHMENT_LABELS[t.attachment];
   return (
-    <li id={`tiedown-${t.id}`} className={`flex scroll-mt-20 flex-col gap-3 rounded-xl border-2 p-3 ${t.result?.rated === false || t.items.some((i) => !i.usable.ok) || anchor?.usable.ok === false ? "border-stop" : "border-ink"}`} data-testid="tiedown-card">
+    <li id={`tiedown-${t.id}`} className={`flex scroll-mt-20 flex-col gap-3 rounded-xl border-2 p-3 target:outline target:outline-4 target:outline-offset-2 target:outline-[#1d4ed8] ${t.result?.rated === false || t.items.some((i) => !i.usable.ok) || anchor?.usable.ok === false ? "border-stop" : "border-ink"}`} data-testid="tiedown-card">
       <div className="flex flex-col">
         <h3 className="text-2xl font-bold leading-tight">
           {index + 1}. {t.label}

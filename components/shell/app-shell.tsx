@@ -21,8 +21,8 @@ export function AppShell({
 }) {
   const entries = navFor(principal);
   return (
-    <div className="min-h-dvh md:grid md:grid-cols-[15rem_1fr]">
-      <header className="sticky top-0 z-10 flex items-center justify-between gap-3 bg-deck px-4 py-2 text-white md:hidden">
+    <div className="min-h-dvh md:grid md:grid-cols-[15rem_1fr] print:block">
+      <header className="sticky top-0 z-10 flex items-center justify-between gap-3 bg-deck px-4 py-2 text-white md:hidden print:hidden">
         <Link href="/" className="flex items-center gap-2 text-xl font-bold">
           <Logo className="h-8 w-8" />
           Linkyard
@@ -37,7 +37,7 @@ export function AppShell({
         </div>
       </header>
 
-      <aside className="hidden bg-deck p-4 text-white md:flex md:flex-col md:gap-6">
+      <aside className="hidden bg-deck p-4 text-white md:flex md:flex-col md:gap-6 print:hidden">
         <Link href="/" className="flex items-center gap-2 text-2xl font-bold">
           <Logo />
           Linkyard
@@ -60,7 +60,7 @@ export function AppShell({
         <QueryProvider>{children}</QueryProvider>
       </main>
 
-      <nav aria-label="Main" className="fixed inset-x-0 bottom-0 z-10 bg-deck md:hidden">
+      <nav aria-label="Main" className="fixed inset-x-0 bottom-0 z-10 bg-deck md:hidden print:hidden">
         <NavLinks entries={barFor(principal)} variant="bar" />
       </nav>
     </div>

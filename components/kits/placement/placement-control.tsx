@@ -36,9 +36,11 @@ function tongueWords(p: Placement): { words: string; mark: string; tone: string 
  * measured back from the deck front, and at once the tongue weight, its share of the loaded
  * trailer's weight against the band (with its source and the in-band positions marked on the
  * slider), the axle-group load, and the loaded weight against the GVWR, with the findings and
- * the caution. `onChange(mm)` is called once the position settles (SETTLE_MS after the last
- * move), with whole millimetres; the kit page saves it with
- * `PUT /api/v1/kits/{id}/placement`.
+ * the caution. `onChange(mm)` is called once the position the planner chose settles
+ * (SETTLE_MS after the last move), with whole millimetres, never for the position it was
+ * opened with; the kit page saves it with `PUT /api/v1/kits/{id}/placement`. A machine not
+ * placed yet (`initialMm` null) is shown at the deck front, said so, with a button that
+ * places it there. `disabled` shows the figures without letting the machine be moved.
  */
 export function PlacementControl({
   machine,
@@ -47,6 +49,8 @@ export function PlacementControl({
   onChange,
   system = "imperial",
   level = 2,
+  disabled = false,
+  disabledWhy,
 }: {
   machine: Machine;
   trailer: Trailer;
@@ -54,6 +58,9 @@ export function PlacementControl({
   onChange?: (mm: number) => void;
   system?: "imperial" | "metric";
   level?: 2 | 3;
+  disabled?: boolean;
+  /** Said under the heading when `disabled`: why the machine cannot be moved here. */
+  disabledWhy?: string;
 }) {
   const id = useId();
   const H = level === 2 ? "h2" : "h3";
@@ -62,16 +69,20 @@ export function PlacementControl({
   const [unit, setUnit] = useState<DistanceUnit>(system === "metric" ? "m" : "ft");
   const [text, setText] = useState(() => asText(initialMm ?? 0, system === "metric" ? "m" : "ft"));
   const [error, setError] = useState<string | null>(null);
+  const [placed, setPlaced] = useState(initialMm !== null);
   const reported = useRef(initialMm);
+  const touched = useRef(false);
   const report = useRef(onChange);
   useEffect(() => {
     report.current = onChange;
   }, [onChange]);
 
   useEffect(() => {
-    if (mm === reported.current) return;
+    // Only a position the planner chose is reported: opening the control saves nothing.
+    if (!touched.current || mm === reported.current) return;
     const timer = setTimeout(() => {
       reported.current = mm;
+      setPlaced(true);
       report.current?.(mm);
     }, SETTLE_MS);
     return () => clearTimeout(timer);
@@ -100,6 +111,7 @@ export function PlacementControl({
   const over = p.trailerGrossLb - p.gvwrLb;
 
   const move = (next: number) => {
+    touched.current = true;
     setMm(next);
     setText(asText(next, unit));
     setError(null);
@@ -112,7 +124,17 @@ export function PlacementControl({
       return;
     }
     setError(null);
+    touched.current = true;
     setMm(Math.round(n * MM_PER[unit]));
+  };
+  const placeAtFront = () => {
+    touched.current = true;
+    reported.current = limits.fromMm;
+    setMm(limits.fromMm);
+    setText(asText(limits.fromMm, unit));
+    setError(null);
+    setPlaced(true);
+    report.current?.(limits.fromMm);
   };
 
   return (
@@ -120,6 +142,22 @@ export function PlacementControl({
       <H id={`${id}-h`} className="text-xl font-bold">
         Where the machine sits
       </H>
+      {disabled && disabledWhy && <p className="text-lg">{disabledWhy}</p>}
+      {!placed && (
+        <div className="flex flex-col gap-2 rounded-lg border-2 border-caution bg-caution-bg p-3" data-testid="not-placed">
+          <p className="text-lg font-bold text-caution">
+            <span aria-hidden="true">! </span>Not placed yet: the figures below are for {machine.name}&apos;s front at the deck front.
+          </p>
+          {onChange && !disabled && (
+            <>
+              <p className="text-base">Slide or type where it will sit, or place it at the deck front.</p>
+              <button type="button" onClick={placeAtFront} className="inline-flex min-h-tap items-center justify-center self-start rounded-lg border-2 border-ink bg-white px-5 text-lg font-bold text-ink hover:bg-idle-bg">
+                Place it at the deck front
+              </button>
+            </>
+          )}
+        </div>
+      )}
 
       <div className="flex flex-col gap-1">
         <label htmlFor={`${id}-slider`} className="text-base font-bold">
@@ -132,7 +170,7 @@ export function PlacementControl({
           max={limits.toMm}
           step={10}
           value={Math.min(Math.max(mm, limits.fromMm), limits.toMm)}
-          disabled={limits.toMm === limits.fromMm}
+          disabled={disabled || limits.toMm === limits.fromMm}
           onChange={(e) => move(Number(e.target.value))}
           aria-valuetext={`${formatMetres(mm)}; tongue weight ${percent(p.tongueWeightShare)} of the loaded weight, ${tongue.words.toLowerCase()}`}
           aria-describedby={`${id}-band`}
@@ -172,11 +210,12 @@ export function PlacementControl({
             id={`${id}-typed`}
             value={text}
             onChange={(e) => typed(e.target.value)}
+            disabled={disabled}
             inputMode="decimal"
             autoComplete="off"
             aria-invalid={error ? true : undefined}
             aria-describedby={error ? `${id}-typed-error` : undefined}
-            className={`min-h-tap w-full min-w-0 rounded-lg border-2 bg-white px-3 text-xl font-bold ${error ? "border-stop" : "border-ink-soft"}`}
+            className={`min-h-tap w-full min-w-0 rounded-lg border-2 bg-white px-3 text-xl font-bold disabled:bg-idle-bg ${error ? "border-stop" : "border-ink-soft"}`}
           />
           <div role="radiogroup" aria-label="Distance unit" className="flex shrink-0 overflow-hidden rounded-lg border-2 border-ink">
             {(["m", "ft", "in"] as const).map((u) => (
