@@ -4,8 +4,8 @@ import { getFleetSettings } from "@/db/fleet";
 import type { Permission } from "@/lib/auth/roles";
 import { requirePage } from "@/lib/auth/session";
 import { isUuid } from "@/lib/http/ids";
+import { organisationClock } from "@/lib/organisations/service";
 import { kitJson } from "./answers";
-import { dayIn } from "./dates";
 import { loadKit } from "./kit-service";
 
 /**
@@ -19,6 +19,6 @@ export async function requireKitPage(permission: Permission, params: Promise<{ i
   if (!isUuid(id)) notFound();
   const kit = await loadKit(principal.organisationId, id);
   if (!kit) notFound();
-  const settings = await getFleetSettings(principal.organisationId);
-  return { principal, kit: kitJson(kit), units: settings.units, today: dayIn(settings.timeZone) };
+  const [{ units }, { timeZone, today }] = await Promise.all([getFleetSettings(principal.organisationId), organisationClock(principal.organisationId)]);
+  return { principal, kit: kitJson(kit), units, timeZone, today };
 }
