@@ -205,6 +205,12 @@ ensure_chromium() {
   ensure_apt_package /usr/bin/chromium chromium
 }
 
+# The browser tests print pages to PDF through Chromium and turn the PDF's pages into PNG
+# images (pdftoppm) to be looked at and read back (the load sheet's QR code).
+ensure_pdf_tools() {
+  ensure_apt_package /usr/bin/pdftoppm poppler-utils
+}
+
 # Rebuild only when a source file is newer than the last build.
 build_if_stale() {
   if [ ! -f "$ROOT/.next/BUILD_ID" ] || [ -n "$(cd "$ROOT" && find app components lib db public proxy.ts tailwind.config.ts next.config.mjs postcss.config.mjs tsconfig.json package-lock.json -newer .next/BUILD_ID -type f -print -quit)" ]; then

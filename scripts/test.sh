@@ -11,6 +11,7 @@ say "linting (npm run lint)"
 (cd "$ROOT" && npm run --silent lint) || { say "the linter found problems (above); nothing was tested"; exit 1; }
 
 ensure_chromium
+ensure_pdf_tools
 start_postgres
 ensure_database linkyard_test
 start_mail

@@ -2,6 +2,7 @@
 import { useState } from "react";
 import { buttonClass } from "@/components/ui/button";
 import type { KitJson } from "@/lib/kits/answers";
+import { writtenDate } from "@/lib/kits/dates";
 import { formatCheckWeight, formatWeight, type UnitSystem } from "@/lib/kits/display";
 import type { ProposalAnswer as ProposalAnswerJson } from "@/lib/kits/kit-service";
 import { strapsAllowed } from "@/lib/kits/proposal";
@@ -58,7 +59,7 @@ export function ProposalPanel({ kitId, units }: { kitId: string; units: UnitSyst
         Propose a kit
       </h2>
       <p className="text-lg">
-        Linkyard picks anchor points and the fewest, lightest chains, binders{strapsAllowed(kit.machine.class) ? " and web straps" : ""} free and usable on {kit.date} that pass the check. Nothing is saved until you use it.
+        Linkyard picks anchor points and the fewest, lightest {strapsAllowed(kit.machine.class) ? "chains, binders and web straps" : "chains and binders"} free and usable on {writtenDate(kit.date)} that pass the check. Nothing is saved until you use it.
       </p>
       <button type="button" onClick={() => void ask()} disabled={asking || apply.isPending} className={buttonClass(proposal ? "secondary" : "primary", "w-full")}>
         {asking ? "Working it out…" : proposal ? "Propose again" : "Propose a kit"}

@@ -25,6 +25,9 @@
  * - **Which gear**: a tiedown is a chain with a binder whose chain-size range takes it
  *   (common practice: a binder is used only on chain inside its range; reference §8), or one
  *   web strap (its own ratchet) where the machine's class allows straps ({@link WEB_STRAP_CLASSES}).
+ *   A chain with no grade mark (rated as grade 30, 49 CFR 393.108(d)) is never proposed:
+ *   it would be picked as "the lightest that passes" over marked chain of the same size
+ *   (common practice: pick gear by the rating marked on it); the notes name it.
  *   Hooks, shackles and wire rope are not proposed: the chain's own hooks make the ends.
  * - **Order of preference**: fewest items first, then the lightest gear (a chain's weight
  *   goes with the square of its size; a strap weighs a fraction of any chain), then the
@@ -307,6 +310,13 @@ function binderRange(item: KitItem): [number, number] | null {
 }
 
 const rated = (i: KitItem) => i.usable.ok && i.wllLb !== null && i.wllLb > 0;
+/**
+ * A chain with no legible grade mark is rated as grade 30 (49 CFR 393.108(d)) and may still
+ * be added by hand; a proposal leaves it out (common practice: gear for a machine is picked
+ * by the rating marked on it), and says so in its notes.
+ */
+const unmarkedChain = (i: KitItem) => i.kind === "chain" && !i.gradeMarked;
+const proposable = (i: KitItem) => rated(i) && !unmarkedChain(i);
 const byTag = (a: KitItem, b: KitItem) => a.tagCode.localeCompare(b.tagCode) || a.id.localeCompare(b.id);
 const sizeWords = (inches: number) => `${tryParseSize(inches)?.label ?? formatNumber(inches)} in`;
 
@@ -317,7 +327,7 @@ function gearGroups(free: readonly KitItem[], straps: boolean): Group[] {
     p.items.push(item);
     pools.set(key, p);
   };
-  for (const item of free.filter(rated)) {
+  for (const item of free.filter(proposable)) {
     if (item.kind === "chain") {
       const inches = tradeInches(item.size);
       if (inches !== null) pool(`chain|${inches}|${item.wllLb}`, item);
@@ -485,7 +495,7 @@ function missingGear(kit: Kit, free: readonly KitItem[], unavailable: readonly U
   // Said per kind of gear, so that the planner knows what to free up or fetch.
   const out: string[] = [];
   const date = kit.date;
-  const chains = free.filter((i) => i.kind === "chain" && rated(i));
+  const chains = free.filter((i) => i.kind === "chain" && proposable(i));
   const binders = free.filter((i) => i.kind === "binder" && rated(i));
   const unavailableChains = unavailable.filter((u) => u.item.kind === "chain");
   out.push(`Gear for ${plural(wanted, "tiedown")} is needed; free gear on ${date} makes up ${made === 0 ? "none" : count(made)}.`);
@@ -590,6 +600,12 @@ export function proposeKit(kit: Kit, free: readonly KitItem[], unavailable: read
   // A direct tiedown counts half its WLL, so n on the machine need W / n each to reach W / 2 between them.
   const targetLb = Math.max(heavy ? HANDBOOK_MIN_TIEDOWN_WLL_LB : 0, Math.ceil(machine.weightLb / machineSlots));
   const slots = slotsFor(kit, targetLb, notes);
+  const unmarked = free.filter((i) => rated(i) && unmarkedChain(i));
+  if (unmarked.length) {
+    notes.push(
+      `Left out: ${plural(unmarked.length, "free chain")} with no grade mark (${unmarked.map((i) => i.tagCode).join(", ")}), rated as grade 30 (49 CFR 393.108(d)); a proposal picks gear by the rating marked on it (common practice). Add ${unmarked.length === 1 ? "it" : "them"} by hand if you mean to.`,
+    );
+  }
   const anchored = slots.filter((s) => s.anchor !== null);
   const groups = gearGroups(free, straps);
 

@@ -92,6 +92,8 @@ const API: Record<string, Access> = {
   "GET /api/v1/kits/[id]/free-items": ALL,
   "POST /api/v1/kits/[id]/transitions": ALL, // yard hands load and return ("kits.load"); the service checks ready/draft
   "POST /api/v1/kits/[id]/copies": EDITORS,
+  "PUT /api/v1/kits/[id]/placement": EDITORS,
+  "POST /api/v1/kits/[id]/proposal": EDITORS, // with or without ?apply=true
 };
 
 const PAGES: Record<string, Access> = {

@@ -85,9 +85,25 @@ function LineSample({ state }: { state: TiedownLine["state"] }) {
  * The kit on its trailer, top down and to scale, with the words that say what it shows.
  * Tiedowns link to `#tiedown-<id>` and anchor points to `#anchor-<id>`: the page that shows
  * the picture gives those ids to its cards. `idPrefix` keeps ids apart when a page shows
- * two pictures.
+ * two pictures. `words={false}` leaves out the tiedowns and anchor points in words (for a
+ * page that lists them itself, the load sheet), and `children` go beside the picture, under
+ * its caption.
  */
-export function KitDeck({ picture, idPrefix = "deck", heading = "On the deck", level = 2 }: { picture: DeckPicture; idPrefix?: string; heading?: string; level?: 2 | 3 }) {
+export function KitDeck({
+  picture,
+  idPrefix = "deck",
+  heading = "On the deck",
+  level = 2,
+  words = true,
+  children,
+}: {
+  picture: DeckPicture;
+  idPrefix?: string;
+  heading?: string;
+  level?: 2 | 3;
+  words?: boolean;
+  children?: React.ReactNode;
+}) {
   const H = level === 2 ? "h2" : "h3";
   const Sub = level === 2 ? "h3" : "h4";
   const { viewBox: vb, textMm: f, lineMm: lh, deck } = picture;
@@ -161,75 +177,82 @@ export function KitDeck({ picture, idPrefix = "deck", heading = "On the deck", l
           ))}
         </svg>
 
-        <figcaption className="flex flex-col gap-3 text-base">
-          <p>{picture.description}</p>
-          <ul className="flex flex-col gap-1" aria-label="How to read the drawing">
-            {(["counts", "limited", "not-rated", "blocked"] as const)
-              .filter((s) => used.has(s))
-              .map((s) => (
-                <li key={s} className="flex items-center gap-2">
-                  <LineSample state={s} />
-                  <span>
-                    <strong>{TIEDOWN_STATE_WORDS[s]}</strong> ({TIEDOWN_STYLES[s].sample}){": "}
-                    {s === "counts" && "the tiedown counts toward the aggregate WLL, set by its chain or strap."}
-                    {s === "limited" && "it counts, but a weaker part (a binder, a fitting or the anchor point) sets its WLL."}
-                    {s === "not-rated" && "a part cannot be rated, so it counts 0."}
-                    {s === "blocked" && "it uses gear or an anchor point the kit may not use on its date."}
-                  </span>
-                </li>
-              ))}
-            <li>Squares at the deck edge are anchor points: filled when in use, white when free, grey and crossed out in red when out of use.</li>
-            {deck.fixed && deck.tilt && (
-              <li>
-                Plain: the fixed deck ({formatMetres(deck.fixedLengthMm)}); hatched: the tilting deck ({formatMetres(deck.tiltLengthMm)}).
-              </li>
-            )}
-            {picture.axle && <li>The dash-dot line across the deck is the axle centre.</li>}
-            <li>The yellow block is the machine, its front marked ▲; black squares on it are its tie-down points.</li>
-          </ul>
-          {picture.notes.length > 0 && (
-            <ul className="flex flex-col gap-1" aria-label="Assumptions in the drawing">
-              {picture.notes.map((n) => (
-                <li key={n} className="font-bold text-caution">
-                  <span aria-hidden="true">! </span>
-                  {n}
-                </li>
-              ))}
-            </ul>
-          )}
-          <section aria-labelledby={`${idPrefix}-words`} className="flex flex-col gap-1">
-            <Sub id={`${idPrefix}-words`} className="text-lg font-bold">
-              Tiedowns in words
-            </Sub>
-            {picture.tiedowns.length === 0 ? (
-              <p>No tiedowns yet.</p>
-            ) : (
-              <ol className="flex flex-col gap-2">
-                {picture.tiedowns.map((t) => (
-                  <li key={t.id} data-state={t.state}>
-                    <a href={`#tiedown-${t.id}`} className="flex min-h-tap items-center font-bold underline">
-                      {t.name}
-                    </a>
-                    <p>{t.detail}</p>
+        <div className="flex min-w-0 flex-col gap-3">
+          <figcaption className="flex flex-col gap-3 text-base">
+            <p>{picture.description}</p>
+            <ul className="flex flex-col gap-1" aria-label="How to read the drawing">
+              {(["counts", "limited", "not-rated", "blocked"] as const)
+                .filter((s) => used.has(s))
+                .map((s) => (
+                  <li key={s} className="flex items-center gap-2">
+                    <LineSample state={s} />
+                    <span>
+                      <strong>{TIEDOWN_STATE_WORDS[s]}</strong> ({TIEDOWN_STYLES[s].sample}){": "}
+                      {s === "counts" && "the tiedown counts toward the aggregate WLL, set by its chain or strap."}
+                      {s === "limited" && "it counts, but a weaker part (a binder, a fitting or the anchor point) sets its WLL."}
+                      {s === "not-rated" && "a part cannot be rated, so it counts 0."}
+                      {s === "blocked" && "it uses gear or an anchor point the kit may not use on its date."}
+                    </span>
                   </li>
                 ))}
-              </ol>
-            )}
-          </section>
-          <details className="print:hidden">
-            <summary className="flex min-h-tap cursor-pointer items-center text-lg font-bold underline">Anchor points in words ({picture.anchors.length})</summary>
-            <ul className="flex flex-col gap-1">
-              {picture.anchors.map((a) => (
-                <li key={a.id} data-state={a.state}>
-                  <a href={`#anchor-${a.id}`} className="flex min-h-tap items-center font-bold underline">
-                    {a.name}
-                  </a>
-                  <p>{a.detail}</p>
+              <li>Squares at the deck edge are anchor points: filled when in use, white when free, grey and crossed out in red when out of use.</li>
+              {deck.fixed && deck.tilt && (
+                <li>
+                  Plain: the fixed deck ({formatMetres(deck.fixedLengthMm)}); hatched: the tilting deck ({formatMetres(deck.tiltLengthMm)}).
                 </li>
-              ))}
+              )}
+              {picture.axle && <li>The dash-dot line across the deck is the axle centre.</li>}
+              <li>The yellow block is the machine, its front marked ▲; black squares on it are its tie-down points.</li>
             </ul>
-          </details>
-        </figcaption>
+            {picture.notes.length > 0 && (
+              <ul className="flex flex-col gap-1" aria-label="Assumptions in the drawing">
+                {picture.notes.map((n) => (
+                  <li key={n} className="font-bold text-caution">
+                    <span aria-hidden="true">! </span>
+                    {n}
+                  </li>
+                ))}
+              </ul>
+            )}
+            {words && (
+              <>
+                <section aria-labelledby={`${idPrefix}-words`} className="flex flex-col gap-1">
+                  <Sub id={`${idPrefix}-words`} className="text-lg font-bold">
+                    Tiedowns in words
+                  </Sub>
+                  {picture.tiedowns.length === 0 ? (
+                    <p>No tiedowns yet.</p>
+                  ) : (
+                    <ol className="flex flex-col gap-2">
+                      {picture.tiedowns.map((t) => (
+                        <li key={t.id} data-state={t.state}>
+                          <a href={`#tiedown-${t.id}`} className="flex min-h-tap items-center font-bold underline">
+                            {t.name}
+                          </a>
+                          <p>{t.detail}</p>
+                        </li>
+                      ))}
+                    </ol>
+                  )}
+                </section>
+                <details className="print:hidden">
+                  <summary className="flex min-h-tap cursor-pointer items-center text-lg font-bold underline">Anchor points in words ({picture.anchors.length})</summary>
+                  <ul className="flex flex-col gap-1">
+                    {picture.anchors.map((a) => (
+                      <li key={a.id} data-state={a.state}>
+                        <a href={`#anchor-${a.id}`} className="flex min-h-tap items-center font-bold underline">
+                          {a.name}
+                        </a>
+                        <p>{a.detail}</p>
+                      </li>
+                    ))}
+                  </ul>
+                </details>
+              </>
+            )}
+          </figcaption>
+          {children}
+        </div>
       </div>
     </figure>
   );

@@ -88,27 +88,18 @@ export function PlacementControl({
     return () => clearTimeout(timer);
   }, [mm]);
 
-  if (trailer.hitchToDeckFrontMm === null || !(trailer.hitchToAxleMm > 0)) {
-    return (
-      <section aria-labelledby={`${id}-h`} className="flex flex-col gap-2">
-        <H id={`${id}-h`} className="text-xl font-bold">
-          Where the machine sits
-        </H>
-        <p className="text-lg">
-          {trailer.hitchToDeckFrontMm === null
-            ? `Measure ${trailer.name}'s distance from the hitch point to the front of its deck, and enter it on the trailer, to work out the tongue weight.`
-            : `Enter ${trailer.name}'s distance from the hitch point to its axle centre to work out the tongue weight.`}
-        </p>
-      </section>
-    );
-  }
-
-  const p = placeMachine(machine, trailer, mm);
-  const range = inBandRange(machine, trailer);
+  // Without the trailer's hitch geometry the machine can still be placed (the deck picture
+  // and a proposed kit use where it sits); only the figures wait for the measurements.
+  const unmeasured =
+    trailer.hitchToDeckFrontMm === null
+      ? `Measure ${trailer.name}'s distance from the hitch point to the front of its deck, and enter it on the trailer, to work out the tongue weight.`
+      : !(trailer.hitchToAxleMm > 0)
+        ? `Enter ${trailer.name}'s distance from the hitch point to its axle centre to work out the tongue weight.`
+        : null;
+  const p = unmeasured ? null : placeMachine(machine, trailer, mm);
+  const range = unmeasured ? null : inBandRange(machine, trailer);
   const span = Math.max(1, limits.toMm - limits.fromMm);
   const at = (x: number) => `calc(1.5rem + ${Math.min(1, Math.max(0, (x - limits.fromMm) / span))} * (100% - 3rem))`;
-  const tongue = tongueWords(p);
-  const over = p.trailerGrossLb - p.gvwrLb;
 
   const move = (next: number) => {
     touched.current = true;
@@ -146,7 +137,7 @@ export function PlacementControl({
       {!placed && (
         <div className="flex flex-col gap-2 rounded-lg border-2 border-caution bg-caution-bg p-3" data-testid="not-placed">
           <p className="text-lg font-bold text-caution">
-            <span aria-hidden="true">! </span>Not placed yet: the figures below are for {machine.name}&apos;s front at the deck front.
+            <span aria-hidden="true">! </span>Not placed yet: {p ? <>the figures below are for {machine.name}&apos;s front at the deck front.</> : <>drawn with its front at the deck front.</>}
           </p>
           {onChange && !disabled && (
             <>
@@ -172,8 +163,8 @@ export function PlacementControl({
           value={Math.min(Math.max(mm, limits.fromMm), limits.toMm)}
           disabled={disabled || limits.toMm === limits.fromMm}
           onChange={(e) => move(Number(e.target.value))}
-          aria-valuetext={`${formatMetres(mm)}; tongue weight ${percent(p.tongueWeightShare)} of the loaded weight, ${tongue.words.toLowerCase()}`}
-          aria-describedby={`${id}-band`}
+          aria-valuetext={p ? `${formatMetres(mm)}; tongue weight ${percent(p.tongueWeightShare)} of the loaded weight, ${tongueWords(p).words.toLowerCase()}` : formatMetres(mm)}
+          aria-describedby={p ? `${id}-band` : undefined}
           className="h-12 w-full cursor-pointer appearance-none bg-transparent disabled:cursor-not-allowed [&::-moz-range-thumb]:h-12 [&::-moz-range-thumb]:w-12 [&::-moz-range-thumb]:rounded-full [&::-moz-range-thumb]:border-4 [&::-moz-range-thumb]:border-white [&::-moz-range-thumb]:bg-ink [&::-moz-range-track]:h-3 [&::-moz-range-track]:rounded-full [&::-moz-range-track]:bg-idle-bg [&::-webkit-slider-runnable-track]:h-3 [&::-webkit-slider-runnable-track]:rounded-full [&::-webkit-slider-runnable-track]:bg-idle-bg [&::-webkit-slider-thumb]:-mt-[18px] [&::-webkit-slider-thumb]:h-12 [&::-webkit-slider-thumb]:w-12 [&::-webkit-slider-thumb]:appearance-none [&::-webkit-slider-thumb]:rounded-full [&::-webkit-slider-thumb]:border-4 [&::-webkit-slider-thumb]:border-white [&::-webkit-slider-thumb]:bg-ink [&::-webkit-slider-thumb]:shadow"
         />
         <div className="relative h-5" aria-hidden="true">
@@ -190,6 +181,7 @@ export function PlacementControl({
           <span>Deck front</span>
           <span>Rear at the deck end</span>
         </div>
+        {p && (
         <p id={`${id}-band`} className="text-base">
           {range ? (
             <>
@@ -199,6 +191,7 @@ export function PlacementControl({
             <span className="font-bold text-caution">No position on this deck keeps the tongue weight in the band.</span>
           )}
         </p>
+        )}
       </div>
 
       <div className="flex flex-col gap-1">
@@ -243,10 +236,21 @@ export function PlacementControl({
         )}
       </div>
 
+      {p ? <Figures p={p} /> : <p className="text-lg" data-testid="placement-unmeasured">{unmeasured}</p>}
+    </section>
+  );
+}
+
+/** The figures of a placement, its findings and the caution. */
+function Figures({ p }: { p: Placement }) {
+  const tongue = tongueWords(p);
+  const over = p.trailerGrossLb - p.gvwrLb;
+  return (
+    <>
       <dl className="grid grid-cols-1 gap-3 sm:grid-cols-2" aria-live="polite">
         <div className="rounded-lg border-2 border-ink-soft p-3">
           <dt className="text-base font-bold">Tongue weight (on the hitch)</dt>
-          <dd className="text-2xl font-bold">{formatNumber(p.tongueWeightLb)} lb</dd>
+          <dd className="text-2xl font-bold" data-testid="tongue-weight">{formatNumber(p.tongueWeightLb)} lb</dd>
           <dd className="text-base">
             {kg(p.tongueWeightLb)} · {percent(p.tongueWeightShare)} of the loaded weight
           </dd>
@@ -306,6 +310,6 @@ export function PlacementControl({
         <p className="mb-1 font-bold text-caution">An estimate</p>
         <p>{p.caution}</p>
       </aside>
-    </section>
+    </>
   );
 }

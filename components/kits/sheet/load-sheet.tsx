@@ -26,6 +26,24 @@ function Fact({ label, children }: { label: string; children: React.ReactNode })
   );
 }
 
+/** Findings with their severity in words and their source, most serious first. */
+function FindingLines({ findings, label }: { findings: readonly { severity: "fail" | "warn" | "info"; message: string; source: string }[]; label: string }) {
+  if (!findings.length) return null;
+  return (
+    <ul className="flex flex-col gap-1 text-sm" aria-label={label}>
+      {findings.map((f, i) => (
+        <li key={i} className={`sheet-finding border-l-4 pl-2 ${f.severity === "fail" ? "border-stop" : f.severity === "warn" ? "border-caution" : "border-idle"}`} data-severity={f.severity}>
+          <strong>
+            <span aria-hidden="true">{MARK[f.severity]} </span>
+            {SEVERITY_WORDS[f.severity]}:
+          </strong>{" "}
+          {f.message} <span className="text-ink-soft">({f.source})</span>
+        </li>
+      ))}
+    </ul>
+  );
+}
+
 function SignLine({ label }: { label: string }) {
   return (
     <div className="flex flex-col gap-1">
@@ -84,41 +102,55 @@ export function LoadSheet({ kit, units, kitUrl, qr, printedAt }: { kit: KitJson;
         </Fact>
       </dl>
 
-      <section aria-labelledby="sheet-verdict" className="sheet-block flex flex-col gap-2">
-        <h2 id="sheet-verdict" className="text-xl font-bold">
-          The check (49 CFR 393)
-        </h2>
-        <ul className="grid grid-cols-1 gap-1 text-base sm:grid-cols-2 print:grid-cols-2">
-          <li>
-            <span aria-hidden="true">{c.aggregateWllLb >= c.requiredAggregateWllLb ? "✓ " : "✕ "}</span>
-            Aggregate WLL <strong>{formatCheckWeight(c.aggregateWllLb, c.aggregateWllKg, units)}</strong> of {formatCheckWeight(c.requiredAggregateWllLb, c.requiredAggregateWllKg, units)} needed (49 CFR 393.106(d))
-          </li>
-          <li>
-            <span aria-hidden="true">{c.tiedownsCounted >= c.minimumTiedowns ? "✓ " : "✕ "}</span>
-            <strong>{c.tiedownsCounted}</strong> tiedowns on the machine, {c.minimumTiedowns} needed ({c.ruleSource})
-          </li>
-        </ul>
-        {(findings.length > 0 || kit.blockers.length > 0) && (
-          <ul className="flex flex-col gap-1 text-sm" aria-label="Findings">
-            {kit.blockers.map((b, i) => (
-              <li key={`b${i}`} className="sheet-finding border-l-4 border-stop pl-2" data-severity="fail">
-                <strong>✕ May not be used:</strong> {b.message}
-              </li>
-            ))}
-            {findings.map((f, i) => (
-              <li key={i} className={`sheet-finding border-l-4 pl-2 ${f.severity === "fail" ? "border-stop" : f.severity === "warn" ? "border-caution" : "border-idle"}`} data-severity={f.severity}>
-                <strong>
-                  <span aria-hidden="true">{MARK[f.severity]} </span>
-                  {SEVERITY_WORDS[f.severity]}:
-                </strong>{" "}
-                {f.message} <span className="text-ink-soft">({f.source})</span>
-              </li>
-            ))}
+      <KitDeck picture={deckPicture(kitFromJson(kit), kit)} idPrefix="sheet-deck" heading="On the deck" words={false}>
+        <section aria-labelledby="sheet-verdict" className="sheet-block flex flex-col gap-2">
+          <h3 id="sheet-verdict" className="text-lg font-bold">
+            The check (49 CFR 393)
+          </h3>
+          <ul className="flex flex-col gap-1 text-base">
+            <li>
+              <span aria-hidden="true">{c.aggregateWllLb >= c.requiredAggregateWllLb ? "✓ " : "✕ "}</span>
+              Aggregate WLL <strong>{formatCheckWeight(c.aggregateWllLb, c.aggregateWllKg, units)}</strong> of {formatCheckWeight(c.requiredAggregateWllLb, c.requiredAggregateWllKg, units)} needed (49 CFR 393.106(d))
+            </li>
+            <li>
+              <span aria-hidden="true">{c.tiedownsCounted >= c.minimumTiedowns ? "✓ " : "✕ "}</span>
+              <strong>{c.tiedownsCounted}</strong> tiedowns on the machine, {c.minimumTiedowns} needed ({c.ruleSource})
+            </li>
+            <li>
+              <span aria-hidden="true">{kit.blockers.length ? "✕ " : "✓ "}</span>
+              {kit.blockers.length ? `${kit.blockers.length} part${kit.blockers.length === 1 ? "" : "s"} may not be used on this date (listed below)` : "Every item and anchor point may be used on this date"}
+            </li>
           </ul>
-        )}
-      </section>
+        </section>
+        <section aria-labelledby="sheet-placement" className="sheet-block flex flex-col gap-2">
+          <h3 id="sheet-placement" className="text-lg font-bold">
+            Where the machine sits, and the hitch
+          </h3>
+          {p ? (
+            <>
+              <dl className="grid grid-cols-2 gap-x-4 gap-y-1 text-base">
+                <Fact label="Machine's front">{formatMetres(p.machineFrontFromDeckFrontMm)} back from the deck front</Fact>
+                <Fact label="Tongue weight">
+                  <strong>{formatNumber(p.tongueWeightLb)} lb</strong>, {formatNumber(p.tongueWeightShare * 100)} % of the loaded weight
+                </Fact>
+                <Fact label="Band for this hitch">
+                  {bandWords(p.band)} ({formatNumber(p.band.minLb)}–{formatNumber(p.band.maxLb)} lb)
+                </Fact>
+                <Fact label="Axle-group load">{formatNumber(p.axleLoadLb)} lb</Fact>
+                <Fact label="Loaded trailer">
+                  <strong>{formatNumber(p.trailerGrossLb)} lb</strong> of {formatNumber(p.gvwrLb)} lb GVWR
+                </Fact>
+              </dl>
+              <p className="text-sm">Band: {p.band.source}.</p>
+              <FindingLines findings={p.findings} label="Placement findings" />
+            </>
+          ) : (
+            <p className="text-base">Not worked out: {kit.placementMissing.join(" ")}</p>
+          )}
+        </section>
+      </KitDeck>
 
-      <section aria-labelledby="sheet-tiedowns" className="flex flex-col gap-2">
+      <section aria-labelledby="sheet-tiedowns" className="flex flex-col gap-2 print:break-before-page">
         <h2 id="sheet-tiedowns" className="text-xl font-bold">
           Tiedowns ({kit.tiedowns.length})
         </h2>
@@ -182,47 +214,21 @@ export function LoadSheet({ kit, units, kitUrl, qr, printedAt }: { kit: KitJson;
         )}
       </section>
 
-      <KitDeck picture={deckPicture(kitFromJson(kit), kit)} idPrefix="sheet-deck" heading="On the deck" />
-
-      <section aria-labelledby="sheet-placement" className="sheet-block flex flex-col gap-2">
-        <h2 id="sheet-placement" className="text-xl font-bold">
-          Where the machine sits, and the hitch
-        </h2>
-        {p ? (
-          <>
-            <dl className="grid grid-cols-2 gap-x-6 gap-y-1 text-base sm:grid-cols-3 print:grid-cols-3">
-              <Fact label="Machine's front">{formatMetres(p.machineFrontFromDeckFrontMm)} back from the deck front</Fact>
-              <Fact label="Tongue weight">
-                <strong>{formatNumber(p.tongueWeightLb)} lb</strong>, {formatNumber(p.tongueWeightShare * 100)} % of the loaded weight
-              </Fact>
-              <Fact label="Band for this hitch">
-                {bandWords(p.band)} ({formatNumber(p.band.minLb)}–{formatNumber(p.band.maxLb)} lb)
-              </Fact>
-              <Fact label="Axle-group load">{formatNumber(p.axleLoadLb)} lb</Fact>
-              <Fact label="Loaded trailer">
-                <strong>{formatNumber(p.trailerGrossLb)} lb</strong> of {formatNumber(p.gvwrLb)} lb GVWR
-              </Fact>
-              <Fact label="Band source">
-                <span className="text-sm">{p.band.source}</span>
-              </Fact>
-            </dl>
-            <ul className="flex flex-col gap-1 text-sm" aria-label="Placement findings">
-              {p.findings.map((f) => (
-                <li key={f.code} className={`sheet-finding border-l-4 pl-2 ${f.severity === "fail" ? "border-stop" : f.severity === "warn" ? "border-caution" : "border-idle"}`} data-severity={f.severity}>
-                  <strong>
-                    <span aria-hidden="true">{MARK[f.severity]} </span>
-                    {SEVERITY_WORDS[f.severity]}:
-                  </strong>{" "}
-                  {f.message} <span className="text-ink-soft">({f.source})</span>
-                </li>
-              ))}
-            </ul>
-          </>
-        ) : (
-          <p className="text-base">Not worked out: {kit.placementMissing.join(" ")}</p>
-        )}
-      </section>
-
+      {(findings.length > 0 || kit.blockers.length > 0) && (
+        <section aria-labelledby="sheet-findings" className="flex flex-col gap-2">
+          <h2 id="sheet-findings" className="text-xl font-bold">
+            Findings of the check
+          </h2>
+          <ul className="flex flex-col gap-1 text-sm" aria-label="Findings">
+            {kit.blockers.map((b, i) => (
+              <li key={`b${i}`} className="sheet-finding border-l-4 border-stop pl-2" data-severity="fail">
+                <strong>✕ May not be used:</strong> {b.message}
+              </li>
+            ))}
+          </ul>
+          <FindingLines findings={findings} label="Findings of the rule" />
+        </section>
+      )}
       <section aria-labelledby="sheet-trip" className="sheet-block flex flex-col gap-2">
         <h2 id="sheet-trip" className="text-xl font-bold">
           Before and during the trip

@@ -119,6 +119,17 @@ describe("proposeKit: a proposal that passes", () => {
     expect(q.notes.join(" ")).toContain("FMCSA Driver's Handbook on Cargo Securement (ch. 10)");
   });
 
+  it("never proposes a chain with no grade mark, though its grade 30 rating would pass, and says it left it out", () => {
+    // An old 3/8 in chain with no grade mark: 2,650 lb as grade 30 (49 CFR 393.108(d)), lighter-rated than any marked chain here.
+    const old = chain({ tagCode: "OLDCHAIN", description: "Chain, 3/8 in, no grade mark", grade: null, gradeMarked: false, size: "3/8", wllLb: 2650 });
+    const p = proposeKit(kit, [old, ...stock]);
+    expect(p.pass).toBe(true);
+    expect(p.tiedowns.flatMap((t) => t.itemIds)).not.toContain(old.id);
+    expect(p.notes).toContain(
+      "Left out: one free chain with no grade mark (OLDCHAIN), rated as grade 30 (49 CFR 393.108(d)); a proposal picks gear by the rating marked on it (common practice). Add it by hand if you mean to.",
+    );
+  });
+
   it("ignores the kit's current tiedowns and proposes a whole kit", () => {
     const current = passingScene();
     const p = proposeKit(current, stock);

@@ -45,9 +45,10 @@ function sheetCss(paper: PaperSize): string {
   html, body { background: #fff; }
   .load-sheet__toolbar { display: none !important; }
   .load-sheet__paper { padding: 0; max-width: none; }
-  .load-sheet .kit-deck svg { max-height: 6.2in; width: auto; margin: 0; }
-  .load-sheet .kit-deck > div { grid-template-columns: auto 1fr; }
+  .load-sheet .kit-deck svg { max-height: 6.6in; margin: 0; }
   .load-sheet .sheet-block, .load-sheet tr, .load-sheet .sheet-finding { break-inside: avoid; }
   .load-sheet thead { display: table-header-group; }
+  .load-sheet header figure { width: 1.25in; }
+  .load-sheet [data-testid="kit-qr"] { width: 1.2in; height: 1.2in; }
 }`;
 }
