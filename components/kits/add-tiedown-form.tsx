@@ -54,7 +54,7 @@ export function AddTiedownForm({ kit, units, onAdded }: { kit: KitJson; units: U
   }
 
   return (
-    <form onSubmit={submit} noValidate className="flex flex-col gap-3 rounded-xl border-2 border-ink-soft p-3" aria-labelledby="add-tiedown-heading">
+    <form onSubmit={submit} noValidate className="flex flex-col gap-3 rounded-xl border-2 border-ink-soft p-3 print:hidden" aria-labelledby="add-tiedown-heading">
       <h3 id="add-tiedown-heading" className="text-2xl font-bold">Add a tiedown</h3>
       <SelectField
         label="Anchor point on the trailer"

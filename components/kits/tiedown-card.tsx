@@ -152,7 +152,7 @@ export function TiedownCard({
                 {!i.usable.ok && <span className="text-base font-bold text-stop">{i.usable.reasons.map((r) => r.message).join(" ")}</span>}
               </span>
               {editable && (
-                <button type="button" onClick={() => void run(() => removeItem.mutateAsync(i.id))} disabled={removeItem.isPending} className={buttonClass("secondary", "px-3 text-base")} aria-label={`Remove ${i.tagCode} from ${t.label}`}>
+                <button type="button" onClick={() => void run(() => removeItem.mutateAsync(i.id))} disabled={removeItem.isPending} className={buttonClass("secondary", "px-3 text-base print:hidden")} aria-label={`Remove ${i.tagCode} from ${t.label}`}>
                   Remove
                 </button>
               )}
@@ -176,7 +176,7 @@ export function TiedownCard({
         (picking ? (
           <ItemPicker kit={kit} tiedownId={t.id} units={units} onClose={() => onPick(false)} />
         ) : (
-          <div className="flex flex-col gap-2">
+          <div className="flex flex-col gap-2 print:hidden">
             <button type="button" onClick={() => onPick(true)} className={buttonClass("primary", "w-full")}>
               Add items to {t.label}
             </button>
