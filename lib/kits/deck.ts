@@ -29,7 +29,7 @@
 import { formatLbKg, formatNumber, type SecurementCheckResult, type TiedownResult } from "@/lib/securement";
 import type { AnchorPoint, Coupling, Kit, MachinePoint, Side } from "./model";
 import { formatMetres } from "./placement";
-import type { KitBlocker } from "./plan";
+import { checkedTiedowns, type KitBlocker } from "./plan";
 
 /**
  * A tiedown's state in the picture.
@@ -368,10 +368,8 @@ export function deckPicture(kit: Kit, verdict: DeckVerdict): DeckPicture {
     leader: null,
   };
 
-  // Tiedowns and their verdicts. The engine's tiedowns are the kit's, less those left out for
-  // an accessory the machine no longer lists (kitCheckRequest drops exactly those).
-  const dropped = new Set(verdict.blockers.filter((b) => b.code === "ACCESSORY_NOT_ON_MACHINE").map((b) => b.tiedownId));
-  const checked = kit.tiedowns.filter((t) => !dropped.has(t.id));
+  // Tiedowns and their verdicts: the engine's i-th tiedown is the i-th of checkedTiedowns.
+  const checked = checkedTiedowns(kit);
   const anchorsById = new Map(trailer.anchorPoints.map((a) => [a.id, a]));
   const marker = Math.round(f * 0.7);
   const anchorAt = (a: AnchorPoint): Point => ({

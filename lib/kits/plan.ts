@@ -44,16 +44,37 @@ function holdsKnownPart(kit: Kit, tiedown: KitTiedown): boolean {
   return secures === MACHINE || kit.machine.accessories.some((a) => a.toLowerCase() === secures);
 }
 
+/** Item kinds that are tiedown material (a binder, hook or shackle alone holds nothing down). */
+const MATERIAL_KINDS = new Set(["chain", "web-strap", "wire-rope"]);
+
+function hasMaterial(tiedown: KitTiedown): boolean {
+  return tiedown.items.some((i) => MATERIAL_KINDS.has(i.kind));
+}
+
+/** Why a kit tiedown is left out of the check, or null when it goes in. */
+function leftOutBecause(kit: Kit, t: KitTiedown): KitBlocker | null {
+  if (!holdsKnownPart(kit, t)) {
+    return { code: "ACCESSORY_NOT_ON_MACHINE", tiedownId: t.id, message: `Tiedown "${t.label}" holds the ${t.secures}, which ${kit.machine.name} no longer lists; it is not counted.` };
+  }
+  if (!hasMaterial(t)) {
+    return { code: "NO_TIEDOWN_MATERIAL", tiedownId: t.id, message: `Tiedown "${t.label}" has no chain, web strap or wire rope, so it holds nothing down; it is not counted until one is added.` };
+  }
+  return null;
+}
+
 /**
  * The kit's tiedowns that go into its check request, in the request's order: index i of
  * `checkSecurement(kitCheckRequest(kit)).tiedowns` is the i-th of these. A tiedown for an
- * accessory the machine no longer lists is left out (see {@link kitBlockers}).
+ * accessory the machine no longer lists, or one with no chain, strap or wire rope (a binder
+ * on its own), is left out and counts nothing: the conservative reading (see {@link kitBlockers}).
+ * The scratch check only warns about a tiedown without material (NO_TIEDOWN_MATERIAL); a kit
+ * is made of real items, so there the part is missing, not merely unlisted.
  *
  * @example
  * checkedTiedowns(kit).map((t) => t.id);
  */
 export function checkedTiedowns(kit: Kit): KitTiedown[] {
-  return kit.tiedowns.filter((t) => holdsKnownPart(kit, t));
+  return kit.tiedowns.filter((t) => leftOutBecause(kit, t) === null);
 }
 
 /**
@@ -99,7 +120,7 @@ export function kitCheckRequest(kit: Kit): SecurementCheckRequest {
  * const b: KitBlocker = { code: "ITEM_NOT_USABLE", tiedownId: "…", itemId: "…", message: "Item K7XM-3HQA: Tagged out: …" };
  */
 export interface KitBlocker {
-  readonly code: "ITEM_NOT_USABLE" | "ANCHOR_NOT_USABLE" | "ANCHOR_NOT_ON_TRAILER" | "ACCESSORY_NOT_ON_MACHINE";
+  readonly code: "ITEM_NOT_USABLE" | "ANCHOR_NOT_USABLE" | "ANCHOR_NOT_ON_TRAILER" | "ACCESSORY_NOT_ON_MACHINE" | "NO_TIEDOWN_MATERIAL";
   readonly message: string;
   readonly tiedownId: string;
   readonly itemId?: string;
@@ -118,9 +139,8 @@ export interface KitBlocker {
 export function kitBlockers(kit: Kit): KitBlocker[] {
   const out: KitBlocker[] = [];
   for (const t of kit.tiedowns) {
-    if (!holdsKnownPart(kit, t)) {
-      out.push({ code: "ACCESSORY_NOT_ON_MACHINE", tiedownId: t.id, message: `Tiedown "${t.label}" holds the ${t.secures}, which ${kit.machine.name} no longer lists; it is not counted.` });
-    }
+    const leftOut = leftOutBecause(kit, t);
+    if (leftOut) out.push(leftOut);
     const anchor = anchorOf(kit, t);
     if (!anchor) {
       out.push({ code: "ANCHOR_NOT_ON_TRAILER", tiedownId: t.id, anchorPointId: t.anchorPointId, message: `Tiedown "${t.label}": its anchor point is not on ${kit.trailer.name}.` });

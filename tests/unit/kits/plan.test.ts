@@ -81,6 +81,18 @@ describe("kitBlockers", () => {
   });
 });
 
+describe("a tiedown without chain, strap or wire rope", () => {
+  it("counts nothing in a kit and is reported, where the scratch check would count the binder's WLL", () => {
+    const k = kit();
+    const binderOnly = { ...k, tiedowns: [...k.tiedowns.slice(0, 3), tiedown("rear right", "rr", [binder()])] };
+    expect(kitCheckRequest(binderOnly).tiedowns).toHaveLength(3);
+    expect(kitBlockers(binderOnly).map((b) => [b.code, b.tiedownId])).toEqual([["NO_TIEDOWN_MATERIAL", "td-rear right"]]);
+    const { check, pass } = kitVerdict(binderOnly);
+    expect(check.findings.map((f) => f.code)).toContain("TOO_FEW_TIEDOWNS"); // 3 on a 12,000 lb machine
+    expect(pass).toBe(false);
+  });
+});
+
 describe("practicePoints", () => {
   it("asks for a tiedown at each corner plus one per accessory, and a binder on every chain", () => {
     const k = kit({ machine: { ...excavator, accessories: ["blade"] } });
