@@ -184,7 +184,10 @@ describe("availability, enforced by the server", () => {
     expect(res.json.code).toBe("TOO_MANY_TIEDOWNS");
     const whole = await planner.get(`/api/v1/kits/${kit.id}`);
     expect(whole.status).toBe(200);
-    expect(whole.json.check.tiedowns).toHaveLength(100);
+    expect(whole.json.tiedowns).toHaveLength(100);
+    // Tiedowns with no items hold nothing down: left out of the check, each reported.
+    expect(whole.json.check.tiedowns).toHaveLength(0);
+    expect(whole.json.blockers.filter((b: any) => b.code === "NO_TIEDOWN_MATERIAL")).toHaveLength(100);
   });
 
   it("answers 400 naming the field for bad input", async () => {
@@ -465,7 +468,8 @@ describe("machines and trailers", () => {
     expect((await testDb("anchor_points").where({ id: anchorId(t, "C1") }).first("status")).status).toBe("retired");
     // The kit still shows the retired point, as a blocker.
     const k = (await planner.get(`/api/v1/kits/${kit.id}`)).json;
-    expect(k.blockers.map((b: any) => b.code)).toEqual(["ANCHOR_NOT_USABLE"]);
+    // (The tiedown has no items yet, so it is also reported as holding nothing down.)
+    expect(k.blockers.map((b: any) => b.code).sort()).toEqual(["ANCHOR_NOT_USABLE", "NO_TIEDOWN_MATERIAL"]);
     const history = await planner.get(`/api/v1/anchor-points/${anchorId(t, "FL")}/events`);
     expect(history.json.data[0]).toMatchObject({ type: "edited", changes: { wllLb: [6600, 5000] } });
   });
