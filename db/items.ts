@@ -375,10 +375,6 @@ export async function countInspectionsDue(organisationId: string, dueBy: string)
   return Number(row?.count ?? 0);
 }
 
-export async function ownersOf(organisationId: string): Promise<{ email: string; name: string }[]> {
-  return db("users").where({ organisation_id: organisationId, role: "owner" }).whereNull("disabled_at").select("email", "name");
-}
-
 // Public tag view rate limiting
 
 export async function recordTagLookup(ip: string, found: boolean) {

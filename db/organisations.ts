@@ -9,6 +9,8 @@ export interface Organisation {
   publicTagView: boolean;
   /** IANA name, e.g. "America/Chicago": "today" and every date shown to its people. */
   timeZone: string;
+  /** HH:mm on the organisation's clock: when the daily digest goes out. */
+  digestTime: string;
 }
 
 export async function createOrganisation(o: { id: string; name: string; timeZone: string }, trx: Knex = db): Promise<void> {
@@ -16,7 +18,7 @@ export async function createOrganisation(o: { id: string; name: string; timeZone
 }
 
 export async function getOrganisation(id: string, trx: Knex = db): Promise<Organisation | undefined> {
-  return trx("organisations").where({ id }).first("id", "name", "public_tag_view as publicTagView", "time_zone as timeZone");
+  return trx("organisations").where({ id }).first("id", "name", "public_tag_view as publicTagView", "time_zone as timeZone", "digest_time as digestTime");
 }
 
 /** The organisation's inspection intervals as stored (kinds it never set are missing). */
@@ -31,9 +33,14 @@ export async function getTimeZone(id: string, trx: Knex = db): Promise<string | 
   return row?.time_zone;
 }
 
-export async function updateOrganisation(id: string, patch: { name?: string; publicTagView?: boolean; timeZone?: string }, trx: Knex = db): Promise<void> {
+export async function updateOrganisation(
+  id: string,
+  patch: { name?: string; publicTagView?: boolean; timeZone?: string; digestTime?: string },
+  trx: Knex = db,
+): Promise<void> {
   await trx("organisations").where({ id }).update({
     ...(patch.name !== undefined && { name: patch.name }),
+    ...(patch.digestTime !== undefined && { digest_time: patch.digestTime }),
     ...(patch.publicTagView !== undefined && { public_tag_view: patch.publicTagView }),
     ...(patch.timeZone !== undefined && { time_zone: patch.timeZone }),
   });

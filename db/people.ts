@@ -46,13 +46,21 @@ export async function findCredentials(email: string) {
     .first("id", "password_hash as passwordHash", "disabled_at as disabledAt", "organisation_id as organisationId");
 }
 
-/** An active person by e-mail, with their organisation's time zone (for the dates in their e-mail). */
-export async function findActiveUserByEmail(email: string): Promise<{ id: string; timeZone: string } | undefined> {
-  return db("users as u")
+/** An active person by e-mail, with their organisation and its time zone (for the dates in their e-mail). */
+export async function findActiveUserByEmail(email: string, trx: Knex = db): Promise<{ id: string; organisationId: string; timeZone: string } | undefined> {
+  return trx("users as u")
     .join("organisations as o", "o.id", "u.organisation_id")
     .where("u.email", email)
     .whereNull("u.disabled_at")
-    .first("u.id", "o.time_zone as timeZone");
+    .first("u.id", "u.organisation_id as organisationId", "o.time_zone as timeZone");
+}
+
+/** The account an e-mail address has, active or not, with its organisation's name. */
+export async function findAccountByEmail(email: string, trx: Knex = db): Promise<{ id: string; organisationId: string; organisationName: string } | undefined> {
+  return trx("users as u")
+    .join("organisations as o", "o.id", "u.organisation_id")
+    .where("u.email", email)
+    .first("u.id", "u.organisation_id as organisationId", "o.name as organisationName");
 }
 
 export async function listPeople(organisationId: string): Promise<Person[]> {
@@ -167,8 +175,8 @@ export async function listOpenInvites(organisationId: string) {
 
 // Password resets
 
-export async function insertPasswordReset(userId: string, tokenHash: string, expiresAt: Date) {
-  await db("password_resets").insert({ user_id: userId, token_hash: tokenHash, expires_at: expiresAt });
+export async function insertPasswordReset(userId: string, tokenHash: string, expiresAt: Date, trx: Knex = db) {
+  await trx("password_resets").insert({ user_id: userId, token_hash: tokenHash, expires_at: expiresAt });
 }
 
 export async function findPasswordReset(tokenHash: string, trx: Knex = db) {

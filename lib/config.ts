@@ -16,6 +16,12 @@ const schema = z.object({
   /** Failed sign-ins allowed per account or address in SIGN_IN_WINDOW_MINUTES. */
   SIGN_IN_MAX_FAILURES: z.coerce.number().int().positive().default(5),
   SIGN_IN_WINDOW_MINUTES: z.coerce.number().int().positive().default(15),
+  /** The e-mail queue: first retry after this many seconds, then doubling (with jitter). */
+  MAIL_RETRY_DELAY_SECONDS: z.coerce.number().int().positive().default(30),
+  /** Retries before a message is marked failed and shown to the owners (9: about 4 to 8.5 hours). */
+  MAIL_RETRY_LIMIT: z.coerce.number().int().min(0).default(9),
+  /** How often an idle worker looks for jobs; a committed change also wakes it at once. */
+  JOB_POLL_SECONDS: z.coerce.number().min(0.5).default(2),
 });
 
 export const config = schema.parse(process.env);

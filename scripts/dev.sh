@@ -6,6 +6,7 @@ source "$(dirname "$0")/lib.sh"
 PORT="${PORT:-3000}"
 
 prepare_local_app "$PORT"
+start_worker worker
 
 say "next dev on $APP_URL (mail inbox: http://127.0.0.1:$MAIL_WEB_PORT); Ctrl-C stops it, npm run stop stops the services"
 cd "$ROOT"

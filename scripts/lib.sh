@@ -144,6 +144,45 @@ start_mail() {
   start_failed "The mail fake" "$DATA/maildev.log"
 }
 
+# Stops this project's mail fake and waits until its SMTP port is closed (the fault tests
+# stop and start it to prove that queued e-mail waits for it).
+stop_mail() {
+  stop_pid_file "$DATA/maildev.pid" maildev
+  for _ in $(seq 1 50); do port_taken "$SMTP_PORT" || return 0; sleep 0.1; done
+  say "the mail fake still holds port $SMTP_PORT"
+  return 1
+}
+
+# The job worker (lib/jobs/worker.ts, entry scripts/worker.ts): sends the queued e-mail and
+# runs the daily reminders, beside the web server. $1 names its pid and log files ("worker"
+# for npm start and npm run dev, "test-worker" for npm test); it reads the environment the
+# app reads (DATABASE_URL, SMTP_URL, APP_URL…). Ready once its log says so.
+WORKER_SCRIPT="scripts/worker.ts"
+start_worker() {
+  local name="${1:-worker}"
+  if our_process "$DATA/$name.pid" "$WORKER_SCRIPT"; then return; fi
+  say "starting the job worker (e-mail and reminders; log: .data/$name.log)"
+  : >"$DATA/$name.log"
+  (cd "$ROOT"; nohup node --conditions=react-server --import tsx "$WORKER_SCRIPT" >>"$DATA/$name.log" 2>&1 & echo $! >"$DATA/$name.pid")
+  for _ in $(seq 1 150); do
+    if grep -q "worker ready" "$DATA/$name.log"; then return; fi
+    our_process "$DATA/$name.pid" "$WORKER_SCRIPT" || start_failed "The job worker" "$DATA/$name.log"
+    sleep 0.2
+  done
+  start_failed "The job worker" "$DATA/$name.log"
+}
+
+# Stops a worker and waits for it to exit: it finishes the jobs it holds (up to 20 s), and
+# pg-boss hands the rest to the next worker.
+stop_worker() {
+  local name="${1:-worker}" pid
+  if ! our_process "$DATA/$name.pid" "$WORKER_SCRIPT"; then stop_pid_file "$DATA/$name.pid" "$WORKER_SCRIPT"; return; fi
+  pid="$(cat "$DATA/$name.pid")"
+  kill "$pid" 2>/dev/null || true
+  for _ in $(seq 1 150); do kill -0 "$pid" 2>/dev/null || break; sleep 0.2; done
+  rm -f "$DATA/$name.pid"
+}
+
 # Ours: the process of our pid file (this project's s3rver) answers with our bucket. Any other
 # program on the port is not taken for it.
 s3_running() {

@@ -1,11 +1,13 @@
 #!/usr/bin/env bash
 # npm start: install what is missing, start PostgreSQL and the mail fake on loopback,
-# migrate, load the demo data into an empty database, build and serve.
+# migrate, load the demo data into an empty database, build, start the job worker (e-mail
+# and reminders) and serve.
 source "$(dirname "$0")/lib.sh"
 PORT="${PORT:-3000}"
 
 prepare_local_app "$PORT"
 build_if_stale
+start_worker worker
 
 cat <<MSG
 

@@ -1,6 +1,6 @@
 #!/usr/bin/env bash
 # npm test: its own set-up (PostgreSQL, a separate test database rebuilt from empty, the
-# mail fake, Chromium, a production build served on its own port), then every test.
+# mail fake, Chromium, a production build served on its own port, a job worker), then every test.
 source "$(dirname "$0")/lib.sh"
 TEST_PORT="${LINKYARD_TEST_PORT:-3100}"
 
@@ -22,6 +22,12 @@ export_service_env
 export APP_URL="http://127.0.0.1:$TEST_PORT"
 export LINKYARD_BASE_URL="$APP_URL"
 export MAIL_API="http://127.0.0.1:$MAIL_WEB_PORT"
+# The e-mail queue's retries, shortened: the fault tests stop the mail fake and wait for
+# retries (1-2 s, 2-4 s, 4-8 s) and for a message to be marked failed after the last.
+export MAIL_RETRY_DELAY_SECONDS=1 MAIL_RETRY_LIMIT=3 JOB_POLL_SECONDS=0.5
+
+# A worker of an earlier run must not hold the queue while its tables are rebuilt.
+stop_worker test-worker
 
 # Down to empty and up again: proves every migration's rollback as well as its forward run.
 say "resetting the test database"
@@ -35,7 +41,8 @@ build_if_stale
 say "serving the build on $APP_URL for the tests"
 stop_pid_file "$DATA/test-app.pid" next
 (cd "$ROOT"; nohup node_modules/.bin/next start -H 127.0.0.1 -p "$TEST_PORT" >"$DATA/test-app.log" 2>&1 & echo $! >"$DATA/test-app.pid")
-trap 'stop_pid_file "$DATA/test-app.pid" next' EXIT
+trap 'stop_pid_file "$DATA/test-app.pid" next; stop_worker test-worker' EXIT
+start_worker test-worker
 wait_for_http "$APP_URL/api/health" "$DATA/test-app.log"
 
 cd "$ROOT"

@@ -4,11 +4,14 @@ import { redirect } from "next/navigation";
 import { z } from "zod";
 import { publicFormAction } from "@/lib/auth/action";
 import * as accounts from "@/lib/auth/accounts";
+import { REMINDER_LABELS } from "@/lib/mail/kinds";
+import { unsubscribe } from "@/lib/mail/service";
 import {
   acceptInviteSchema,
   resetPasswordSchema,
   resetRequestSchema,
   signInSchema,
+  signUpConfirmSchema,
   signUpFormSchema,
 } from "@/lib/auth/schemas";
 import { currentSessionId, endSession, startSession } from "@/lib/auth/session";
@@ -26,8 +29,14 @@ export const signInAction = publicFormAction(signInSchema, async (input) => {
   redirect(safeNextPath(input.next) ?? "/");
 });
 
+/** The same answer whether or not the address has an account: the e-mail says which (issue 11.3). */
 export const signUpAction = publicFormAction(signUpFormSchema, async (input) => {
-  const userId = await accounts.signUp(input);
+  await accounts.requestSignUp(input);
+  return { ok: true, message: accounts.signUpSentMessage(input.email) };
+});
+
+export const confirmSignUpAction = publicFormAction(signUpConfirmSchema, async ({ token }) => {
+  const userId = await accounts.confirmSignUp(token);
   await setSessionCookie(userId);
   redirect("/");
 });
@@ -56,4 +65,10 @@ export const signOutAction = publicFormAction(z.object({}), async () => {
     (await cookies()).set(blank.name, blank.value, blank.attributes);
   }
   redirect("/sign-in");
+});
+
+/** The button of an unsubscribe link's page: no sign-in, the signed link is the authority. */
+export const unsubscribeAction = publicFormAction(z.object({ token: z.string().min(1, "This unsubscribe link is incomplete.") }), async ({ token }) => {
+  const { kind, email } = await unsubscribe(token);
+  return { ok: true, message: `Done: Linkyard sends no more ${REMINDER_LABELS[kind].short} to ${email}. Your other e-mails stay as they were.` };
 });

@@ -39,7 +39,7 @@ export function SignUpForm({ action: signUp }: { action: FormAction }) {
       <Field label="Your name" name="name" autoComplete="name" defaultValue={state.values?.name} error={state.fieldErrors?.name} />
       <Field label="E-mail" name="email" type="email" autoComplete="email" defaultValue={state.values?.email} error={state.fieldErrors?.email} />
       <Field label="Password" name="password" type="password" autoComplete="new-password" hint="At least 10 characters." error={state.fieldErrors?.password} />
-      <SubmitButton pendingLabel="Setting up…">Create company and sign in</SubmitButton>
+      <SubmitButton pendingLabel="Sending…">Set up company</SubmitButton>
       <Link className="mt-4 text-lg underline" href="/sign-in">Already have an account? Sign in</Link>
     </form>
   );
@@ -81,6 +81,18 @@ export function AcceptInviteForm({ token, email, action: accept }: { token: stri
       <Field label="Your name" name="name" autoComplete="name" defaultValue={state.values?.name} error={state.fieldErrors?.name} />
       <Field label="Choose a password" name="password" type="password" autoComplete="new-password" hint="At least 10 characters." error={state.fieldErrors?.password} />
       <SubmitButton pendingLabel="Joining…">Join and sign in</SubmitButton>
+    </form>
+  );
+}
+
+/** The last step of a sign-up, from the e-mailed link: one button, so a link scanner's visit creates nothing. */
+export function ConfirmSignUpForm({ token, action: confirm }: { token: string; action: FormAction }) {
+  const [state, action] = useActionState(confirm, initialFormState);
+  return (
+    <form action={action} className="flex flex-col gap-2" noValidate>
+      <FormAlert state={state} />
+      <input type="hidden" name="token" value={token} />
+      <SubmitButton pendingLabel="Setting up…">Set up company and sign in</SubmitButton>
     </form>
   );
 }

@@ -12,6 +12,7 @@ const PATHS: Record<NavIconName, string> = {
   trailers: "M2 15h17l3-3M4 15v2M14 15v2M7 19a2 2 0 1 0 0-4 2 2 0 0 0 0 4zM17 19a2 2 0 1 0 0-4 2 2 0 0 0 0 4zM6 12V9M12 12V9M18 12V9",
   check: "M3 17h18M5 17l2-6h10l2 6M8 11V8h8v3M7 20a1 1 0 1 0 0-2M17 20a1 1 0 1 0 0-2M9 14l2 2 4-4",
   ratings: "M4 20h16M6 20V10M12 20V4M18 20v-7",
+  mail: "M3 6h18v12H3zM3 7l9 6 9-6",
   more: "M5 12h.01M12 12h.01M19 12h.01",
 };
 

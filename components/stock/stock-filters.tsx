@@ -35,7 +35,7 @@ export function StockFilters({
         <Filter label="Kind" value={params.get("kind")} onChange={(v) => setParams({ kind: v })} options={ITEM_KINDS.map((k) => [k, KIND_LABELS[k]])} />
         <Filter label="Status" value={params.get("status")} onChange={(v) => setParams({ status: v })} options={ITEM_STATUSES.map((s) => [s, STATUS_LABELS[s].label])} />
         <Filter label="Lives at" value={params.get("yardId")} onChange={(v) => setParams({ yardId: v })} options={yards.map((y) => [y.id, y.name])} />
-        <Filter label="Inspection" value={params.get("due")} onChange={(v) => setParams({ due: v })} options={[["overdue", "Overdue"], ["30d", "Due in 30 days"]]} />
+        <Filter label="Inspection" value={params.get("due")} onChange={(v) => setParams({ due: v })} options={[["overdue", "Overdue"], ["7d", "Due in 7 days"], ["30d", "Due in 30 days"]]} />
       </div>
     </>
   );

@@ -59,6 +59,10 @@ export const AUDIT_WORDS = {
   "kit.ready": "Kit marked ready",
   "kit.loaded": "Kit loaded",
   "kit.returned": "Kit returned",
+  "organisation.digest_time_updated": "Daily digest time changed",
+  "mail.preferences_changed": "E-mail choices changed",
+  "mail.unsubscribed": "Unsubscribed by an e-mail's link",
+  "mail.resent": "Failed e-mail sent again",
 } as const satisfies Record<string, string>;
 
 export type AuditAction = keyof typeof AUDIT_WORDS;

@@ -1,12 +1,14 @@
 import "server-only";
 import { randomUUID } from "node:crypto";
 import { audited } from "@/db/audit";
+import { QUEUES, sendJob } from "@/db/jobs";
 import { createOrganisation, getOrganisation } from "@/db/organisations";
 import * as people from "@/db/people";
+import * as signups from "@/db/signups";
 import { config } from "@/lib/config";
 import { conflict, fieldError, forbidden, gone, notFound, tooManyRequests, unauthorized } from "@/lib/http/errors";
-import { inviteMail, passwordResetMail } from "@/lib/mail/templates";
-import { sendMail } from "@/lib/mail/send";
+import { queueMail } from "@/lib/mail/queue";
+import { accountExistsInviteMail, accountExistsSignUpMail, inviteMail, passwordResetMail, signUpConfirmMail } from "@/lib/mail/templates";
 import { DEFAULT_TIME_ZONE } from "@/lib/time";
 import { capTokensOf, revokeTokensOf } from "./api-tokens";
 import { newUserId } from "./lucia";
@@ -20,25 +22,70 @@ import type { Principal } from "./session";
 
 export const INVITE_DAYS = 7;
 export const RESET_HOURS = 2;
+export const SIGNUP_HOURS = 24;
 
 // A fixed hash to verify against when the e-mail is unknown, so both cases take as long.
 let decoyHash: Promise<string> | undefined;
 
-export async function signUp(input: { organisationName: string; name: string; email: string; password: string; timeZone?: string }) {
-  if (await people.emailTaken(input.email)) {
-    throw conflict("An account with this e-mail already exists. Sign in, or reset the password.", [
-      { path: "email", message: "An account with this e-mail already exists." },
-    ]);
-  }
+/**
+ * Sign-up, first half: the answer, and the work behind it, are the same whether or not the
+ * address has an account (issue 11.3). A new address is e-mailed a link that finishes the
+ * sign-up; an address with an account is told so by e-mail instead.
+ */
+export async function requestSignUp(input: { organisationName: string; name: string; email: string; password: string; timeZone?: string }): Promise<void> {
   const passwordHash = await hashPassword(input.password);
+  const secret = newSecret();
+  const expiresAt = new Date(Date.now() + SIGNUP_HOURS * 3_600_000);
+  const timeZone = input.timeZone ?? DEFAULT_TIME_ZONE;
+  // No audit row: nothing of an organisation changes until the link is used.
+  await audited(null, async (tx) => {
+    const requestId = await signups.insertSignUpRequest({ email: input.email, organisationName: input.organisationName, name: input.name, timeZone, passwordHash, tokenHash: hashSecret(secret), expiresAt }, tx);
+    const existing = await people.findAccountByEmail(input.email, tx);
+    await queueMail(tx, {
+      kind: existing ? "account_exists" : "signup",
+      idempotencyKey: `signup:${requestId}`,
+      organisationId: existing?.organisationId ?? null,
+      userId: existing?.id ?? null,
+      message: existing
+        ? accountExistsSignUpMail({ to: input.email, attemptedName: input.organisationName, organisationName: existing.organisationName, appUrl: config.APP_URL })
+        : signUpConfirmMail({ to: input.email, organisationName: input.organisationName, link: `${config.APP_URL}/sign-up/confirm/${secret}`, expiresAt, timeZone }),
+    });
+  });
+}
+
+/** What the sign-up form and API answer, the same for an address with or without an account. */
+export function signUpSentMessage(email: string): string {
+  return `Check your e-mail: we sent a message to ${email}. Open the link in it to finish setting up your company; it works for ${SIGNUP_HOURS} hours. Nothing there after a few minutes? Look in the spam folder, or sign up again.`;
+}
+
+function signUpProblem(request: { usedAt: Date | null; expiresAt: Date }): string | null {
+  if (request.usedAt) return "This sign-up link has already been used. Sign in instead.";
+  if (request.expiresAt.getTime() < Date.now()) return "This sign-up link has expired. Sign up again.";
+  return null;
+}
+
+/** What the sign-up confirmation page shows before the person confirms. */
+export async function describeSignUp(token: string) {
+  const request = await signups.findSignUpRequest(hashSecret(token));
+  return request ? { organisationName: request.organisationName, email: request.email, problem: signUpProblem(request) } : null;
+}
+
+/** Sign-up, second half: the link from the e-mail makes the organisation and its first owner. */
+export async function confirmSignUp(token: string): Promise<string> {
   const userId = newUserId();
   const organisationId = randomUUID();
-  await audited({ organisationId, userId }, async (tx, audit) => {
-    await createOrganisation({ id: organisationId, name: input.organisationName, timeZone: input.timeZone ?? DEFAULT_TIME_ZONE }, tx);
-    await people.insertUser({ id: userId, organisationId, email: input.email, name: input.name, role: "owner", passwordHash }, tx);
-    await audit({ action: "organisation.created", entity: "organisation", entityId: organisationId, after: { name: input.organisationName, timeZone: input.timeZone ?? DEFAULT_TIME_ZONE } });
+  return audited({ organisationId, userId }, async (tx, audit) => {
+    const request = await signups.lockSignUpRequest(hashSecret(token), tx);
+    if (!request) throw notFound("This sign-up link is not valid. Sign up again.");
+    const problem = signUpProblem(request);
+    if (problem) throw gone(problem);
+    if (await people.emailTaken(request.email, tx)) throw conflict("This e-mail already has an account. Sign in instead.");
+    await createOrganisation({ id: organisationId, name: request.organisationName, timeZone: request.timeZone }, tx);
+    await people.insertUser({ id: userId, organisationId, email: request.email, name: request.name, role: "owner", passwordHash: request.passwordHash }, tx);
+    await signups.markSignUpRequestUsed(request.id, tx);
+    await audit({ action: "organisation.created", entity: "organisation", entityId: organisationId, after: { name: request.organisationName, timeZone: request.timeZone } });
+    return userId;
   });
-  return userId;
 }
 
 /**
@@ -64,35 +111,35 @@ export async function signIn(input: { email: string; password: string; ip: strin
   return user.id;
 }
 
+/**
+ * An invite answers the same whether or not the address has an account (issue 11.3): the
+ * invite is recorded either way, and a person who has an account is told by e-mail why
+ * this invite is not for that address.
+ */
 export async function invitePerson(actor: Principal, input: { email: string; role: Role; designated: boolean }) {
   if (!can(actor, "people.manage")) throw forbidden();
-  if (await people.emailTaken(input.email)) {
-    throw conflict("This person already has a Linkyard account.", [
-      { path: "email", message: "This e-mail already has an account." },
-    ]);
-  }
   const secret = newSecret();
   const expiresAt = new Date(Date.now() + INVITE_DAYS * 86_400_000);
-  const organisation = await getOrganisation(actor.organisationId);
+  const organisation = (await getOrganisation(actor.organisationId))!;
   const id = await audited(actor, async (tx, audit) => {
     const inviteId = await people.insertInvite(
       { organisationId: actor.organisationId, email: input.email, role: input.role, designated: input.designated, tokenHash: hashSecret(secret), invitedBy: actor.userId, expiresAt },
       tx,
     );
     await audit({ action: "person.invited", entity: "invite", entityId: inviteId, after: input });
+    const existing = await people.findAccountByEmail(input.email, tx);
+    const invite = { to: input.email, organisationName: organisation.name, inviterName: actor.name, role: input.role };
+    await queueMail(tx, {
+      kind: existing ? "account_exists" : "invite",
+      idempotencyKey: `invite:${inviteId}`,
+      // The inviting organisation's either way: its owners see the same in a list of failed mail.
+      organisationId: actor.organisationId,
+      message: existing
+        ? accountExistsInviteMail({ ...invite, ownOrganisationName: existing.organisationName, appUrl: config.APP_URL })
+        : inviteMail({ ...invite, link: `${config.APP_URL}/invite/${secret}`, expiresAt, timeZone: organisation.timeZone }),
+    });
     return inviteId;
   });
-  await sendMail(
-    inviteMail({
-      to: input.email,
-      organisationName: organisation!.name,
-      inviterName: actor.name,
-      role: input.role,
-      link: `${config.APP_URL}/invite/${secret}`,
-      expiresAt,
-      timeZone: organisation!.timeZone,
-    }),
-  );
   return { id, expiresAt };
 }
 
@@ -138,14 +185,34 @@ export async function withdrawInvite(actor: Principal, inviteId: string) {
   });
 }
 
-/** Always answers the same way, so the form does not reveal which e-mails have accounts. */
+/**
+ * Always the same answer and the same work, so neither the form nor its timing tells which
+ * e-mails have accounts (issue 11.3): one job, whatever the address. The worker looks the
+ * address up and sends the link (sendPasswordReset).
+ */
 export async function requestPasswordReset(email: string): Promise<void> {
-  const user = await people.findActiveUserByEmail(email);
-  if (!user) return;
-  const secret = newSecret();
-  const expiresAt = new Date(Date.now() + RESET_HOURS * 3_600_000);
-  await people.insertPasswordReset(user.id, hashSecret(secret), expiresAt);
-  await sendMail(passwordResetMail({ to: email, link: `${config.APP_URL}/reset-password/${secret}`, expiresAt, timeZone: user.timeZone }));
+  await audited(null, (tx) => sendJob(tx, QUEUES.resetRequest, { email }));
+}
+
+/**
+ * The worker's half of a reset request: for an active account, a new one-time link, e-mailed.
+ * `requestId` (the job's id) makes a retried job send nothing twice.
+ */
+export async function sendPasswordReset(requestId: string, email: string): Promise<void> {
+  await audited(null, async (tx) => {
+    const user = await people.findActiveUserByEmail(email, tx);
+    if (!user) return;
+    const secret = newSecret();
+    const expiresAt = new Date(Date.now() + RESET_HOURS * 3_600_000);
+    const queued = await queueMail(tx, {
+      kind: "password_reset",
+      idempotencyKey: `password_reset:${requestId}`,
+      organisationId: user.organisationId,
+      userId: user.id,
+      message: passwordResetMail({ to: email, link: `${config.APP_URL}/reset-password/${secret}`, expiresAt, timeZone: user.timeZone }),
+    });
+    if (queued) await people.insertPasswordReset(user.id, hashSecret(secret), expiresAt, tx);
+  });
 }
 
 export async function resetPassword(input: { token: string; password: string }): Promise<string> {

@@ -25,16 +25,17 @@ export type Permission =
   | "kits.load" // load a kit onto the trailer and return it, by scanning its items
   | "securement.check" // rated-limit lookup and scratch securement check
   | "reports.view"
-  | "audit.view";
+  | "audit.view"
+  | "mail.preferences"; // choose one's own reminder e-mails
 
 const GRANTS: Record<Role, readonly Permission[]> = {
   owner: [
     "people.manage", "settings.manage", "stock.view", "stock.edit", "stock.import", "stock.retire",
     "items.check", "items.inspect", "fleet.manage", "fleet.view", "kits.load", "securement.check",
-    "reports.view", "audit.view",
+    "reports.view", "audit.view", "mail.preferences",
   ],
-  planner: ["stock.view", "stock.edit", "items.check", "fleet.manage", "fleet.view", "kits.load", "securement.check", "reports.view"],
-  yard_hand: ["stock.view", "items.check", "fleet.view", "kits.load", "securement.check"],
+  planner: ["stock.view", "stock.edit", "items.check", "fleet.manage", "fleet.view", "kits.load", "securement.check", "reports.view", "mail.preferences"],
+  yard_hand: ["stock.view", "items.check", "fleet.view", "kits.load", "securement.check", "mail.preferences"],
 };
 
 /** Permissions that a designated person gets whatever the role (periodic inspection). */

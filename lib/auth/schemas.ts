@@ -62,6 +62,8 @@ export const signUpFormSchema = signUpSchema.extend({
   timeZone: z.string().optional().transform((v) => (v ? (canonicalTimeZone(v) ?? undefined) : undefined)),
 });
 
+export const signUpConfirmSchema = z.object({ token: z.string().min(1, "This sign-up link is incomplete.") });
+
 export const inviteSchema = z.object({ email: emailField, role: roleField, designated: flagField });
 
 export const acceptInviteSchema = z.object({

@@ -8,14 +8,11 @@ import * as items from "@/db/items";
 import * as kits from "@/db/kits";
 import { can, type Permission } from "@/lib/auth/roles";
 import type { Principal } from "@/lib/auth/session";
-import { config } from "@/lib/config";
 import { AppError, badRequest, fieldError, forbidden, notFound } from "@/lib/http/errors";
-import { sendMail } from "@/lib/mail/send";
-import { damageReportMail } from "@/lib/mail/templates";
 import type { ItemStatus } from "@/lib/stock/labels";
-import { describeItem } from "@/lib/stock/describe";
 import { nextStatus } from "@/lib/stock/status";
 import { itemUsability, type UsabilityReason } from "@/lib/stock/usability";
+import { queueTagOutMail } from "@/lib/reminders/tag-out";
 import { kitItemJson, kitJson, kitListEntry, type KitJson } from "./answers";
 import { toAnchor, toKit, toKitItem, type StoredKit, type StoredKitItem } from "./assemble";
 import { addDays } from "./dates";
@@ -411,20 +408,6 @@ function itemBrief(i: { id: string; tagCode: string; description: string }) {
   return { id: i.id, tagCode: i.tagCode, description: i.description };
 }
 
-async function notifyDamage(actor: Principal, damaged: { item: StoredKitItem; note: string }[]) {
-  if (!damaged.length) return;
-  const owners = await items.ownersOf(actor.organisationId);
-  await Promise.all(
-    damaged.flatMap(({ item, note }) =>
-      owners.map((o) =>
-        sendMail(damageReportMail({ to: o.email, reporterName: actor.name, itemDescription: describeItem(item), tagCode: item.tagCode, defects: [], note, link: `${config.APP_URL}/items/${item.id}` })).catch((error) =>
-          console.error("damage e-mail failed", error),
-        ),
-      ),
-    ),
-  );
-}
-
 /**
  * Takes a kit a step along draft → ready → loaded → returned (or ready → draft):
  * - ready: only when the kit passes (the engine's check and no blocker);
@@ -436,7 +419,6 @@ async function notifyDamage(actor: Principal, damaged: { item: StoredKitItem; no
  */
 export async function transitionKit(actor: Principal, kitId: string, input: TransitionInput): Promise<void> {
   require(actor, "kits.load");
-  const tagged: { item: StoredKitItem; note: string }[] = [];
   await db.transaction(async (trx) => {
     const row = await kits.lockKit(actor.organisationId, kitId, trx);
     if (!row) throw notFound("No such kit.");
@@ -496,10 +478,10 @@ export async function transitionKit(actor: Principal, kitId: string, input: Tran
       const item = locked.find((i) => i.id === d.itemId)!;
       const next = nextStatus(item.status as ItemStatus, "tag_out");
       if ("error" in next) continue; // already out of use: the kit entry and the note below say it
-      await items.insertEvents([{ organisationId: actor.organisationId, itemId: item.id, type: "tag_out", note: `Reported damaged on return (${row.job}, ${row.date}): ${d.note}`, actorId: actor.userId }], trx);
+      const [eventId] = await items.insertEvents([{ organisationId: actor.organisationId, itemId: item.id, type: "tag_out", note: `Reported damaged on return (${row.job}, ${row.date}): ${d.note}`, actorId: actor.userId }], trx);
       await items.updateItem(actor.organisationId, item.id, { status: next.status }, trx);
       await writeAudit({ organisationId: actor.organisationId, actorId: actor.userId, action: "item.tagged_out", entity: "item", entityId: item.id, after: { status: next.status, note: d.note, kitId } }, trx);
-      tagged.push({ item, note: d.note });
+      await queueTagOutMail(trx, { organisationId: actor.organisationId, eventId: eventId!, reporterName: actor.name, item, defects: [], note: d.note });
     }
     for (const l of input.lost) {
       const item = locked.find((i) => i.id === l.itemId)!;
@@ -512,7 +494,6 @@ export async function transitionKit(actor: Principal, kitId: string, input: Tran
     await kits.updateKit(actor.organisationId, kitId, { state: input.to }, trx);
     await audit(actor, KIT_STATE_ACTIONS[input.to], kitId, { state: input.to, scannedItemIds: input.scannedItemIds, damaged: input.damaged, lost: input.lost }, trx, { state: row.state });
   });
-  await notifyDamage(actor, tagged);
 }
 
 /**

@@ -1,6 +1,6 @@
 import { can, type Actor, type Permission } from "@/lib/auth/roles";
 
-export type NavIconName = "home" | "scan" | "stock" | "kits" | "machines" | "trailers" | "check" | "ratings" | "people" | "settings" | "audit" | "more";
+export type NavIconName = "home" | "scan" | "stock" | "kits" | "machines" | "trailers" | "check" | "ratings" | "people" | "settings" | "audit" | "mail" | "more";
 
 export interface NavEntry {
   href: string;
@@ -24,11 +24,12 @@ const ENTRIES: readonly NavEntry[] = [
   { href: "/people", label: "People", icon: "people", permission: "people.manage" },
   { href: "/audit", label: "Audit log", icon: "audit", permission: "audit.view" },
   { href: "/settings", label: "Settings", icon: "settings", permission: "settings.manage" },
+  { href: "/preferences", label: "E-mail", icon: "mail", permission: "mail.preferences" },
 ];
 
 /**
  * The navigation a role sees: only what it may open.
- * @example navFor({ role: "yard_hand", designated: false }).map((e) => e.href) // ["/", "/scan", "/stock", "/kits", "/check", "/machines", "/trailers", "/ratings"]
+ * @example navFor({ role: "yard_hand", designated: false }).map((e) => e.href) // ["/", "/scan", "/stock", "/kits", "/check", "/machines", "/trailers", "/ratings", "/preferences"]
  */
 export function navFor(actor: Actor): NavEntry[] {
   return ENTRIES.filter((e) => !e.permission || can(actor, e.permission));

@@ -16,7 +16,7 @@ export const itemListQuerySchema = z.object({
   kind: z.preprocess(blank, z.enum(ITEM_KINDS).optional()),
   status: z.preprocess(blank, z.enum(ITEM_STATUSES).optional()),
   yardId: z.preprocess(blank, z.uuid("yardId is not a yard id").optional()),
-  due: z.preprocess(blank, z.enum(["overdue", "30d"]).optional()),
+  due: z.preprocess(blank, z.enum(["overdue", "7d", "30d"]).optional()),
   q: z.preprocess(blank, z.string().trim().max(60).optional()),
 });
 export type ItemListQuery = z.output<typeof itemListQuerySchema>;
@@ -24,14 +24,18 @@ export type ItemListQuery = z.output<typeof itemListQuerySchema>;
 /** Days ahead that "due soon" looks (the list's "30d" filter and the home page's tile). */
 export const DUE_SOON_DAYS = 30;
 
+/** The list's "7d" filter, the daily digest's "due this week": today and the 6 days after. */
+export const DUE_THIS_WEEK_DAYS = 6;
+
 /**
  * The list query with its inspection filter as dates, counted from the organisation's today.
  * @example listFilters({ due: "overdue", page: 1, perPage: 25, sort: "tagCode", order: "asc" }, "2026-12-01").dueBefore // "2026-12-01"
  */
-export function listFilters<Q extends { due?: "overdue" | "30d" }>({ due, ...query }: Q, today: string) {
+export function listFilters<Q extends { due?: "overdue" | "7d" | "30d" }>({ due, ...query }: Q, today: string) {
   return {
     ...query,
     ...(due === "overdue" && { dueBefore: today }),
+    ...(due === "7d" && { dueBy: addDays(today, DUE_THIS_WEEK_DAYS) }),
     ...(due === "30d" && { dueBy: addDays(today, DUE_SOON_DAYS) }),
   };
 }

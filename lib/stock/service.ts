@@ -5,11 +5,9 @@ import type { AuditAction } from "@/lib/audit/actions";
 import * as items from "@/db/items";
 import type { Principal } from "@/lib/auth/session";
 import { can, type Permission } from "@/lib/auth/roles";
-import { config } from "@/lib/config";
 import { AppError, badRequest, conflict, fieldError, forbidden, notFound } from "@/lib/http/errors";
-import { sendMail } from "@/lib/mail/send";
 import { inspectionIntervals, organisationClock } from "@/lib/organisations/service";
-import { damageReportMail } from "@/lib/mail/templates";
+import { queueTagOutMail } from "@/lib/reminders/tag-out";
 import { removeStored, storeUpload, type StoredFile } from "@/lib/storage/files";
 import type { FilePurpose } from "@/lib/storage/file-type";
 import { preUseOutcome, type CheckAnswer } from "./checklists";
@@ -19,7 +17,6 @@ import { itemChanges } from "./changes";
 import { itemFields } from "./item-fields";
 import type { ItemInput } from "./schemas";
 import { nextStatus, type StatusChange } from "./status";
-import { describeItem } from "./describe";
 import { freshTagCodes } from "./tag-codes";
 
 // Everything that changes stock goes through here: permission, organisation, business rule,
@@ -156,14 +153,16 @@ export async function recordPreUseCheck(actor: Principal, id: string, input: Pre
       const { status } = await changeStatus(trx, actor, id, outcome.outcome === "pass" ? "check_pass" : "check_fail");
       const check = { organisationId: actor.organisationId, itemId: id, type: "check", outcome: outcome.outcome, checklist: outcome.checklist, note: input.note?.trim() || null, actorId: actor.userId };
       const tagOut = { organisationId: actor.organisationId, itemId: id, type: "tag_out", actorId: actor.userId, note: "Tagged out by a failed pre-use check" };
-      const [eventId] = await items.insertEvents(outcome.outcome === "fail" ? [check, tagOut] : [check], trx);
+      const [eventId, tagOutId] = await items.insertEvents(outcome.outcome === "fail" ? [check, tagOut] : [check], trx);
       if (stored) await items.insertAttachment({ organisationId: actor.organisationId, itemId: id, eventId, purpose: "damage-photo", ...stored, createdBy: actor.userId }, trx);
       await items.updateItem(actor.organisationId, id, { status, checked: true }, trx);
       await audit({ action: outcome.outcome === "pass" ? "item.check_pass" : "item.check_fail", entity: "item", entityId: id, after: { status } });
+      if (outcome.outcome === "fail") {
+        await queueTagOutMail(trx, { organisationId: actor.organisationId, eventId: tagOutId!, reporterName: actor.name, item: current, defects: outcome.defects, note: input.note?.trim() || null });
+      }
       return { outcome: outcome.outcome, status, defects: outcome.defects };
     }),
   );
-  if (result.outcome === "fail") await notifyOwners(actor, current, result.defects, input.note ?? null);
   return result;
 }
 
@@ -178,19 +177,8 @@ export async function tagOut(actor: Principal, id: string, input: { note: string
       if (stored) await items.insertAttachment({ organisationId: actor.organisationId, itemId: id, eventId, purpose: "damage-photo", ...stored, createdBy: actor.userId }, trx);
       await items.updateItem(actor.organisationId, id, { status }, trx);
       await audit({ action: "item.tagged_out", entity: "item", entityId: id, after: { status, note: input.note } });
+      await queueTagOutMail(trx, { organisationId: actor.organisationId, eventId, reporterName: actor.name, item: current, defects: [], note: input.note });
     }),
-  );
-  await notifyOwners(actor, current, [], input.note);
-}
-
-async function notifyOwners(actor: Principal, item: items.ItemRecord, defects: string[], note: string | null) {
-  const owners = await items.ownersOf(actor.organisationId);
-  await Promise.all(
-    owners.map((o) =>
-      sendMail(
-        damageReportMail({ to: o.email, reporterName: actor.name, itemDescription: describeItem(item), tagCode: item.tagCode, defects, note, link: `${config.APP_URL}/items/${item.id}` }),
-      ).catch((error) => console.error("damage e-mail failed", error)),
-    ),
   );
 }
 

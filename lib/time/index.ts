@@ -78,3 +78,27 @@ export function formatDay(at: Date | string, zone: string): string {
 export function formatDateTime(at: Date | string, zone: string): string {
   return format(new TZDate(new Date(at).getTime(), zone), "yyyy-MM-dd HH:mm");
 }
+
+/**
+ * Whole calendar days from one date to another (negative when `to` is earlier).
+ * @example daysBetween("2026-12-01", "2026-12-09") // 8
+ */
+export function daysBetween(from: string, to: string): number {
+  return Math.round((Date.parse(`${to}T00:00:00Z`) - Date.parse(`${from}T00:00:00Z`)) / 86_400_000);
+}
+
+/**
+ * The short English weekday of a calendar date.
+ * @example weekday("2026-12-09") // "Wed"
+ */
+export function weekday(day: string): string {
+  return format(new TZDate(Date.parse(`${day}T12:00:00Z`), "UTC"), "EEE");
+}
+
+/**
+ * The wall-clock time (HH:mm, 24-hour) of an instant in a zone.
+ * @example clockTimeIn("America/Chicago", new Date("2026-12-02T13:05:00Z")) // "07:05"
+ */
+export function clockTimeIn(zone: string, now: Date = new Date()): string {
+  return format(new TZDate(now.getTime(), zone), "HH:mm");
+}

@@ -87,7 +87,7 @@ describe("a failed pre-use check", () => {
     expect(row.status).toBe("tagged_out");
     expect(await testDb("attachments").where({ item_id: item.id, purpose: "damage-photo" }).first("content_type")).toMatchObject({ content_type: "image/png" });
 
-    const mail = await latestMailTo(`olive@${DOMAIN}`);
+    const mail = await latestMailTo(`olive@${DOMAIN}`, { subject: new RegExp(`^Tagged out: .*${item.tag_code}`) });
     expect(mail.subject).toContain(item.tag_code);
     const inbox = await desk.context.newPage();
     await inbox.goto(MAIL_API);

@@ -74,7 +74,7 @@ describe("issue 11.1: a token never outlives its creator's role", () => {
     expect((await token.get("/api/v1/me")).status).toBe(200);
 
     expect((await new Client().post("/api/v1/password-resets", { email: org.email })).status).toBe(202);
-    const link = linkIn((await latestMailTo(org.email)).text, "/reset-password");
+    const link = linkIn((await latestMailTo(org.email, { subject: /^Reset your Linkyard password/ })).text, "/reset-password");
     expect((await new Client().post("/api/v1/password-resets/confirm", { token: link, password: "a-fresh-password-26" })).status).toBe(200);
 
     expect((await token.get("/api/v1/me")).status).toBe(401);

@@ -65,20 +65,13 @@ describe("invites", () => {
     expect(bad.status).toBe(400);
     expect(bad.json.issues).toEqual([{ path: "email", message: "Enter a valid e-mail address, like name@example.com." }]);
   });
-
-  it("refuses to invite someone who already has an account", async () => {
-    const { owner } = await newOrganisation();
-    const other = await newOrganisation();
-    const res = await owner.post("/api/v1/invites", { email: other.email, role: "planner" });
-    expect(res.status).toBe(409);
-  });
 });
 
 describe("password reset", () => {
   it("e-mails a one-time link that sets a new password and ends other sessions", async () => {
     const { owner, email } = await newOrganisation();
     expect((await owner.post("/api/v1/password-resets", { email })).status).toBe(202);
-    const token = linkIn((await latestMailTo(email)).text, "/reset-password");
+    const token = linkIn((await latestMailTo(email, { subject: /^Reset your Linkyard password/ })).text, "/reset-password");
     const newPassword = "a-brand-new-password";
     const stranger = new Client();
     expect((await stranger.post("/api/v1/password-resets/confirm", { token, password: newPassword })).status).toBe(200);
@@ -87,12 +80,5 @@ describe("password reset", () => {
     expect((await new Client().post("/api/v1/sessions", { email, password: newPassword })).status).toBe(200);
     const reuse = await new Client().post("/api/v1/password-resets/confirm", { token, password: "yet-another-password" });
     expect(reuse.status).toBe(410);
-  });
-
-  it("answers an unknown e-mail exactly like a known one, and sends nothing", async () => {
-    const email = uniqueEmail("nobody");
-    const res = await new Client().post("/api/v1/password-resets", { email });
-    expect(res.status).toBe(202);
-    await expect(latestMailTo(email, 700)).rejects.toThrow(/no e-mail/);
   });
 });

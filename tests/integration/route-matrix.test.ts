@@ -21,6 +21,10 @@ const API: Record<string, Access> = {
   "POST /api/v1/sessions": "public",
   "DELETE /api/v1/sessions": "public",
   "POST /api/v1/signups": "public",
+  "POST /api/v1/signups/confirm": "public",
+  // One-click unsubscribe (RFC 8058): the signed token is the authority, no session.
+  "GET /api/v1/unsubscribe/[token]": "public",
+  "POST /api/v1/unsubscribe/[token]": "public",
   "GET /api/v1/me": ALL,
   "GET /api/v1/people": OWNER,
   "PATCH /api/v1/people/[id]": OWNER,
@@ -124,6 +128,7 @@ const PAGES: Record<string, Access> = {
   "/trailers": ALL,
   "/trailers/new": EDITORS,
   "/trailers/[id]": ALL,
+  "/preferences": ALL,
 };
 
 const ACTIONS: Record<string, Access> = {
@@ -133,6 +138,9 @@ const ACTIONS: Record<string, Access> = {
   "app/(auth)/actions.ts#requestResetAction": "public",
   "app/(auth)/actions.ts#resetPasswordAction": "public",
   "app/(auth)/actions.ts#signOutAction": "public",
+  "app/(auth)/actions.ts#confirmSignUpAction": "public",
+  "app/(auth)/actions.ts#unsubscribeAction": "public",
+  "app/(app)/preferences/actions.ts#savePreferencesAction": ALL,
   "app/(app)/people/actions.ts#inviteAction": OWNER,
   "app/(app)/people/actions.ts#updatePersonAction": OWNER,
   "app/(app)/people/actions.ts#withdrawInviteAction": OWNER,
@@ -141,6 +149,8 @@ const ACTIONS: Record<string, Access> = {
   "app/(app)/settings/actions.ts#revokeTokenAction": OWNER,
   "app/(app)/settings/actions.ts#saveIntervalsAction": OWNER,
   "app/(app)/settings/actions.ts#saveUnitsAction": OWNER,
+  "app/(app)/settings/actions.ts#saveDigestTimeAction": OWNER,
+  "app/(app)/settings/actions.ts#resendMailAction": OWNER,
   "app/(app)/stock/actions.ts#createItemAction": EDITORS,
   "app/(app)/stock/actions.ts#editItemAction": EDITORS,
   "app/(app)/items/[id]/actions.ts#itemEventAction": ALL,
@@ -325,6 +335,18 @@ describe("another organisation", () => {
     expect(text).toContain("No such person in your organisation.");
     const row = await testDb("users").where({ id: victim.plannerId }).first("role");
     expect(row.role).toBe("planner");
+  });
+});
+
+describe("another organisation's e-mail", () => {
+  it("cannot be sent again from outside, and stays failed", async () => {
+    const [row] = await testDb("mail_messages")
+      .insert({ organisation_id: victim.organisationId, kind: "invite", idempotency_key: `matrix-failed-${Date.now()}`, to_address: "x@linkyard-test.example", subject: "Failed", body: "b", status: "failed", failed_at: new Date() })
+      .returning("id");
+    const id = discoveredActions().get("app/(app)/settings/actions.ts#resendMailAction")!;
+    expect(await callAction(outsider, id, { messageId: row.id })).toContain("No failed e-mail with that id.");
+    expect((await testDb("mail_messages").where({ id: row.id }).first("status")).status).toBe("failed");
+    expect((await outsider.get("/settings")).text).not.toContain(row.id);
   });
 });
 

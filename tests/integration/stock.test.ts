@@ -151,7 +151,7 @@ describe("pre-use checks and tag-outs", () => {
     expect(res.json.item.status).toBe("tagged_out");
     const types = (await hand.get(`/api/v1/items/${item.id}/events`)).json.data.map((e: { type: string }) => e.type);
     expect(types.slice(0, 2)).toEqual(["tag_out", "check"]);
-    const mail = await latestMailTo(org.email);
+    const mail = await latestMailTo(org.email, { subject: new RegExp(`^Tagged out: .*${item.tagCode}`) });
     expect(mail.subject).toBe(`Tagged out: Chain, grade 70, 3/8 in (${item.tagCode})`);
     expect(mail.text).toContain("End hooks opened, bent or twisted");
     expect(mail.text).toContain("Hook opened at one end");

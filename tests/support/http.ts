@@ -48,33 +48,60 @@ export function uniqueEmail(prefix = "t"): string {
 
 export const TEST_PASSWORD = "correct-horse-battery";
 
+/**
+ * Signs up as a person does: the form's answer, then the link in the e-mail (the job
+ * worker sends it), which makes the company and signs its owner in. Returns that client.
+ */
+export async function signUpWithLink(input: { organisationName: string; name: string; email: string; password: string; timeZone?: string }): Promise<Client> {
+  const res = await new Client().post("/api/v1/signups", input);
+  if (res.status !== 202) throw new Error(`sign-up failed: ${res.status} ${res.text}`);
+  const token = linkIn((await latestMailTo(input.email, { subject: /^Confirm your e-mail/ })).text, "/sign-up/confirm");
+  const client = new Client();
+  const confirmed = await client.post("/api/v1/signups/confirm", { token });
+  if (confirmed.status !== 201) throw new Error(`sign-up confirmation failed: ${confirmed.status} ${confirmed.text}`);
+  return client;
+}
+
 /** A new organisation with its owner signed in. */
 export async function newOrganisation(name = "Test Outfit") {
-  const owner = new Client();
   const email = uniqueEmail("owner");
-  const res = await owner.post("/api/v1/signups", { organisationName: name, name: "Owner Person", email, password: TEST_PASSWORD });
-  if (res.status !== 201) throw new Error(`sign-up failed: ${res.status} ${res.text}`);
+  const owner = await signUpWithLink({ organisationName: name, name: "Owner Person", email, password: TEST_PASSWORD });
   const me = await owner.get("/api/v1/me");
   return { owner, email, organisationId: me.json.organisation.id as string, userId: me.json.id as string };
 }
 
-interface MailItem {
+export interface MailItem {
+  id: string;
   to: { address: string }[];
   subject: string;
   text: string;
 }
 
-/** Waits for the newest e-mail to an address in the mail fake, and returns it. */
-export async function latestMailTo(address: string, timeoutMs = 5000): Promise<MailItem> {
+/** Every e-mail to an address in the mail fake, oldest first. */
+export async function mailsTo(address: string): Promise<MailItem[]> {
+  const mails = (await (await fetch(`${MAIL_API}/api/email`)).json()) as MailItem[];
+  return mails.filter((m) => m.to.some((t) => t.address.toLowerCase() === address.toLowerCase()));
+}
+
+/**
+ * Waits for the newest e-mail to an address in the mail fake (one whose subject matches,
+ * when given: an owner's inbox also holds the sign-up e-mail, digests…), and returns it.
+ * E-mail goes through the job queue, so it may arrive a moment after the request answered.
+ */
+export async function latestMailTo(address: string, options: number | { timeoutMs?: number; subject?: RegExp } = {}): Promise<MailItem> {
+  const { timeoutMs = 10_000, subject } = typeof options === "number" ? { timeoutMs: options } : options;
   const until = Date.now() + timeoutMs;
   while (Date.now() < until) {
-    const res = await fetch(`${MAIL_API}/api/email`);
-    const mails = (await res.json()) as MailItem[];
-    const mine = mails.filter((m) => m.to.some((t) => t.address.toLowerCase() === address.toLowerCase()));
+    const mine = (await mailsTo(address)).filter((m) => !subject || subject.test(m.subject));
     if (mine.length) return mine[mine.length - 1];
     await new Promise((r) => setTimeout(r, 100));
   }
-  throw new Error(`no e-mail to ${address}`);
+  throw new Error(`no e-mail to ${address}${subject ? ` with a subject like ${subject}` : ""}`);
+}
+
+/** The raw message as the mail fake received it, headers included (its JSON leaves some out). */
+export async function mailSource(id: string): Promise<string> {
+  return (await fetch(`${MAIL_API}/api/email/${id}/source`)).text();
 }
 
 export function linkIn(text: string, path: string): string {

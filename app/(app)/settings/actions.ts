@@ -7,6 +7,7 @@ import { flagField, nameField, roleField, timeZoneField } from "@/lib/auth/schem
 import { UNIT_SYSTEM_LABELS } from "@/lib/kits/display";
 import { setUnitsPreference } from "@/lib/kits/fleet-service";
 import { unitsSchema } from "@/lib/kits/schemas";
+import { resendFailedMail, saveDigestTime } from "@/lib/mail/service";
 import { saveInspectionIntervals, saveOrganisation } from "@/lib/organisations/service";
 import { ITEM_KINDS, KIND_LABELS, type ItemKind } from "@/lib/stock/labels";
 
@@ -65,4 +66,25 @@ export const saveUnitsAction = formAction("settings.manage", unitsSchema, async 
   await setUnitsPreference(principal, units);
   revalidatePath("/", "layout");
   return { ok: true, message: `Figures are now shown in ${UNIT_SYSTEM_LABELS[units]} first.` };
+});
+
+/** HH:mm, 24-hour (a browser's time box may add seconds, which are dropped). */
+const digestTimeField = z
+  .string({ error: "Enter a time, like 06:00." })
+  .trim()
+  .regex(/^([01]\d|2[0-3]):[0-5]\d(:[0-5]\d)?$/, "Enter a time between 00:00 and 23:59, like 06:00.")
+  .transform((v) => v.slice(0, 5));
+
+/** When the daily digest goes out, on the organisation's clock. */
+export const saveDigestTimeAction = formAction("settings.manage", z.object({ digestTime: digestTimeField }), async ({ digestTime }, principal) => {
+  await saveDigestTime(principal, digestTime);
+  revalidatePath("/settings");
+  return { ok: true, message: `The daily digest goes out at ${digestTime} from tomorrow, or today if that time is still to come and today's has not gone.` };
+});
+
+/** A failed e-mail back to the queue. */
+export const resendMailAction = formAction("settings.manage", z.object({ messageId: z.uuid("That e-mail id is not valid.") }), async ({ messageId }, principal) => {
+  await resendFailedMail(principal, messageId);
+  revalidatePath("/settings");
+  return { ok: true, message: "Queued again: it goes out as soon as the mail server takes it." };
 });

@@ -1,24 +1,27 @@
 import type { Metadata } from "next";
 import { CreateTokenForm, IntervalsForm, OrganisationForm, RevokeTokenButton } from "@/components/settings/settings-forms";
+import { DigestTimeForm, ResendMailButton } from "@/components/settings/mail-settings";
 import { UnitsForm } from "@/components/settings/units-form";
 import { getFleetSettings } from "@/db/fleet";
 import { listApiTokens } from "@/db/api-tokens";
 import { getOrganisation } from "@/db/organisations";
+import { failedMail } from "@/lib/mail/service";
 import { inspectionIntervals } from "@/lib/organisations/service";
 import { ROLE_LABELS, type Role } from "@/lib/auth/roles";
 import { requirePage } from "@/lib/auth/session";
-import { formatDay, timeZones } from "@/lib/time";
-import { createTokenAction, revokeTokenAction, saveIntervalsAction, saveOrganisationAction, saveUnitsAction } from "./actions";
+import { formatDateTime, formatDay, timeZones } from "@/lib/time";
+import { createTokenAction, resendMailAction, revokeTokenAction, saveDigestTimeAction, saveIntervalsAction, saveOrganisationAction, saveUnitsAction } from "./actions";
 
 export const metadata: Metadata = { title: "Settings" };
 
 export default async function SettingsPage() {
   const principal = await requirePage("settings.manage");
-  const [organisation, tokens, intervals, fleet] = await Promise.all([
+  const [organisation, tokens, intervals, fleet, failed] = await Promise.all([
     getOrganisation(principal.organisationId),
     listApiTokens(principal.organisationId),
     inspectionIntervals(principal.organisationId),
     getFleetSettings(principal.organisationId),
+    failedMail(principal),
   ]);
   return (
     <div className="flex max-w-3xl flex-col gap-6">
@@ -26,6 +29,35 @@ export default async function SettingsPage() {
       <OrganisationForm name={organisation!.name} publicTagView={organisation!.publicTagView} timeZone={organisation!.timeZone} timeZones={timeZones()} action={saveOrganisationAction} />
       <UnitsForm units={fleet.units} action={saveUnitsAction} />
       <IntervalsForm intervals={intervals} action={saveIntervalsAction} />
+      <section aria-labelledby="mail-heading" className="flex flex-col gap-3 rounded-xl border-2 border-ink-soft p-4">
+        <h2 id="mail-heading" className="text-xl font-bold">E-mail</h2>
+        <DigestTimeForm digestTime={organisation!.digestTime} timeZone={organisation!.timeZone} action={saveDigestTimeAction} />
+        <h3 className="text-lg font-bold">E-mail that could not be sent</h3>
+        {failed.length ? (
+          <>
+            <p className="text-base">
+              The mail server refused these or could not be reached, and Linkyard stopped trying after several hours. Check the address, then send again.
+            </p>
+            <ul className="flex flex-col gap-2" aria-label="E-mail that could not be sent">
+              {failed.map((m) => (
+                <li key={m.id} className="flex flex-col gap-2 rounded-lg border-2 border-stop p-3">
+                  <span className="text-lg">
+                    <span aria-hidden="true">✕ </span>
+                    <strong>Not sent</strong> to {m.to}: {m.subject}
+                  </span>
+                  <span className="text-sm text-ink-soft">
+                    Written {formatDateTime(m.createdAt, organisation!.timeZone)}, gave up {formatDateTime(m.failedAt, organisation!.timeZone)} after {m.attempts} attempts
+                    {m.lastError ? `. Last answer: ${m.lastError}` : ""}
+                  </span>
+                  <ResendMailButton messageId={m.id} to={m.to} action={resendMailAction} />
+                </li>
+              ))}
+            </ul>
+          </>
+        ) : (
+          <p className="text-base">None: every e-mail went out or is waiting its turn.</p>
+        )}
+      </section>
       <section aria-labelledby="tokens-heading" className="flex flex-col gap-3 rounded-xl border-2 border-ink-soft p-4">
         <h2 id="tokens-heading" className="text-xl font-bold">API tokens</h2>
         <p className="text-base">

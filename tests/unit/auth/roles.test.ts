@@ -18,6 +18,7 @@ const EXPECTED: Record<Permission, Role[]> = {
   "securement.check": ["owner", "planner", "yard_hand"],
   "reports.view": ["owner", "planner"],
   "audit.view": ["owner"],
+  "mail.preferences": ["owner", "planner", "yard_hand"],
 };
 
 describe("can", () => {

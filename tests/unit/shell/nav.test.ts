@@ -3,11 +3,11 @@ import { barFor, navFor } from "@/lib/shell/nav";
 
 describe("navFor", () => {
   it("shows a yard hand only what a yard hand may open", () => {
-    expect(navFor({ role: "yard_hand", designated: false }).map((e) => e.href)).toEqual(["/", "/scan", "/stock", "/kits", "/check", "/machines", "/trailers", "/ratings"]);
+    expect(navFor({ role: "yard_hand", designated: false }).map((e) => e.href)).toEqual(["/", "/scan", "/stock", "/kits", "/check", "/machines", "/trailers", "/ratings", "/preferences"]);
   });
   it("shows an owner the people, audit and settings pages", () => {
     expect(navFor({ role: "owner", designated: false }).map((e) => e.href)).toEqual([
-      "/", "/scan", "/stock", "/kits", "/check", "/machines", "/trailers", "/ratings", "/people", "/audit", "/settings",
+      "/", "/scan", "/stock", "/kits", "/check", "/machines", "/trailers", "/ratings", "/people", "/audit", "/settings", "/preferences",
     ]);
   });
   it("keeps people and settings from a planner", () => {

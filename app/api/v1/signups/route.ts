@@ -1,11 +1,13 @@
-import { signUp } from "@/lib/auth/accounts";
+import { requestSignUp, signUpSentMessage } from "@/lib/auth/accounts";
 import { signUpSchema } from "@/lib/auth/schemas";
-import { startSession } from "@/lib/auth/session";
-import { jsonWithCookie } from "@/lib/http/cookies";
 import { publicRoute } from "@/lib/http/route";
 
-/** A new company with its first owner, signed in. */
+/**
+ * A new company with its first owner, once the e-mailed link is used (POST
+ * /api/v1/signups/confirm). Always 202 with the same words, whether or not the address has
+ * an account: the e-mail tells which.
+ */
 export const POST = publicRoute({ body: signUpSchema }, async ({ body }) => {
-  const userId = await signUp(body);
-  return jsonWithCookie({ ok: true, userId }, await startSession(userId), 201);
+  await requestSignUp(body);
+  return Response.json({ ok: true, message: signUpSentMessage(body.email) }, { status: 202 });
 });
