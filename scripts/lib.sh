@@ -166,7 +166,8 @@ start_worker() {
   (cd "$ROOT"; nohup node --conditions=react-server --import tsx "$WORKER_SCRIPT" >>"$DATA/$name.log" 2>&1 & echo $! >"$DATA/$name.pid")
   for _ in $(seq 1 150); do
     if grep -q "worker ready" "$DATA/$name.log"; then return; fi
-    our_process "$DATA/$name.pid" "$WORKER_SCRIPT" || start_failed "The job worker" "$DATA/$name.log"
+    # Alive is enough here: just forked, its command line may not name the script yet.
+    kill -0 "$(cat "$DATA/$name.pid")" 2>/dev/null || start_failed "The job worker" "$DATA/$name.log"
     sleep 0.2
   done
   start_failed "The job worker" "$DATA/$name.log"

@@ -70,5 +70,5 @@ export const signOutAction = publicFormAction(z.object({}), async () => {
 /** The button of an unsubscribe link's page: no sign-in, the signed link is the authority. */
 export const unsubscribeAction = publicFormAction(z.object({ token: z.string().min(1, "This unsubscribe link is incomplete.") }), async ({ token }) => {
   const { kind, email } = await unsubscribe(token);
-  return { ok: true, message: `Done: Linkyard sends no more ${REMINDER_LABELS[kind].short} to ${email}. Your other e-mails stay as they were.` };
+  return { ok: true, message: `Done: Linkyard stops sending ${REMINDER_LABELS[kind].short} to ${email}. Your other e-mails stay as they were.` };
 });

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { addDays, canonicalTimeZone, formatDateTime, formatDay, isTimeZone, timeZones, todayIn } from "@/lib/time";
+import { addDays, canonicalTimeZone, clockTimeIn, daysBetween, formatDateTime, formatDay, isTimeZone, timeZones, todayIn, weekday } from "@/lib/time";
 
 describe("todayIn", () => {
   it("a US yard (America/Chicago) at 7 pm local on 2026-12-01 sees 2026-12-01, not 12-02", () => {
@@ -59,5 +59,20 @@ describe("time zone names", () => {
     expect(kolkata).not.toBeNull();
     expect(timeZones()).toContain(kolkata);
     expect(canonicalTimeZone("Etc/UTC")).toBe("UTC");
+  });
+});
+
+describe("daysBetween, weekday and clockTimeIn", () => {
+  it("counts calendar days across a month end and a daylight-saving change", () => {
+    expect(daysBetween("2026-11-28", "2026-12-03")).toBe(5);
+    expect(daysBetween("2026-03-07", "2026-03-09")).toBe(2); // US clocks go forward on the 8th
+    expect(daysBetween("2026-12-09", "2026-12-01")).toBe(-8);
+  });
+  it("names the weekday of a calendar date", () => {
+    expect(["2026-12-07", "2026-12-13"].map(weekday)).toEqual(["Mon", "Sun"]);
+  });
+  it("gives the wall-clock time of an instant in a zone", () => {
+    expect(clockTimeIn("America/Chicago", new Date("2026-07-02T13:05:00Z"))).toBe("08:05"); // daylight time
+    expect(clockTimeIn("UTC", new Date("2026-07-02T00:00:00Z"))).toBe("00:00");
   });
 });

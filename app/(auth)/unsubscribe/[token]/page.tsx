@@ -28,7 +28,7 @@ export default async function UnsubscribePage({ params }: { params: Promise<{ to
   const label = REMINDER_LABELS[link.kind];
   return (
     <>
-      <h1 className="text-3xl font-bold">Stop {label.short}?</h1>
+      <h1 className="text-3xl font-bold">{`Stop ${label.short}?`}</h1>
       <p className="text-lg">
         For <strong>{link.email}</strong>: {label.about}
       </p>

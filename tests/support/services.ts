@@ -1,0 +1,40 @@
+import { execFileSync } from "node:child_process";
+import path from "node:path";
+import { QUEUES, sendJob, type QueueName } from "../../db/jobs";
+import { testDb } from "./db";
+
+// The project's own local services, stopped and started through scripts/lib.sh's functions
+// (the same the scripts use, with the ports and environment of this test run), for the
+// tests of what happens when the mail server or the job worker goes away.
+
+const ROOT = path.resolve(__dirname, "../..");
+
+function lib(command: string): void {
+  execFileSync("bash", ["-c", `source scripts/lib.sh && ${command}`], { cwd: ROOT, env: process.env, stdio: "pipe", timeout: 60_000 });
+}
+
+export const stopMail = () => lib("stop_mail");
+export const startMail = () => lib("start_mail");
+/** The worker npm test started is "test-worker"; others may run beside it under other names. */
+export const stopWorker = (name = "test-worker") => lib(`stop_worker ${name}`);
+export const startWorker = (name = "test-worker") => lib(`start_worker ${name}`);
+
+/** Polls until `probe` answers something, or fails after the timeout. */
+export async function waitFor<T>(what: string, probe: () => Promise<T | undefined | null | false>, timeoutMs = 30_000): Promise<T> {
+  const until = Date.now() + timeoutMs;
+  while (Date.now() < until) {
+    const value = await probe();
+    if (value) return value;
+    await new Promise((r) => setTimeout(r, 200));
+  }
+  throw new Error(`timed out waiting for ${what}`);
+}
+
+export const sleep = (ms: number) => new Promise((r) => setTimeout(r, ms));
+
+/** Sends a job as the app does, in a committed transaction of its own. */
+export async function sendTestJob(queue: QueueName, data: object = {}): Promise<void> {
+  await testDb.transaction((trx) => sendJob(trx, queue, data));
+}
+
+export { QUEUES };
