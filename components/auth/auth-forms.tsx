@@ -31,6 +31,15 @@ export function SignUpForm({ action: signUp }: { action: FormAction }) {
   // The company's time zone starts as this browser's (it can be changed in Settings); the
   // server renders it empty and the browser fills it in.
   const timeZone = useSyncExternalStore(noChanges, browserTimeZone, () => "");
+  if (state.ok) {
+    // Sent: the e-mail's link finishes the sign-up. The same answer for any address.
+    return (
+      <div className="flex flex-col gap-4">
+        <FormAlert state={state} />
+        <Link className="text-lg underline" href="/sign-in">Go to sign in</Link>
+      </div>
+    );
+  }
   return (
     <form action={action} className="flex flex-col gap-2" noValidate>
       <FormAlert state={state} />

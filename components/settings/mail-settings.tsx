@@ -30,7 +30,7 @@ export function ResendMailButton({ messageId, to, action: resend }: { messageId:
     <form action={action}>
       <input type="hidden" name="messageId" value={messageId} />
       {!state.ok && (
-        <SubmitButton variant="secondary" pendingLabel="Queueing…" aria-label={`Send the e-mail to ${to} again`}>
+        <SubmitButton variant="secondary" pendingLabel="Queueing…" aria-label={`Send again to ${to}`}>
           Send again
         </SubmitButton>
       )}

@@ -99,6 +99,11 @@ export async function latestMailTo(address: string, options: number | { timeoutM
   throw new Error(`no e-mail to ${address}${subject ? ` with a subject like ${subject}` : ""}`);
 }
 
+/** Empties an address's inbox in the mail fake (a demo person's inbox outlives the test database). */
+export async function deleteMailTo(address: string): Promise<void> {
+  for (const m of await mailsTo(address)) await fetch(`${MAIL_API}/api/email/${m.id}`, { method: "DELETE" });
+}
+
 /** The raw message as the mail fake received it, headers included (its JSON leaves some out). */
 export async function mailSource(id: string): Promise<string> {
   return (await fetch(`${MAIL_API}/api/email/${id}/source`)).text();
