@@ -55,3 +55,8 @@ export async function lockSignUpRequest(tokenHash: string, trx: Knex): Promise<S
 export async function markSignUpRequestUsed(id: string, trx: Knex): Promise<void> {
   await trx("signup_requests").where({ id }).update({ used_at: trx.fn.now() });
 }
+
+/** Sign-ups never finished, expired before `before`: their password hashes go. */
+export async function deleteExpiredSignUpRequests(before: Date): Promise<number> {
+  return db("signup_requests").whereNull("used_at").where("expires_at", "<", before).delete();
+}

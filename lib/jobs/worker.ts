@@ -3,6 +3,7 @@ import pg from "pg";
 import PgBoss from "pg-boss";
 import { db } from "@/db";
 import { JOB_CHANNEL, JOB_SCHEMA, QUEUES } from "@/db/jobs";
+import { deleteExpiredSignUpRequests } from "@/db/signups";
 import { sendPasswordReset } from "@/lib/auth/accounts";
 import { config } from "@/lib/config";
 import { runDueDays } from "@/lib/reminders/daily";
@@ -62,6 +63,8 @@ export async function startWorker(log: (line: string) => void = console.log): Pr
   await work<{ email: string }>(QUEUES.resetRequest, (job) => sendPasswordReset(job.id, job.data.email));
   await work(QUEUES.dailyTick, async () => {
     for (const run of await runDueDays()) log(`daily reminders queued: organisation ${run.organisationId}, ${run.day}`);
+    // Sign-ups never finished keep a password hash: gone a day after their link expired.
+    await deleteExpiredSignUpRequests(new Date(Date.now() - 86_400_000));
   });
 
   // Every minute; and once now, so that a day missed while no worker ran is caught up at once.
