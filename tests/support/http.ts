@@ -1,15 +1,25 @@
 // A small HTTP client for integration tests: keeps a cookie like a browser, sends an
 // Origin header on mutations like a browser, and reads the mail fake's inbox.
+// scripts/test.sh serves the app with TRUSTED_PROXIES=127.0.0.1, so the tests stand in for a
+// reverse proxy: each Client is a client of its own address (X-Forwarded-For), and one
+// test's sign-ups, resets or failed sign-ins never count against another's limits.
 
 export const BASE_URL = process.env.LINKYARD_BASE_URL ?? "http://127.0.0.1:3100";
 export const MAIL_API = process.env.MAIL_API ?? "http://127.0.0.1:54380";
 
+/** A random address in IPv6's documentation range (RFC 3849): one per Client. */
+export function testAddress(): string {
+  const part = () => Math.floor(Math.random() * 0x10000).toString(16);
+  return `2001:db8:${part()}:${part()}:${part()}:${part()}:${part()}:${part()}`;
+}
+
 export class Client {
   cookie = "";
+  readonly address = testAddress();
   constructor(readonly bearer?: string) {}
 
   async request(method: string, path: string, body?: unknown, headers: Record<string, string> = {}) {
-    const h: Record<string, string> = { ...headers };
+    const h: Record<string, string> = { "x-forwarded-for": this.address, ...headers };
     if (this.cookie) h.cookie = this.cookie;
     if (this.bearer) h.authorization = `Bearer ${this.bearer}`;
     if (method !== "GET" && method !== "HEAD" && !("origin" in h)) h.origin = BASE_URL;
