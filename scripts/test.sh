@@ -38,10 +38,13 @@ knex_cli seed:run >/dev/null
 
 build_if_stale
 
+# The tests stand in for a reverse proxy on 127.0.0.1 (their clients report addresses of
+# their own in X-Forwarded-For); any other loopback address is a direct, untrusted caller.
+export TRUSTED_PROXIES="127.0.0.1"
 say "serving the build on $APP_URL for the tests"
-stop_pid_file "$DATA/test-app.pid" next
-(cd "$ROOT"; nohup node_modules/.bin/next start -H 127.0.0.1 -p "$TEST_PORT" >"$DATA/test-app.log" 2>&1 & echo $! >"$DATA/test-app.pid")
-trap 'stop_pid_file "$DATA/test-app.pid" next; stop_worker test-worker' EXIT
+stop_pid_file "$DATA/test-app.pid" server.mts
+(cd "$ROOT"; nohup node --import tsx server.mts -H 127.0.0.1 -p "$TEST_PORT" >"$DATA/test-app.log" 2>&1 & echo $! >"$DATA/test-app.pid")
+trap 'stop_pid_file "$DATA/test-app.pid" server.mts; stop_worker test-worker' EXIT
 start_worker test-worker
 wait_for_http "$APP_URL/api/health" "$DATA/test-app.log"
 

@@ -3,7 +3,7 @@ import { TAG_MISS_LIMIT } from "@/lib/tags/lookups";
 import { newTagCode } from "@/lib/tags/code";
 import { config } from "@/lib/config";
 import { countRows, testDb } from "../support/db";
-import { newOrganisation, uniqueEmail } from "../support/http";
+import { newOrganisation, testAddress, uniqueEmail } from "../support/http";
 import { freshLoopback, requestFrom } from "../support/peer";
 
 // Who is calling, by network address. scripts/test.sh serves the app with TRUSTED_PROXIES
@@ -65,12 +65,13 @@ describe("issue 11.2: X-Forwarded-For is trusted only from a configured proxy", 
 
   it("behind the trusted proxy, the right-most address the proxy did not add is the client", async () => {
     // The proxy appends the address it saw; what the client wrote in front of it is not believed.
-    await requestFrom(PROXY, "GET", `/t/${newTagCode()}`, { headers: { "x-forwarded-for": "203.0.113.66, 198.51.100.77" } });
-    expect(await countRows("tag_lookups", { ip: "198.51.100.77", found: false })).toBe(1);
-    expect(await countRows("tag_lookups", { ip: "203.0.113.66" })).toBe(0);
+    const [written, seen, behindTwo] = [testAddress(), testAddress(), testAddress()];
+    await requestFrom(PROXY, "GET", `/t/${newTagCode()}`, { headers: { "x-forwarded-for": `${written}, ${seen}` } });
+    expect(await countRows("tag_lookups", { ip: seen, found: false })).toBe(1);
+    expect(await countRows("tag_lookups", { ip: written })).toBe(0);
     // A trusted hop in the chain is skipped: the address before it is the client.
-    await requestFrom(PROXY, "GET", `/t/${newTagCode()}`, { headers: { "x-forwarded-for": `198.51.100.78, ${PROXY}` } });
-    expect(await countRows("tag_lookups", { ip: "198.51.100.78", found: false })).toBe(1);
+    await requestFrom(PROXY, "GET", `/t/${newTagCode()}`, { headers: { "x-forwarded-for": `${behindTwo}, ${PROXY}` } });
+    expect(await countRows("tag_lookups", { ip: behindTwo, found: false })).toBe(1);
   });
 
   it("the trusted proxy itself is the client when it forwards no address", async () => {

@@ -12,7 +12,7 @@ const BASE = `http://127.0.0.1:${PORT}`;
 let server: ChildProcess | undefined;
 
 async function startServer(): Promise<void> {
-  server = spawn(path.join(ROOT, "node_modules/.bin/next"), ["start", "-H", "127.0.0.1", "-p", String(PORT)], {
+  server = spawn(process.execPath, ["--import", "tsx", "server.mts", "-H", "127.0.0.1", "-p", String(PORT)], {
     cwd: ROOT,
     env: { ...process.env, APP_URL: BASE },
     stdio: "ignore",

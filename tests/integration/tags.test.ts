@@ -1,5 +1,5 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { addMember, BASE_URL, Client, newOrganisation } from "../support/http";
+import { addMember, BASE_URL, Client, newOrganisation, testAddress } from "../support/http";
 import { countRows, testDb } from "../support/db";
 import { newTagCode } from "@/lib/tags/code";
 import { TAG_MISS_LIMIT } from "@/lib/tags/lookups";
@@ -7,14 +7,13 @@ import { TAG_MISS_LIMIT } from "@/lib/tags/lookups";
 // Tag codes through the API, the tag resolver (/t/{code}) with and without a session, the
 // public tag view, its rate limit, and the printable tag sheet.
 
-let ipCounter = 0;
 /**
  * A fresh client address per test, so that one test's misses never limit another. The test
  * server trusts 127.0.0.1 as its reverse proxy (scripts/test.sh), so the address the tests
  * put in X-Forwarded-For is the one a proxy would report; a direct caller's header is not
  * believed (forwarded.test.ts).
  */
-const freshIp = () => `198.51.100.${++ipCounter}`;
+const freshIp = () => testAddress();
 
 async function insertItem(organisationId: string, extra: Record<string, unknown> = {}) {
   const tagCode = newTagCode();
