@@ -20,7 +20,7 @@ import { freshTagCodes } from "@/lib/stock/tag-codes";
 import { removeStored, storeFromDisk } from "@/lib/storage/files";
 import { emptySummary, importBody, type ImportBody } from "./answers";
 import { csvLine } from "./csv-write";
-import { detectEncoding, ENCODING_WORDS, fileRefusal, MAX_IMPORT_BYTES } from "./file-check";
+import { detectFileEncoding, ENCODING_WORDS, fileRefusal, MAX_IMPORT_BYTES } from "./file-check";
 import { commitRefusal, runImport, type ImportStore, type PreparedCreate, type PreparedUpdate } from "./pipeline";
 import { openCsv } from "./source";
 
@@ -65,7 +65,7 @@ export async function importStock(actor: Principal, request: ImportRequest): Pro
   const refusal = fileRefusal(file.head, file.tooLarge ? MAX_IMPORT_BYTES + 1 : file.size);
   if (refusal) throw new AppError(refusal.status, refusal.message, [{ path: "file", message: refusal.message }]);
 
-  const encoding = detectEncoding(file.head);
+  const encoding = await detectFileEncoding(createReadStream(file.path, { highWaterMark: 64 * 1024 }));
   const read = { bytes: 0 };
   const csv = await openCsv(counted(createReadStream(file.path, { highWaterMark: 64 * 1024 }), read), encoding);
   const common = { fileName: file.name, encoding: ENCODING_WORDS[encoding], dryRun: request.dryRun, validOnly: request.validOnly };

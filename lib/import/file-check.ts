@@ -51,14 +51,44 @@ export function fileRefusal(head: Uint8Array, size: number, maxBytes = MAX_IMPOR
 }
 
 /**
- * The text encoding of a file from its first bytes: a byte-order mark decides; without one,
- * UTF-8 when the bytes are valid UTF-8, else Windows-1252 (what older spreadsheets write).
+ * The text encoding of some bytes: a byte-order mark decides; without one, UTF-8 when the
+ * bytes are valid UTF-8, else Windows-1252 (what older spreadsheets write). Given a file's
+ * first bytes only, it cannot see an accent further on: a whole file goes through
+ * {@link detectFileEncoding}.
  * @example detectEncoding(new Uint8Array([0xef, 0xbb, 0xbf, 0x41])) // "utf-8"
  */
 export function detectEncoding(head: Uint8Array): TextEncoding {
   if (head[0] === 0xff && head[1] === 0xfe) return "utf-16le";
   if (head[0] === 0xfe && head[1] === 0xff) return "utf-16be";
   return isUtf8(head) ? "utf-8" : "windows-1252";
+}
+
+/**
+ * The text encoding of a whole file, read as a stream: a byte-order mark decides; without
+ * one, the file is UTF-8 only if every byte of it is valid UTF-8 (the platform's strict
+ * decoder checks it, chunk by chunk, so memory holds one chunk), else Windows-1252. A file
+ * whose first accented letter is on line 5,000 is judged on that letter too.
+ * @example await detectFileEncoding([new TextEncoder().encode("Kind\nchain\n"), new Uint8Array([0xe9])]) // "windows-1252"
+ */
+export async function detectFileEncoding(chunks: AsyncIterable<Uint8Array> | Iterable<Uint8Array>): Promise<TextEncoding> {
+  const strict = new TextDecoder("utf-8", { fatal: true });
+  let head: Uint8Array | null = null;
+  try {
+    for await (const chunk of chunks) {
+      if (!head) {
+        head = chunk;
+        if (head[0] === 0xef && head[1] === 0xbb && head[2] === 0xbf) return "utf-8"; // by its mark
+        const bom = detectEncoding(head);
+        if (bom !== "utf-8" && bom !== "windows-1252") return bom; // UTF-16 by its mark
+      }
+      strict.decode(chunk, { stream: true });
+    }
+    strict.decode(); // a sequence cut off at the end of the file is not UTF-8 either
+    return "utf-8";
+  } catch (error) {
+    if (error instanceof TypeError) return "windows-1252";
+    throw error;
+  }
 }
 
 /** Valid UTF-8, allowing a sequence cut off at the very end (the head is a slice). */

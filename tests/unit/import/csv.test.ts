@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { MISPLACED_QUOTE, UNCLOSED_QUOTE, readRecords } from "@/lib/import/csv";
 import { detectDelimiter } from "@/lib/import/delimiter";
-import { detectEncoding, fileRefusal } from "@/lib/import/file-check";
+import { detectEncoding, detectFileEncoding, fileRefusal } from "@/lib/import/file-check";
 import { openCsv } from "@/lib/import/source";
 import { decodeText } from "@/lib/import/text";
 import { chunksOf, records } from "./support";
@@ -87,6 +87,28 @@ describe("encodings", () => {
     let text = "";
     for await (const t of decodeText(chunksOf(latin, 4) as AsyncIterable<Uint8Array>, "windows-1252")) text += t;
     expect(text).toBe("Kind,Ends\nchain,élingue\n");
+  });
+});
+
+describe("issue 11.12: the encoding is decided on the whole file (detectFileEncoding)", () => {
+  const plain = Buffer.from("Kind,Grade,Size,Serial\n" + Array.from({ length: 60 }, (_, i) => `chain,70,3/8,PLAIN-${i}\n`).join(""));
+
+  it("finds Windows-1252 by an accent past byte 1,000, in any chunking", async () => {
+    const latin = new Uint8Array([...plain, ...Buffer.from("chain,70,3/8,LOT-Cr"), 0xe9, ...Buffer.from("cy\n")]);
+    expect(latin.indexOf(0xe9)).toBeGreaterThan(1000);
+    expect(detectEncoding(latin.subarray(0, 64))).toBe("utf-8"); // what the first bytes alone said
+    for (const size of [64, 1000, 4096]) expect(await detectFileEncoding(chunksOf(latin, size) as AsyncIterable<Uint8Array>), `chunks of ${size}`).toBe("windows-1252");
+  });
+
+  it("keeps UTF-8 whose characters are split between chunks, and refuses one cut off at the end", async () => {
+    const utf8 = new Uint8Array([...plain, ...Buffer.from("chain,70,3/8,LOT-Crécy-€\n")]);
+    for (const size of [1, 3, 7, 4096]) expect(await detectFileEncoding(chunksOf(utf8, size) as AsyncIterable<Uint8Array>), `chunks of ${size}`).toBe("utf-8");
+    expect(await detectFileEncoding([utf8.subarray(0, utf8.length - 3)])).toBe("windows-1252"); // "€" cut in two
+  });
+
+  it("lets a byte-order mark decide", async () => {
+    expect(await detectFileEncoding([new Uint8Array([0xff, 0xfe, 0x4b, 0x00])])).toBe("utf-16le");
+    expect(await detectFileEncoding([new Uint8Array([0xef, 0xbb, 0xbf, 0x4b, 0xe9])])).toBe("utf-8");
   });
 });
 
