@@ -1,5 +1,7 @@
 import { z } from "zod";
 import { canonicalTimeZone } from "@/lib/time";
+import { nameProblem } from "./names";
+import { COMMON_PASSWORD, isCommonPassword, PASSWORD_IS_EMAIL, passwordProblem } from "./password-policy";
 import { ROLES } from "./roles";
 
 // Shared by forms (server actions) and the JSON API, so both refuse the same input.
@@ -13,13 +15,24 @@ export const emailField = z
 export const passwordField = z
   .string({ error: "Enter a password." })
   .min(10, "Use at least 10 characters for the password.")
-  .max(200, "Use at most 200 characters for the password.");
+  .max(200, "Use at most 200 characters for the password.")
+  .refine((p) => !isCommonPassword(p), COMMON_PASSWORD);
 
+/** A person's or an organisation's name (lib/auth/names.ts says what it may hold). */
 export const nameField = z
   .string({ error: "Enter a name." })
   .trim()
   .min(1, "Enter a name.")
-  .max(100, "Keep the name under 100 characters.");
+  .max(100, "Keep the name under 100 characters.")
+  .superRefine((name, ctx) => {
+    const problem = nameProblem(name);
+    if (problem) ctx.addIssue({ code: "custom", message: problem });
+  });
+
+/** A password that is the e-mail address of the same form is refused on the password field. */
+function passwordNotEmail(v: { email: string; password: string }, ctx: z.RefinementCtx) {
+  if (passwordProblem(v.password, v.email) === PASSWORD_IS_EMAIL) ctx.addIssue({ code: "custom", path: ["password"], message: PASSWORD_IS_EMAIL });
+}
 
 export const roleField = z.enum(ROLES, { error: "Choose a role: owner, planner or yard hand." });
 
@@ -45,7 +58,7 @@ export const timeZoneField = z.string({ error: "Choose a time zone." }).transfor
   return zone;
 });
 
-export const signUpSchema = z.object({
+const signUpFields = z.object({
   organisationName: nameField,
   name: nameField,
   email: emailField,
@@ -54,13 +67,15 @@ export const signUpSchema = z.object({
   timeZone: timeZoneField.optional(),
 });
 
+export const signUpSchema = signUpFields.superRefine(passwordNotEmail);
+
 /**
  * The sign-up form: its hidden time zone is the browser's own, which a person cannot correct
  * on that form, so one Intl does not know here falls back to UTC instead of refusing.
  */
-export const signUpFormSchema = signUpSchema.extend({
-  timeZone: z.string().optional().transform((v) => (v ? (canonicalTimeZone(v) ?? undefined) : undefined)),
-});
+export const signUpFormSchema = signUpFields
+  .extend({ timeZone: z.string().optional().transform((v) => (v ? (canonicalTimeZone(v) ?? undefined) : undefined)) })
+  .superRefine(passwordNotEmail);
 
 export const signUpConfirmSchema = z.object({ token: z.string().min(1, "This sign-up link is incomplete.") });
 
