@@ -17,6 +17,11 @@ export async function createOrganisation(o: { id: string; name: string; timeZone
   await trx("organisations").insert({ id: o.id, name: o.name, time_zone: o.timeZone });
 }
 
+/** Holds the organisation's row until the transaction ends: changes to its people go one at a time. */
+export async function lockOrganisation(id: string, trx: Knex): Promise<void> {
+  await trx("organisations").where({ id }).forUpdate().first("id");
+}
+
 export async function getOrganisation(id: string, trx: Knex = db): Promise<Organisation | undefined> {
   return trx("organisations").where({ id }).first("id", "name", "public_tag_view as publicTagView", "time_zone as timeZone", "digest_time as digestTime");
 }

@@ -179,14 +179,18 @@ export async function insertPasswordReset(userId: string, tokenHash: string, exp
   await trx("password_resets").insert({ user_id: userId, token_hash: tokenHash, expires_at: expiresAt });
 }
 
-export async function findPasswordReset(tokenHash: string, trx: Knex = db) {
-  return trx("password_resets")
-    .where({ token_hash: tokenHash })
-    .first("id", "user_id as userId", "expires_at as expiresAt", "used_at as usedAt");
+/** The reset a link names, with its person's e-mail, locked until the reset commits (a link is used once). */
+export async function findPasswordReset(tokenHash: string, trx: Knex) {
+  return trx("password_resets as r")
+    .join("users as u", "u.id", "r.user_id")
+    .where("r.token_hash", tokenHash)
+    .forUpdate("r")
+    .first("r.id", "r.user_id as userId", "u.email", "r.expires_at as expiresAt", "r.used_at as usedAt");
 }
 
-export async function markPasswordResetUsed(id: string, trx: Knex = db) {
-  await trx("password_resets").where({ id }).update({ used_at: trx.fn.now() });
+/** Ends every reset link of a person that is still open (one was used, or the password changed). */
+export async function endPasswordResetsOf(userId: string, trx: Knex = db) {
+  await trx("password_resets").where({ user_id: userId }).whereNull("used_at").update({ used_at: trx.fn.now() });
 }
 
 // Sign-in attempts

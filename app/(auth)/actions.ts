@@ -31,7 +31,7 @@ export const signInAction = publicFormAction(signInSchema, async (input) => {
 
 /** The same answer whether or not the address has an account: the e-mail says which (issue 11.3). */
 export const signUpAction = publicFormAction(signUpFormSchema, async (input) => {
-  await accounts.requestSignUp(input);
+  await accounts.requestSignUp(input, clientIp(await headers()));
   return { ok: true, message: accounts.signUpSentMessage(input.email) };
 });
 
@@ -48,7 +48,7 @@ export const acceptInviteAction = publicFormAction(acceptInviteSchema, async (in
 });
 
 export const requestResetAction = publicFormAction(resetRequestSchema, async ({ email }) => {
-  await accounts.requestPasswordReset(email);
+  await accounts.requestPasswordReset(email, clientIp(await headers()));
   return { ok: true, message: "If that e-mail has an account, a reset link is on its way. It works for 2 hours." };
 });
 

@@ -55,7 +55,7 @@ export function EventList({ itemId, events, correct, timeZone }: { itemId: strin
             {e.outcome && <span className="font-normal">: {OUTCOME_WORDS[e.outcome] ?? e.outcome}</span>}
           </p>
           <p className="text-base text-ink-soft">
-            <time dateTime={new Date(e.at).toISOString()}>{formatDateTime(e.at, timeZone)}</time> · {e.actorName ?? "system"} · entry #{e.id}
+            <time dateTime={new Date(e.at).toISOString()}>{formatDateTime(e.at, timeZone)}</time> · <bdi>{e.actorName ?? "system"}</bdi> · entry #{e.id}
           </p>
           {e.correctsEventId && <p className="text-base">Corrects entry <a className="underline" href={`#event-${e.correctsEventId}`}>#{e.correctsEventId}</a></p>}
           {e.note && <p className="text-base">“{e.note}”</p>}

@@ -39,7 +39,7 @@ export function PersonRow({
     <li className="rounded-xl border-2 border-ink-soft p-4">
       <form action={action} className="flex flex-col gap-2" noValidate>
         <p className="text-xl font-bold">
-          {person.name} {isSelf && <span className="text-base font-normal">(you)</span>}
+          <bdi>{person.name}</bdi> {isSelf && <span className="text-base font-normal">(you)</span>}
           {person.disabled && <span className="ml-2 rounded bg-idle-bg px-2 text-base text-idle">Disabled</span>}
         </p>
         <p className="text-base text-ink-soft">{person.email}</p>
@@ -56,7 +56,7 @@ export function PersonRow({
           </label>
         )}
         <FormAlert state={state} />
-        <SubmitButton variant="secondary" pendingLabel="Saving…">Save {person.name}</SubmitButton>
+        <SubmitButton variant="secondary" pendingLabel="Saving…">Save <bdi>{person.name}</bdi></SubmitButton>
       </form>
     </li>
   );

@@ -29,7 +29,7 @@ export function AppShell({
         </Link>
         <div className="flex items-center gap-2">
           <span className="text-right text-sm leading-tight">
-            {principal.name}
+            <bdi>{principal.name}</bdi>
             <br />
             <span className="text-signal">{ROLE_LABELS[principal.role]}</span>
           </span>
@@ -43,9 +43,9 @@ export function AppShell({
           Linkyard
         </Link>
         <p className="text-base leading-snug">
-          <strong>{organisationName}</strong>
+          <strong><bdi>{organisationName}</bdi></strong>
           <br />
-          {principal.name} · <span className="text-signal">{ROLE_LABELS[principal.role]}</span>
+          <bdi>{principal.name}</bdi> · <span className="text-signal">{ROLE_LABELS[principal.role]}</span>
           {principal.designated && <><br /><span className="text-sm">Designated inspector</span></>}
         </p>
         <nav aria-label="Main">

@@ -2,7 +2,7 @@ import "server-only";
 import { randomUUID } from "node:crypto";
 import { audited } from "@/db/audit";
 import { QUEUES, sendJob } from "@/db/jobs";
-import { createOrganisation, getOrganisation } from "@/db/organisations";
+import { createOrganisation, getOrganisation, lockOrganisation } from "@/db/organisations";
 import * as people from "@/db/people";
 import * as signups from "@/db/signups";
 import { config } from "@/lib/config";
@@ -11,6 +11,8 @@ import { queueMail } from "@/lib/mail/queue";
 import { accountExistsInviteMail, accountExistsSignUpMail, inviteMail, passwordResetMail, signUpConfirmMail } from "@/lib/mail/templates";
 import { DEFAULT_TIME_ZONE } from "@/lib/time";
 import { capTokensOf, revokeTokensOf } from "./api-tokens";
+import { countMailAttempt } from "./mail-limits";
+import { passwordProblem } from "./password-policy";
 import { newUserId } from "./lucia";
 import type { Role } from "./roles";
 import { can } from "./roles";
@@ -32,7 +34,8 @@ let decoyHash: Promise<string> | undefined;
  * address has an account (issue 11.3). A new address is e-mailed a link that finishes the
  * sign-up; an address with an account is told so by e-mail instead.
  */
-export async function requestSignUp(input: { organisationName: string; name: string; email: string; password: string; timeZone?: string }): Promise<void> {
+export async function requestSignUp(input: { organisationName: string; name: string; email: string; password: string; timeZone?: string }, ip?: string): Promise<void> {
+  await countMailAttempt([["signUpPerAddress", ip], ["signUpPerEmail", input.email]]);
   const passwordHash = await hashPassword(input.password);
   const secret = newSecret();
   const expiresAt = new Date(Date.now() + SIGNUP_HOURS * 3_600_000);
@@ -118,6 +121,7 @@ export async function signIn(input: { email: string; password: string; ip: strin
  */
 export async function invitePerson(actor: Principal, input: { email: string; role: Role; designated: boolean }) {
   if (!can(actor, "people.manage")) throw forbidden();
+  await countMailAttempt([["invitePerAccount", actor.userId], ["invitePerEmail", input.email]]);
   const secret = newSecret();
   const expiresAt = new Date(Date.now() + INVITE_DAYS * 86_400_000);
   const organisation = (await getOrganisation(actor.organisationId))!;
@@ -166,6 +170,8 @@ export async function acceptInvite(input: { token: string; name: string; passwor
     const problem = inviteProblem(invite);
     if (problem) throw gone(problem);
     if (await people.emailTaken(invite.email, tx)) throw conflict("This e-mail already has an account. Sign in instead.");
+    const weak = passwordProblem(input.password, invite.email);
+    if (weak) throw fieldError("password", weak);
     await people.insertUser(
       { id: userId, organisationId: invite.organisationId, email: invite.email, name: input.name, role: invite.role, designated: invite.designated, passwordHash },
       tx,
@@ -190,7 +196,8 @@ export async function withdrawInvite(actor: Principal, inviteId: string) {
  * e-mails have accounts (issue 11.3): one job, whatever the address. The worker looks the
  * address up and sends the link (sendPasswordReset).
  */
-export async function requestPasswordReset(email: string): Promise<void> {
+export async function requestPasswordReset(email: string, ip?: string): Promise<void> {
+  await countMailAttempt([["resetPerAddress", ip], ["resetPerEmail", email]]);
   await audited(null, (tx) => sendJob(tx, QUEUES.resetRequest, { email }));
 }
 
@@ -223,8 +230,10 @@ export async function resetPassword(input: { token: string; password: string }):
     if (!reset) throw notFound("This reset link is not valid. Ask for a new one.");
     if (reset.usedAt) throw gone("This reset link has already been used. Ask for a new one.");
     if (reset.expiresAt.getTime() < Date.now()) throw gone("This reset link has expired. Ask for a new one.");
+    const weak = passwordProblem(input.password, reset.email);
+    if (weak) throw fieldError("password", weak);
     await people.setPassword(reset.userId, passwordHash, tx);
-    await people.markPasswordResetUsed(reset.id, tx);
+    await people.endPasswordResetsOf(reset.userId, tx); // this link, and every older one still out
     await people.deleteSessionsOf(reset.userId, tx); // sign out everywhere else
     const by = { organisationId: await people.organisationOf(reset.userId, tx), actorId: reset.userId };
     await revokeTokensOf(by.organisationId, reset.userId, "password reset", (fact) => audit({ ...by, ...fact }), tx); // a token must not outlive the password it was made under
@@ -240,6 +249,9 @@ export async function updatePerson(
 ) {
   if (!can(actor, "people.manage")) throw forbidden();
   await audited(actor, async (tx, audit) => {
+    // One change to an organisation's people at a time: two owners demoting each other at
+    // once would each count two owners and leave none. The second waits, then counts again.
+    await lockOrganisation(actor.organisationId, tx);
     const before = await people.getPerson(actor.organisationId, userId, tx);
     if (!before) throw notFound("No such person in your organisation.");
     const losesOwner = before.role === "owner" && !before.disabled && ((patch.role && patch.role !== "owner") || patch.disabled);

@@ -26,7 +26,7 @@ export default async function AuditPage() {
           {rows.map((r) => (
             <tr key={r.id} className="border-b border-idle">
               <td className="py-2 pr-3 whitespace-nowrap"><time dateTime={new Date(r.at).toISOString()}>{formatDateTime(r.at, timeZone)}</time></td>
-              <td className="py-2 pr-3">{r.actorName ?? "system"}</td>
+              <td className="py-2 pr-3"><bdi>{r.actorName ?? "system"}</bdi></td>
               <td className="py-2 pr-3">{auditWords(r.action)}</td>
             </tr>
           ))}

@@ -28,7 +28,7 @@ export default async function InvitePage({ params }: { params: Promise<{ token: 
   }
   return (
     <>
-      <h1 className="text-3xl font-bold">Join {invite.organisationName}</h1>
+      <h1 className="text-3xl font-bold">Join <bdi>{invite.organisationName}</bdi></h1>
       <p className="text-lg">You are invited as {ROLE_LABELS[invite.role as keyof typeof ROLE_LABELS].toLowerCase()}.</p>
       <AcceptInviteForm token={token} email={invite.email} action={acceptInviteAction} />
     </>
