@@ -21,15 +21,33 @@ const sizeValue = (what: string) =>
 
 const sizeText = (what: string) => z.preprocess(blank, sizeValue(what).optional());
 
+// JSON numbers are numbers: true, [5] or "5" is refused, never coerced (the forms send text,
+// which itemFormToInput turns into numbers first).
 const weight = z.object({
-  value: z.coerce.number({ error: "Enter the WLL as a number." }).positive("The WLL must be more than 0.").max(200_000, "That WLL is beyond any tiedown part; check the figure."),
+  value: z.number({ error: "Enter the WLL as a number." }).positive("The WLL must be more than 0.").max(200_000, "That WLL is beyond any tiedown part; check the figure."),
   unit: z.enum(["lb", "kg"], { error: "The WLL unit is lb or kg." }),
 });
 
 const length = z.object({
-  value: z.coerce.number({ error: "Enter the length as a number." }).positive("The length must be more than 0.").max(200, "That length is too long for a tiedown; check the figure."),
+  value: z.number({ error: "Enter the length as a number." }).positive("The length must be more than 0.").max(200, "That length is too long for a tiedown; check the figure."),
   unit: z.enum(["ft", "m", "in", "mm"], { error: "The length unit is ft, m, in or mm." }),
 });
+
+/** How far ahead an in-service date may be: gear bought for next season, not a typing slip. */
+export const IN_SERVICE_DAYS_AHEAD = 366;
+
+/**
+ * The latest in-service date accepted on a day (UTC; a day's slack either side of any zone).
+ * @example latestInServiceDate(new Date("2026-12-01T12:00:00Z")) // "2027-12-02"
+ */
+export function latestInServiceDate(now = new Date()): string {
+  return new Date(now.getTime() + IN_SERVICE_DAYS_AHEAD * 86_400_000).toISOString().slice(0, 10);
+}
+
+const inServiceDate = z
+  .iso.date("Enter the date as YYYY-MM-DD.")
+  .refine((d) => d >= "1950-01-01", "The in-service date cannot be before 1950.")
+  .refine((d) => d <= latestInServiceDate(), { error: () => `The in-service date cannot be after ${latestInServiceDate()}, a year from today.` });
 
 export const itemInputSchema = z
   .object({
@@ -57,8 +75,11 @@ export const itemInputSchema = z
     ends: z.preprocess(blank, z.string().trim().max(120, "Keep the end fittings under 120 characters.").optional()),
     serial: z.preprocess(blank, z.string().trim().max(80, "Keep the serial or lot under 80 characters.").optional()),
     yardId: z.preprocess(blank, z.uuid("Choose a yard from the list.").optional()),
-    inServiceOn: z.preprocess(blank, z.iso.date("Enter the date as YYYY-MM-DD.").optional()),
-    costCents: z.preprocess(blank, z.coerce.number().int("Cost is in whole cents.").min(0, "Cost cannot be negative.").max(100_000_000).optional()),
+    inServiceOn: z.preprocess(blank, inServiceDate.optional()),
+    costCents: z.preprocess(
+      blank,
+      z.number({ error: "Enter the cost in whole cents, as a number." }).int("Cost is in whole cents.").min(0, "Cost cannot be negative.").max(100_000_000, "That cost is beyond any tiedown part; check the figure.").optional(),
+    ),
   })
   .superRefine((v, ctx) => {
     const needs = (path: string, message: string) => ctx.addIssue({ code: "custom", path: [path], message });
@@ -112,7 +133,10 @@ export function toWholeMm(l: { value: number; unit: "ft" | "m" | "in" | "mm" }):
 /** Flat form fields (FormData) to the nested shape the schema reads. */
 export function itemFormToInput(form: Record<string, unknown>) {
   const get = (k: string) => (typeof form[k] === "string" ? (form[k] as string) : undefined);
-  const pair = <T extends string>(value?: string, unit?: T) => (value ? { value, unit } : undefined);
+  // Forms post text; the schema takes numbers only. Text that is not a number stays NaN, which
+  // the schema refuses with the field's own words.
+  const number = (text?: string) => (text?.trim() ? Number(text.trim()) : undefined);
+  const pair = <T extends string>(value?: string, unit?: T) => (value?.trim() ? { value: number(value), unit } : undefined);
   return {
     kind: get("kind"),
     marking: get("marking"),
@@ -126,7 +150,7 @@ export function itemFormToInput(form: Record<string, unknown>) {
     serial: get("serial"),
     yardId: get("yardId"),
     inServiceOn: get("inServiceOn"),
-    costCents: get("cost") ? Math.round(Number(get("cost")) * 100) : undefined,
+    costCents: get("cost")?.trim() ? Math.round(Number(get("cost")!.trim()) * 100) : undefined,
   };
 }
 

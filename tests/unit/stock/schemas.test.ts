@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { itemFormSchema, itemInputSchema, toWholeLb } from "@/lib/stock/schemas";
+import { itemFormSchema, itemInputSchema, latestInServiceDate, toWholeLb } from "@/lib/stock/schemas";
 import { itemRating } from "@/lib/stock/rating";
 
 const issues = (input: unknown) => {
@@ -39,6 +39,33 @@ describe("item input", () => {
   it("reads the add-item form's flat fields", () => {
     const r = itemFormSchema.parse({ kind: "binder", marking: "wll", markedWllValue: "5400", markedWllUnit: "lb", rangeMin: "5/16", rangeMax: "3/8", mechanism: "lever", cost: "69.90", serial: " BL-1 " });
     expect(r).toMatchObject({ chainSizeRange: ["5/16", "3/8"], markedWll: { value: 5400, unit: "lb" }, costCents: 6990, serial: "BL-1" });
+  });
+});
+
+describe("issue 11.8: JSON input is taken as typed (item input)", () => {
+  const chain = { kind: "chain", marking: "wll", size: "3/8" };
+
+  it("refuses a WLL, a length or a cost that is not a JSON number", () => {
+    for (const value of [true, [5], "5", null, {}]) {
+      expect(issues({ ...chain, markedWll: { value, unit: "lb" } }), JSON.stringify(value)).toEqual(["markedWll.value: Enter the WLL as a number."]);
+    }
+    expect(issues({ ...chain, markedWll: { value: 5000, unit: "lb" }, length: { value: "20", unit: "ft" } })).toEqual(["length.value: Enter the length as a number."]);
+    expect(issues({ ...chain, markedWll: { value: 5000, unit: "lb" }, costCents: "100" })).toEqual(["costCents: Enter the cost in whole cents, as a number."]);
+  });
+
+  it("still reads the form's text as numbers, and names text that is none", () => {
+    const form = { kind: "chain", marking: "wll", size: "3/8", markedWllUnit: "lb", lengthValue: " 20 ", lengthUnit: "ft" };
+    expect(itemFormSchema.parse({ ...form, markedWllValue: "5000" })).toMatchObject({ markedWll: { value: 5000 }, length: { value: 20 } });
+    const bad = itemFormSchema.safeParse({ ...form, markedWllValue: "five" });
+    expect(bad.success ? [] : bad.error.issues.map((i) => `${i.path.join(".")}: ${i.message}`)).toEqual(["markedWll.value: Enter the WLL as a number."]);
+  });
+
+  it("bounds the in-service date", () => {
+    const wll = { ...chain, markedWll: { value: 5000, unit: "lb" } };
+    expect(issues({ ...wll, inServiceOn: "9999-12-31" })).toEqual([`inServiceOn: The in-service date cannot be after ${latestInServiceDate()}, a year from today.`]);
+    expect(issues({ ...wll, inServiceOn: "1899-01-01" })).toEqual(["inServiceOn: The in-service date cannot be before 1950."]);
+    expect(issues({ ...wll, inServiceOn: "2026-01-20" })).toEqual([]);
+    expect(latestInServiceDate(new Date("2026-12-01T12:00:00Z"))).toBe("2027-12-02");
   });
 });
 
