@@ -313,9 +313,12 @@ describe("the public tag view", () => {
       expect(await page.locator("body").textContent()).toContain("Tagged out: do not use");
       await page.screenshot({ path: `${SCREENSHOT_DIR}/public-tag-view-tagged-out-phone.png`, fullPage: true });
 
-      const missing = await page.goto(`${BASE_URL}/t/XXXX-XXXX`);
-      expect(missing!.status()).toBe(404);
+      // An unknown code looks to a stranger like another company's private tag: sign in first.
+      await page.goto(`${BASE_URL}/t/XXXX-XXXX`);
+      expect(page.url()).toBe(`${BASE_URL}/sign-in?next=%2Ft%2FXXXX-XXXX`);
       await page.screenshot({ path: `${SCREENSHOT_DIR}/public-tag-unknown-phone.png`, fullPage: true });
+      const malformed = await page.goto(`${BASE_URL}/t/not-a-code`);
+      expect(malformed!.status()).toBe(404);
     } finally {
       await phone.close();
       await testDb("organisations").where({ id: demoOrgId }).update({ public_tag_view: false });

@@ -149,12 +149,22 @@ describe("the tag resolver /t/{code}", () => {
     expect(typed.headers.get("location")).toBe(`/items/${chain.id}`);
   });
 
-  it("answers 404 in words to an unknown or malformed code", async () => {
-    for (const code of [newTagCode(), "not-a-code", "K7XM-3HQ0"]) {
+  it("answers 404 in words to a signed-in person for an unknown code, and to anyone for text that is no code", async () => {
+    const unknown = await visit(hand, newTagCode());
+    expect(unknown.status).toBe(404);
+    expect(unknown.text).toContain("No item has this tag code");
+    for (const code of ["not-a-code", "K7XM-3HQ0"]) {
       const res = await visit(new Client(), code);
       expect(res.status).toBe(404);
       expect(res.text).toContain("No item has this tag code");
     }
+  });
+
+  it("sends a stranger to sign-in for an unknown code too, as for a private one (issue 11.11)", async () => {
+    const code = newTagCode();
+    const res = await visit(new Client(), code);
+    expect(res.status).toBe(307);
+    expect(res.headers.get("location")).toMatch(new RegExp(`/sign-in\\?next=%2Ft%2F${code}$`));
   });
 
   it("answers a member of another organisation like an unknown code while tags are private", async () => {
@@ -214,7 +224,7 @@ describe("the tag resolver /t/{code}", () => {
       const ip = freshIp();
       for (let i = 0; i < TAG_MISS_LIMIT; i++) {
         const res = await visit(new Client(), newTagCode(), ip);
-        expect(res.status).toBe(404);
+        expect(res.status).toBe(307); // to sign-in, as for a private code
       }
       const limited = await visit(new Client(), chain.tagCode, ip);
       expect(limited.status).toBe(429);

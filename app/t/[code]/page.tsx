@@ -13,37 +13,35 @@ export const metadata: Metadata = { title: "Tag", robots: { index: false, follow
 
 /**
  * What a QR tag opens. A member of the item's organisation goes to the item; anyone else
- * gets the public summary when the organisation allows it, else the sign-in page. Unknown
- * codes are a 404; proxy.ts answers 429 to an address that misses too often.
+ * gets the public summary when the organisation allows it. Otherwise a stranger is sent to
+ * sign in, for a real code and an unknown one alike, so the answer never tells whether a
+ * code exists; a signed-in person of another organisation gets the same 404 as for an
+ * unknown code. Text that is not a tag code at all is a 404 (no code can exist there).
+ * proxy.ts answers 429 to an address that misses too often.
  */
 export default async function TagPage({ params }: { params: Promise<{ code: string }> }) {
   const { code: raw } = await params;
   const ip = clientIp(await headers());
   const code = tagCodeFromPath(raw);
-  const item = code ? await findItemByTag(code) : undefined;
-  if (!item) {
+  if (!code) {
     await recordLookup(ip, false);
     notFound();
   }
+  const [item, principal] = await Promise.all([findItemByTag(code), getPrincipal()]);
 
-  const principal = await getPrincipal();
-  if (principal?.organisationId === item.organisationId) {
+  if (item && principal?.organisationId === item.organisationId) {
     await recordLookup(ip, true);
     redirect(`/items/${item.id}`);
   }
-
-  const organisation = await getOrganisation(item.organisationId);
-  if (!organisation?.publicTagView) {
-    if (principal) {
-      // Signed in to another organisation: signing in again would not help, and the
-      // answer must not tell them the code exists.
-      await recordLookup(ip, false);
-      notFound();
-    }
+  const organisation = item ? await getOrganisation(item.organisationId) : undefined;
+  if (item && organisation?.publicTagView) {
     await recordLookup(ip, true);
-    redirect(`/sign-in?next=${encodeURIComponent(`/t/${item.tagCode}`)}`);
+    return <PublicTagView item={item} />;
   }
 
-  await recordLookup(ip, true);
-  return <PublicTagView item={item} />;
+  // Unknown, or another organisation's private tag: one answer for both. A real code is
+  // not a miss (a yard hand who scans before signing in never meets the limit).
+  await recordLookup(ip, Boolean(item));
+  if (principal) notFound(); // signing in again would not help
+  redirect(`/sign-in?next=${encodeURIComponent(`/t/${code}`)}`);
 }
