@@ -1,12 +1,54 @@
 import { NextResponse, type NextRequest } from "next/server";
+import { SESSION_COOKIE } from "@/lib/auth/session-cookie";
+import { config as app } from "@/lib/config";
 import { clientIp } from "@/lib/http/client-ip";
+import { appOrigin, isCrossSite } from "@/lib/http/csrf";
+import { newNonce, pageSecurityHeaders } from "@/lib/http/security-headers";
+import { isConnectionFailure, unavailablePage } from "@/lib/http/unavailable";
+import { ping } from "@/db";
 import { tagLookupsExhausted, tooManyLookupsResponse } from "@/lib/tags/lookups";
 
-// Only the tag resolver passes through here: a page cannot answer 429, so the rate limit
-// of /t/{code} is checked before the page runs (the page records each lookup).
+// Every page (not the API, whose route wrapper does its own checks) passes through here:
+// - a POST to a page is a server action: refused with 403 unless it comes from the app's own
+//   origin (Next's own check lets a request without Origin through, and answers 500 to a
+//   foreign one);
+// - the tag resolver's rate limit is checked before the page runs (a page cannot answer 429;
+//   the page records each lookup);
+// - a signed-in page whose database cannot be reached gets a plain 503 page (a page cannot
+//   answer 503 either), within the pool's few seconds;
+// - every page gets its Content-Security-Policy with a fresh nonce, which Next reads from
+//   the request header and puts on its scripts.
 export async function proxy(request: NextRequest) {
-  if (await tagLookupsExhausted(clientIp(request.headers))) return tooManyLookupsResponse();
-  return NextResponse.next();
+  const crossSite = isCrossSite(
+    {
+      method: request.method,
+      origin: request.headers.get("origin"),
+      secFetchSite: request.headers.get("sec-fetch-site"),
+      hasSessionCookie: request.cookies.has(SESSION_COOKIE),
+      bearer: false,
+    },
+    appOrigin(app.APP_URL),
+  );
+  if (crossSite) {
+    return new Response("Cross-site request refused.", { status: 403, headers: { "content-type": "text/plain; charset=utf-8", "cache-control": "no-store" } });
+  }
+  try {
+    if (request.nextUrl.pathname.startsWith("/t/")) {
+      if (await tagLookupsExhausted(clientIp(request.headers))) return tooManyLookupsResponse();
+    } else if (request.cookies.has(SESSION_COOKIE)) {
+      await ping(); // a signed-in page reads the database: without it, a plain 503 page, not a 500
+    }
+  } catch (error) {
+    if (isConnectionFailure(error)) return unavailablePage();
+    throw error;
+  }
+
+  const headers = pageSecurityHeaders({ nonce: newNonce(), appUrl: app.APP_URL, dev: process.env.NODE_ENV !== "production" });
+  const forward = new Headers(request.headers);
+  forward.set("content-security-policy", headers["Content-Security-Policy"]);
+  const response = NextResponse.next({ request: { headers: forward } });
+  for (const [name, value] of Object.entries(headers)) response.headers.set(name, value);
+  return response;
 }
 
-export const config = { matcher: "/t/:code*" };
+export const config = { matcher: "/((?!api/|_next/static/|_next/image|icon.svg|favicon.ico).*)" };

@@ -6,9 +6,23 @@ import knexConfig, { databaseUrl } from "../knexfile";
 
 const globalForDb = globalThis as typeof globalThis & { linkyardKnex?: Knex; linkyardPool?: pg.Pool };
 
-export const db: Knex = globalForDb.linkyardKnex ?? knexFactory(knexConfig);
-export const pool: pg.Pool =
-  globalForDb.linkyardPool ?? new pg.Pool({ connectionString: databaseUrl, max: 5 });
+// Bounded waits, so that a database that is down or hung gives a 503 within seconds instead
+// of a request that hangs (lib/http/unavailable.ts): a connection is made in 3 s or not at
+// all, the pool hands one out in 5 s, and a statement runs for at most 30 s. A connection
+// lost while PostgreSQL was away is dropped from the pool, and new ones are made when it is back.
+const TIMEOUTS = { connectionTimeoutMillis: 3_000, statement_timeout: 30_000, query_timeout: 35_000 };
+
+export const db: Knex =
+  globalForDb.linkyardKnex ??
+  knexFactory({ ...knexConfig, connection: { connectionString: databaseUrl, ...TIMEOUTS }, acquireConnectionTimeout: 5_000 });
+export const pool: pg.Pool = globalForDb.linkyardPool ?? newPool();
+
+function newPool(): pg.Pool {
+  const p = new pg.Pool({ connectionString: databaseUrl, max: 5, ...TIMEOUTS });
+  // An idle client whose server went away emits "error"; unheard, it would end the process.
+  p.on("error", (error) => console.error(`database connection lost: ${error.message}`));
+  return p;
+}
 
 if (process.env.NODE_ENV !== "production") {
   globalForDb.linkyardKnex = db;

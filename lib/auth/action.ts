@@ -2,6 +2,7 @@ import "server-only";
 import { unstable_rethrow } from "next/navigation";
 import type { ZodType } from "zod";
 import { AppError, zodIssues } from "@/lib/http/errors";
+import { DATABASE_DOWN, isConnectionFailure } from "@/lib/http/unavailable";
 import type { FormState } from "@/lib/forms/state";
 import { can, type Permission } from "./roles";
 import { getPrincipal, type Principal } from "./session";
@@ -63,6 +64,7 @@ function run<T>(
     } catch (error) {
       unstable_rethrow(error); // let redirect() and notFound() through
       if (error instanceof AppError) return toState(error, values);
+      if (isConnectionFailure(error)) return { ok: false, message: DATABASE_DOWN, values };
       console.error(error);
       return { ok: false, message: "Something went wrong on our side. Try again.", values };
     }

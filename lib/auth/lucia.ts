@@ -4,6 +4,7 @@ import { NodePostgresAdapter } from "@lucia-auth/adapter-postgresql";
 import { pool } from "@/db";
 import { cookieSecure } from "@/lib/config";
 import type { Role } from "./roles";
+import { SESSION_COOKIE } from "./session-cookie";
 
 // lucia v3 is in maintenance; only lib/auth imports this file (everything else talks to
 // lib/auth/session.ts), so it can be swapped here without touching routes.
@@ -11,7 +12,7 @@ const adapter = new NodePostgresAdapter(pool, { user: "users", session: "user_se
 
 export const lucia = new Lucia(adapter, {
   sessionCookie: {
-    name: "linkyard_session",
+    name: SESSION_COOKIE,
     expires: false, // keep the cookie; lucia expires and extends the session server-side
     attributes: { secure: cookieSecure, sameSite: "lax" },
   },

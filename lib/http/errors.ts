@@ -14,7 +14,7 @@ export class AppError extends Error {
    * they never replace `error` or `issues`.
    */
   constructor(
-    readonly status: 400 | 401 | 403 | 404 | 409 | 410 | 413 | 415 | 422 | 429,
+    readonly status: 400 | 401 | 403 | 404 | 409 | 410 | 413 | 415 | 422 | 429 | 503,
     message: string,
     readonly issues: FieldIssue[] = [],
     readonly extra: Readonly<Record<string, unknown>> = {},

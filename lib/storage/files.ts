@@ -3,7 +3,8 @@ import { randomUUID } from "node:crypto";
 import { createReadStream } from "node:fs";
 import { DeleteObjectCommand, GetObjectCommand, PutObjectCommand, S3Client } from "@aws-sdk/client-s3";
 import { config } from "@/lib/config";
-import { badRequest } from "@/lib/http/errors";
+import { AppError, badRequest } from "@/lib/http/errors";
+import { FILE_STORE_DOWN } from "@/lib/http/unavailable";
 import { sniffContentType, uploadProblem, type FilePurpose } from "./file-type";
 
 // Photos and certificates live in an S3-compatible bucket: the local fake in development
@@ -16,8 +17,22 @@ const s3 = new S3Client({
   // (the SDK's default, a chunked upload with a trailing checksum, is not understood by
   // every S3-compatible service, the local fake among them).
   requestChecksumCalculation: "WHEN_REQUIRED",
+  // A store that is down fails an upload within seconds (a clear 503), rather than hanging it.
+  requestHandler: { connectionTimeout: 3_000, requestTimeout: 60_000 },
+  maxAttempts: 2,
   credentials: { accessKeyId: config.S3_ACCESS_KEY_ID, secretAccessKey: config.S3_SECRET_ACCESS_KEY },
 });
+
+/** A call to the bucket; a bucket that cannot be reached is a 503 in words, not a 500. */
+async function bucket<T>(call: () => Promise<T>, field?: string): Promise<T> {
+  try {
+    return await call();
+  } catch (error) {
+    if ((error as { $metadata?: { httpStatusCode?: number } }).$metadata?.httpStatusCode) throw error; // the store answered: a real fault
+    console.error(`file store: ${(error as Error).message}`);
+    throw new AppError(503, FILE_STORE_DOWN, field ? [{ path: field, message: FILE_STORE_DOWN }] : []);
+  }
+}
 
 export interface StoredFile {
   storageKey: string;
@@ -36,7 +51,7 @@ export async function storeUpload(organisationId: string, purpose: FilePurpose, 
   if (problem) throw badRequest(problem, [{ path: field, message: problem }]);
   const contentType = sniffContentType(bytes.subarray(0, 16))!;
   const storageKey = `${organisationId}/${purpose}/${randomUUID()}`;
-  await s3.send(new PutObjectCommand({ Bucket: config.S3_BUCKET, Key: storageKey, Body: bytes, ContentType: contentType }));
+  await bucket(() => s3.send(new PutObjectCommand({ Bucket: config.S3_BUCKET, Key: storageKey, Body: bytes, ContentType: contentType })), field);
   return { storageKey, contentType, sizeBytes: bytes.byteLength, originalName: file.name.slice(0, 200) || "upload" };
 }
 
@@ -46,7 +61,7 @@ export async function removeStored(storageKey: string): Promise<void> {
 }
 
 export async function readStored(storageKey: string) {
-  const out = await s3.send(new GetObjectCommand({ Bucket: config.S3_BUCKET, Key: storageKey }));
+  const out = await bucket(() => s3.send(new GetObjectCommand({ Bucket: config.S3_BUCKET, Key: storageKey })));
   return out.Body!.transformToWebStream();
 }
 
@@ -55,5 +70,5 @@ export async function readStored(storageKey: string) {
  * rows never sit in memory whole.
  */
 export async function storeFromDisk(storageKey: string, path: string, sizeBytes: number, contentType: string): Promise<void> {
-  await s3.send(new PutObjectCommand({ Bucket: config.S3_BUCKET, Key: storageKey, Body: createReadStream(path), ContentLength: sizeBytes, ContentType: contentType }));
+  await bucket(() => s3.send(new PutObjectCommand({ Bucket: config.S3_BUCKET, Key: storageKey, Body: createReadStream(path), ContentLength: sizeBytes, ContentType: contentType })), "file");
 }

@@ -1,5 +1,6 @@
 import { getAttachment } from "@/db/items";
 import { notFound, uuidParam } from "@/lib/http/errors";
+import { storedFileHeaders } from "@/lib/http/download";
 import { route } from "@/lib/http/route";
 import { readStored } from "@/lib/storage/files";
 
@@ -7,11 +8,5 @@ import { readStored } from "@/lib/storage/files";
 export const GET = route("stock.view", {}, async ({ principal, params }) => {
   const file = await getAttachment(principal.organisationId, uuidParam(params.id, "file"));
   if (!file) throw notFound("No such file.");
-  return new Response(await readStored(file.storageKey), {
-    headers: {
-      "Content-Type": file.contentType,
-      "Content-Disposition": `inline; filename="${file.originalName.replace(/[^\w.\- ]/g, "_")}"`,
-      "Cache-Control": "private, max-age=300",
-    },
-  });
+  return new Response(await readStored(file.storageKey), { headers: storedFileHeaders(file) });
 });
