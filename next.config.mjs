@@ -14,6 +14,9 @@ const nextConfig = {
     // Certificates may be up to 15 MB (lib/storage/file-type.ts); the action then refuses
     // a larger file itself, with a message, instead of the framework cutting it off.
     serverActions: { bodySizeLimit: "20mb" },
+    // Every page POST (a server action) now passes proxy.ts, which holds its body up to this
+    // size; past Next's 10 MB default a certificate upload would be cut short.
+    proxyClientMaxBodySize: "20mb",
   },
   async headers() {
     return [

@@ -1,6 +1,9 @@
 #!/usr/bin/env bash
 # npm test: its own set-up (PostgreSQL, a separate test database rebuilt from empty, the
-# mail fake, Chromium, a production build served on its own port, a job worker), then every test.
+# mail fake, Chromium, a production build served on its own port, a job worker), then every
+# test. It ends with the services it started stopped again (a machine is left as it was
+# found; the next run starts them in a few seconds); services that were already running
+# (npm start, npm run dev) are left running.
 source "$(dirname "$0")/lib.sh"
 TEST_PORT="${LINKYARD_TEST_PORT:-3100}"
 
@@ -12,6 +15,18 @@ say "linting (npm run lint)"
 
 ensure_chromium
 ensure_pdf_tools
+find_pg_bin; choose_pgdata
+started=()
+pg_running || started+=(postgres)
+mail_running || started+=(mail)
+s3_running || started+=(s3)
+stop_started() {
+  stop_pid_file "$DATA/test-app.pid" server.mts
+  stop_worker test-worker
+  for s in "${started[@]}"; do "stop_$s" >/dev/null; done
+  if [ ${#started[@]} -gt 0 ]; then say "stopped what the tests started: ${started[*]}"; fi
+}
+trap stop_started EXIT
 start_postgres
 ensure_database linkyard_test
 start_mail
@@ -44,13 +59,14 @@ export TRUSTED_PROXIES="127.0.0.1"
 say "serving the build on $APP_URL for the tests"
 stop_pid_file "$DATA/test-app.pid" server.mts
 (cd "$ROOT"; nohup node --import tsx server.mts -H 127.0.0.1 -p "$TEST_PORT" >"$DATA/test-app.log" 2>&1 & echo $! >"$DATA/test-app.pid")
-trap 'stop_pid_file "$DATA/test-app.pid" server.mts; stop_worker test-worker' EXIT
 start_worker test-worker
 wait_for_http "$APP_URL/api/health" "$DATA/test-app.log"
 
 cd "$ROOT"
 status=0
 node_modules/.bin/vitest run --reporter=default --reporter=json --outputFile.json="$DATA/vitest.json" "$@" || status=$?
+trap - EXIT
+stop_started
 # A plain closing line that any CI can read.
 node -e 'const r=require(process.argv[1]);console.log(`Tests: ${r.numPassedTests} passed, ${r.numFailedTests} failed, ${r.numPendingTests+r.numTodoTests} skipped`)' "$DATA/vitest.json" || true
 exit $status

@@ -5,12 +5,13 @@ import { testDb } from "./db";
 
 // The project's own local services, stopped and started through scripts/lib.sh's functions
 // (the same the scripts use, with the ports and environment of this test run), for the
-// tests of what happens when the mail server or the job worker goes away.
+// tests of what happens when the mail server, the job worker, PostgreSQL or the file store
+// goes away. They act only on this clone's cluster and pid files, on this run's ports.
 
 const ROOT = path.resolve(__dirname, "../..");
 
 function lib(command: string): void {
-  execFileSync("bash", ["-c", `source scripts/lib.sh && ${command}`], { cwd: ROOT, env: process.env, stdio: "pipe", timeout: 60_000 });
+  execFileSync("bash", ["-c", `source scripts/lib.sh && ${command}`], { cwd: ROOT, env: process.env, stdio: "pipe", timeout: 90_000 });
 }
 
 export const stopMail = () => lib("stop_mail");
@@ -38,3 +39,22 @@ export async function sendTestJob(queue: QueueName, data: object = {}): Promise<
 }
 
 export { QUEUES };
+
+/** Runs a function of scripts/lib.sh for the fault tests of PostgreSQL and the file store. */
+export function service(fn: "stop_postgres" | "start_postgres" | "stop_s3" | "start_s3"): void {
+  lib(fn);
+}
+
+/** Polls until `ready` holds (or throws after `ms`), answering how long it took. */
+export async function waitUntil(ready: () => Promise<boolean>, ms: number): Promise<number> {
+  const start = Date.now();
+  while (Date.now() - start < ms) {
+    try {
+      if (await ready()) return Date.now() - start;
+    } catch {
+      /* not yet */
+    }
+    await new Promise((r) => setTimeout(r, 250));
+  }
+  throw new Error(`not ready within ${ms} ms`);
+}
