@@ -42,7 +42,7 @@ export function unavailablePage(): Response {
 <style>body{font:19px/1.45 Arial,sans-serif;color:#111827;background:#fff;margin:0;padding:2rem 1rem}main{max-width:30rem;margin:0 auto}h1{font-size:1.8rem;line-height:1.2}</style></head>
 <body><main><h1>Linkyard is not available just now</h1>
 <p>${DATABASE_DOWN}</p>
-<p>Until it is back, go by the tags and marks on the gear and your own pre-use check.</p></main></body></html>`;
+<p>Until it is back, checks and tag-outs cannot be recorded here: note them on paper and record them when Linkyard answers again.</p></main></body></html>`;
   return new Response(html, {
     status: 503,
     headers: { "content-type": "text/html; charset=utf-8", "retry-after": String(RETRY_AFTER_SECONDS), "cache-control": "no-store" },
