@@ -83,7 +83,7 @@ describe("issue 11.6: mail-sending endpoints are limited, and names carry no con
   it("limits sign-ups per client address", async () => {
     const caller = new Client();
     const body = () => ({ organisationName: "Flood Co", name: "Flood", email: uniqueEmail("flood"), password: TEST_PASSWORD });
-    for (let i = 0; i < 10; i++) expect((await caller.post("/api/v1/signups", body())).status).toBe(201);
+    for (let i = 0; i < 10; i++) expect((await caller.post("/api/v1/signups", body())).status).toBe(202);
     const limited = await caller.post("/api/v1/signups", body());
     expect(limited.status).toBe(429);
     expect(limited.json.error).toMatch(/Too many sign-ups from this address/);
