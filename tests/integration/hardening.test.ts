@@ -1,7 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { callAction, discoveredActions } from "../support/actions";
 import { countRows, testDb } from "../support/db";
-import { addMember, BASE_URL, Client, linkIn, MAIL_API, newOrganisation, TEST_PASSWORD, uniqueEmail } from "../support/http";
+import { addMember, BASE_URL, Client, linkIn, mailsTo, newOrganisation, TEST_PASSWORD, uniqueEmail } from "../support/http";
 
 // The fixes of the hardening issue (issue 11), one block per numbered item, each written
 // as the attack that worked before the fix. Item 2 (forwarded addresses) is forwarded.test.ts;
@@ -14,18 +14,14 @@ beforeAll(async () => {
 }, 60_000);
 afterAll(() => testDb.destroy());
 
-async function mailsTo(address: string): Promise<{ text: string }[]> {
-  const mails = (await (await fetch(`${MAIL_API}/api/email`)).json()) as { to: { address: string }[]; text: string }[];
-  return mails.filter((m) => m.to.some((t) => t.address.toLowerCase() === address.toLowerCase()));
-}
-
-async function waitForMails(address: string, count: number): Promise<{ text: string }[]> {
+/** Waits until `count` e-mails to an address carry a link to `path`, and answers them, oldest first. */
+async function waitForMails(address: string, count: number, path: string): Promise<{ text: string }[]> {
   for (let i = 0; i < 100; i++) {
-    const mine = await mailsTo(address);
+    const mine = (await mailsTo(address)).filter((m) => m.text.includes(`${path}/`));
     if (mine.length >= count) return mine;
     await new Promise((r) => setTimeout(r, 100));
   }
-  throw new Error(`fewer than ${count} e-mails to ${address}`);
+  throw new Error(`fewer than ${count} e-mails with ${path} to ${address}`);
 }
 
 describe("issue 11.4: a reset ends every outstanding reset link of that person", () => {
@@ -34,7 +30,7 @@ describe("issue 11.4: a reset ends every outstanding reset link of that person",
     const anyone = new Client();
     expect((await anyone.post("/api/v1/password-resets", { email })).status).toBe(202);
     expect((await anyone.post("/api/v1/password-resets", { email })).status).toBe(202);
-    const [first, second] = (await waitForMails(email, 2)).map((m) => linkIn(m.text, "/reset-password"));
+    const [first, second] = (await waitForMails(email, 2, "/reset-password")).map((m) => linkIn(m.text, "/reset-password"));
     expect(first).not.toBe(second);
     expect((await anyone.post("/api/v1/password-resets/confirm", { token: second, password: "the-second-new-password" })).status).toBe(200);
     const old = await anyone.post("/api/v1/password-resets/confirm", { token: first, password: "an-attacker-password" });
@@ -159,7 +155,7 @@ describe("issue 11.7: weak passwords are refused", () => {
   it("applies the same rules when an invite is accepted and when a password is reset", async () => {
     const email = uniqueEmail("invited");
     expect((await org.owner.post("/api/v1/invites", { email, role: "planner" })).status).toBe(201);
-    const token = linkIn((await waitForMails(email, 1))[0].text, "/invite");
+    const token = linkIn((await waitForMails(email, 1, "/invite"))[0].text, "/invite");
     const accept = await new Client().post("/api/v1/invites/accept", { token, name: "Ivy", password: email });
     expect(accept.status).toBe(400);
     expect(accept.json.issues[0].path).toBe("password");
@@ -168,7 +164,7 @@ describe("issue 11.7: weak passwords are refused", () => {
 
     const { email: ownerEmail } = await newOrganisation();
     expect((await new Client().post("/api/v1/password-resets", { email: ownerEmail })).status).toBe(202);
-    const reset = linkIn((await waitForMails(ownerEmail, 1))[0].text, "/reset-password");
+    const reset = linkIn((await waitForMails(ownerEmail, 1, "/reset-password"))[0].text, "/reset-password");
     const same = await new Client().post("/api/v1/password-resets/confirm", { token: reset, password: ownerEmail });
     expect(same.status).toBe(400);
     expect(same.json.issues).toEqual([{ path: "password", message: "The password must not be your e-mail address." }]);
