@@ -1,10 +1,12 @@
 import type { Knex } from "knex";
-import type { StoredAnchor, StoredMachine, StoredTrailer } from "@/lib/kits/assemble";
 import type { UnitSystem } from "@/lib/kits/display";
+import type { AnchorStatus, Coupling, Side, TrailerType } from "@/lib/kits/model";
 import { db } from "./index";
 
 // Machines, their classes, trailers and their anchor points. Every function takes the
-// organisation id and filters on it.
+// organisation id and filters on it. This file owns the shapes of a machine, a trailer and
+// an anchor point as they are written (…Fields) and read (…Record); lib/kits/assemble.ts
+// maps the records to the planner's model.
 
 // Settings the fleet screens read
 
@@ -49,8 +51,17 @@ const MACHINE_COLUMNS = [
   "height_mm as heightMm", "articulated", "accessories", "tiedown_points as tiedownPoints", "cg_from_front_mm as cgFromFrontMm",
 ];
 
-export interface MachineRow {
+/** A tie-down point on a machine, measured from the machine's front (kept in the machine's row). */
+export interface MachinePointFields {
+  label: string;
+  side: Side;
+  positionMm: number;
+}
+
+/** What a machine's details decide: whole pounds and millimetres. */
+export interface MachineFields {
   name: string;
+  /** A built-in class key (lib/kits/model.ts) or the organisation's own class name. */
   machineClass: string;
   weightLb: number;
   lengthMm: number;
@@ -58,11 +69,16 @@ export interface MachineRow {
   heightMm: number | null;
   articulated: boolean;
   accessories: string[];
-  tiedownPoints: { label: string; side: string; positionMm: number }[];
+  tiedownPoints: MachinePointFields[];
   cgFromFrontMm: number | null;
 }
 
-function machineColumns(m: MachineRow) {
+/** A machine as every query answers it. */
+export interface MachineRecord extends MachineFields {
+  id: string;
+}
+
+function machineColumns(m: MachineFields) {
   return {
     name: m.name,
     machine_class: m.machineClass,
@@ -77,15 +93,15 @@ function machineColumns(m: MachineRow) {
   };
 }
 
-export async function listMachines(organisationId: string): Promise<StoredMachine[]> {
+export async function listMachines(organisationId: string): Promise<MachineRecord[]> {
   return db("machines").where({ organisation_id: organisationId }).orderByRaw("lower(name)").select(MACHINE_COLUMNS);
 }
 
-export async function getMachine(organisationId: string, id: string, trx: Knex = db): Promise<StoredMachine | undefined> {
+export async function getMachine(organisationId: string, id: string, trx: Knex = db): Promise<MachineRecord | undefined> {
   return trx("machines").where({ organisation_id: organisationId, id }).first(MACHINE_COLUMNS);
 }
 
-export async function getMachinesByIds(organisationId: string, ids: string[], trx: Knex = db): Promise<StoredMachine[]> {
+export async function getMachinesByIds(organisationId: string, ids: string[], trx: Knex = db): Promise<MachineRecord[]> {
   if (!ids.length) return [];
   return trx("machines").where({ organisation_id: organisationId }).whereIn("id", ids).select(MACHINE_COLUMNS);
 }
@@ -96,17 +112,17 @@ export async function machineNameTaken(organisationId: string, name: string, exc
   return Boolean(await q.first("id"));
 }
 
-export async function insertMachine(organisationId: string, m: MachineRow, trx: Knex): Promise<string> {
+export async function insertMachine(organisationId: string, m: MachineFields, trx: Knex): Promise<string> {
   const [row] = await trx("machines").insert({ organisation_id: organisationId, ...machineColumns(m) }).returning("id");
   return row.id;
 }
 
-export async function updateMachine(organisationId: string, id: string, m: MachineRow, trx: Knex): Promise<void> {
+export async function updateMachine(organisationId: string, id: string, m: MachineFields, trx: Knex): Promise<void> {
   await trx("machines").where({ organisation_id: organisationId, id }).update({ ...machineColumns(m), updated_at: trx.fn.now() });
 }
 
 /** Locks a machine row for an edit. */
-export async function lockMachine(organisationId: string, id: string, trx: Knex): Promise<StoredMachine | undefined> {
+export async function lockMachine(organisationId: string, id: string, trx: Knex): Promise<MachineRecord | undefined> {
   return trx("machines").where({ organisation_id: organisationId, id }).forUpdate().first(MACHINE_COLUMNS);
 }
 
@@ -118,9 +134,27 @@ const TRAILER_COLUMNS = [
   "hitch_to_axle_mm as hitchToAxleMm", "hitch_to_deck_front_mm as hitchToDeckFrontMm",
 ];
 
-export type TrailerRow = Omit<StoredTrailer, "id">;
+/** What a trailer's details decide (its anchor points apart): whole pounds and millimetres. */
+export interface TrailerFields {
+  name: string;
+  trailerType: TrailerType;
+  coupling: Coupling;
+  deckLengthMm: number;
+  tiltLengthMm: number;
+  deckWidthMm: number | null;
+  gvwrLb: number;
+  emptyWeightLb: number;
+  emptyTongueWeightLb: number;
+  hitchToAxleMm: number;
+  hitchToDeckFrontMm: number | null;
+}
 
-function trailerColumns(t: TrailerRow) {
+/** A trailer as every query answers it (its anchor points apart). */
+export interface TrailerRecord extends TrailerFields {
+  id: string;
+}
+
+function trailerColumns(t: TrailerFields) {
   return {
     name: t.name,
     trailer_type: t.trailerType,
@@ -136,20 +170,20 @@ function trailerColumns(t: TrailerRow) {
   };
 }
 
-export async function listTrailers(organisationId: string): Promise<StoredTrailer[]> {
+export async function listTrailers(organisationId: string): Promise<TrailerRecord[]> {
   return db("trailers").where({ organisation_id: organisationId }).orderByRaw("lower(name)").select(TRAILER_COLUMNS);
 }
 
-export async function getTrailer(organisationId: string, id: string, trx: Knex = db): Promise<StoredTrailer | undefined> {
+export async function getTrailer(organisationId: string, id: string, trx: Knex = db): Promise<TrailerRecord | undefined> {
   return trx("trailers").where({ organisation_id: organisationId, id }).first(TRAILER_COLUMNS);
 }
 
-export async function getTrailersByIds(organisationId: string, ids: string[], trx: Knex = db): Promise<StoredTrailer[]> {
+export async function getTrailersByIds(organisationId: string, ids: string[], trx: Knex = db): Promise<TrailerRecord[]> {
   if (!ids.length) return [];
   return trx("trailers").where({ organisation_id: organisationId }).whereIn("id", ids).select(TRAILER_COLUMNS);
 }
 
-export async function lockTrailer(organisationId: string, id: string, trx: Knex): Promise<StoredTrailer | undefined> {
+export async function lockTrailer(organisationId: string, id: string, trx: Knex): Promise<TrailerRecord | undefined> {
   return trx("trailers").where({ organisation_id: organisationId, id }).forUpdate().first(TRAILER_COLUMNS);
 }
 
@@ -159,16 +193,38 @@ export async function trailerNameTaken(organisationId: string, name: string, exc
   return Boolean(await q.first("id"));
 }
 
-export async function insertTrailer(organisationId: string, t: TrailerRow, trx: Knex): Promise<string> {
+export async function insertTrailer(organisationId: string, t: TrailerFields, trx: Knex): Promise<string> {
   const [row] = await trx("trailers").insert({ organisation_id: organisationId, ...trailerColumns(t) }).returning("id");
   return row.id;
 }
 
-export async function updateTrailer(organisationId: string, id: string, t: TrailerRow, trx: Knex): Promise<void> {
+export async function updateTrailer(organisationId: string, id: string, t: TrailerFields, trx: Knex): Promise<void> {
   await trx("trailers").where({ organisation_id: organisationId, id }).update({ ...trailerColumns(t), updated_at: trx.fn.now() });
 }
 
 // Anchor points
+
+/** What an anchor point's details decide. */
+export interface AnchorFields {
+  label: string;
+  side: Side;
+  positionMm: number;
+  wllLb: number;
+  /** YYYY-MM-DD, or null when no periodic inspection is scheduled. */
+  nextInspectionDue: string | null;
+}
+
+/** An anchor point as every query answers it, with its standing. */
+export interface AnchorRecord extends AnchorFields {
+  id: string;
+  trailerId: string;
+  status: AnchorStatus;
+  /** YYYY-MM-DD */
+  lastInspectedOn: string | null;
+}
+
+/** A change to an anchor point: some of its details, its standing, its inspection dates. */
+export type AnchorUpdate = Partial<AnchorFields> & { status?: AnchorStatus; lastInspectedOn?: string | null };
 
 const ANCHOR_COLUMNS = [
   "id", "trailer_id as trailerId", "label", "side", "position_mm as positionMm", "wll_lb as wllLb", "status",
@@ -177,31 +233,23 @@ const ANCHOR_COLUMNS = [
 ];
 
 /** The anchor points of some trailers; retired ones only when asked. */
-export async function listAnchorPoints(organisationId: string, trailerIds: string[], options: { withRetired?: boolean } = {}, trx: Knex = db): Promise<StoredAnchor[]> {
+export async function listAnchorPoints(organisationId: string, trailerIds: string[], options: { withRetired?: boolean } = {}, trx: Knex = db): Promise<AnchorRecord[]> {
   if (!trailerIds.length) return [];
   const q = trx("anchor_points").where({ organisation_id: organisationId }).whereIn("trailer_id", trailerIds);
   if (!options.withRetired) q.whereNot("status", "retired");
   return q.orderBy("position_mm").select(ANCHOR_COLUMNS);
 }
 
-export async function getAnchorPoint(organisationId: string, id: string, trx: Knex = db): Promise<StoredAnchor | undefined> {
+export async function getAnchorPoint(organisationId: string, id: string, trx: Knex = db): Promise<AnchorRecord | undefined> {
   return trx("anchor_points").where({ organisation_id: organisationId, id }).first(ANCHOR_COLUMNS);
 }
 
 /** Locks an anchor point for a change of standing. */
-export async function lockAnchorPoint(organisationId: string, id: string, trx: Knex): Promise<StoredAnchor | undefined> {
+export async function lockAnchorPoint(organisationId: string, id: string, trx: Knex): Promise<AnchorRecord | undefined> {
   return trx("anchor_points").where({ organisation_id: organisationId, id }).forUpdate().first(ANCHOR_COLUMNS);
 }
 
-export interface AnchorRow {
-  label: string;
-  side: string;
-  positionMm: number;
-  wllLb: number;
-  nextInspectionDue: string | null;
-}
-
-export async function insertAnchorPoint(organisationId: string, trailerId: string, a: AnchorRow, trx: Knex): Promise<string> {
+export async function insertAnchorPoint(organisationId: string, trailerId: string, a: AnchorFields, trx: Knex): Promise<string> {
   const [row] = await trx("anchor_points")
     .insert({ organisation_id: organisationId, trailer_id: trailerId, label: a.label, side: a.side, position_mm: a.positionMm, wll_lb: a.wllLb, next_inspection_due: a.nextInspectionDue })
     .returning("id");
@@ -211,7 +259,7 @@ export async function insertAnchorPoint(organisationId: string, trailerId: strin
 export async function updateAnchorPoint(
   organisationId: string,
   id: string,
-  patch: Partial<AnchorRow> & { status?: string; lastInspectedOn?: string | null },
+  patch: AnchorUpdate,
   trx: Knex,
 ): Promise<void> {
   await trx("anchor_points")
@@ -228,7 +276,8 @@ export async function updateAnchorPoint(
     });
 }
 
-export interface AnchorEventInput {
+/** A history entry of an anchor point. */
+export interface NewAnchorEvent {
   organisationId: string;
   anchorPointId: string;
   type: "created" | "edited" | "inspection" | "tag_out" | "return_to_service" | "retired";
@@ -238,7 +287,7 @@ export interface AnchorEventInput {
   actorId: string | null;
 }
 
-export async function insertAnchorEvent(e: AnchorEventInput, trx: Knex): Promise<void> {
+export async function insertAnchorEvent(e: NewAnchorEvent, trx: Knex): Promise<void> {
   await trx("anchor_point_events").insert({
     organisation_id: e.organisationId,
     anchor_point_id: e.anchorPointId,
@@ -250,8 +299,19 @@ export async function insertAnchorEvent(e: AnchorEventInput, trx: Knex): Promise
   });
 }
 
+/** A history entry of an anchor point as it is read, with who made it. */
+export interface AnchorEventRecord {
+  id: number;
+  type: NewAnchorEvent["type"];
+  outcome: string | null;
+  note: string | null;
+  changes: unknown;
+  at: Date;
+  actorName: string | null;
+}
+
 /** An anchor point's history, newest first. */
-export async function listAnchorEvents(organisationId: string, anchorPointId: string) {
+export async function listAnchorEvents(organisationId: string, anchorPointId: string): Promise<AnchorEventRecord[]> {
   const rows = await db("anchor_point_events as e")
     .leftJoin("users as u", "u.id", "e.actor_id")
     .where({ "e.organisation_id": organisationId, "e.anchor_point_id": anchorPointId })
@@ -261,7 +321,7 @@ export async function listAnchorEvents(organisationId: string, anchorPointId: st
 }
 
 /** The latest history entry of each anchor point of a trailer (what took it out of use, and when). */
-export async function latestAnchorEvents(organisationId: string, trailerId: string): Promise<Map<string, { type: string; note: string | null; at: Date; actorName: string | null }>> {
+export async function latestAnchorEvents(organisationId: string, trailerId: string): Promise<Map<string, Pick<AnchorEventRecord, "type" | "note" | "at" | "actorName">>> {
   const rows = await db("anchor_point_events as e")
     .join("anchor_points as a", "a.id", "e.anchor_point_id")
     .leftJoin("users as u", "u.id", "e.actor_id")

@@ -1,12 +1,61 @@
 import type { Knex } from "knex";
-import type { StoredKit, StoredKitItem, StoredTiedown } from "@/lib/kits/assemble";
+import type { KitState } from "@/lib/kits/model";
+import type { Attachment } from "@/lib/securement";
 import { db } from "./index";
 
 // Kits, their tiedowns and the items in them. Every function takes the organisation id and
 // filters on it. kit_items' unique key on (item_id, kit_date) is what keeps an item in one
 // kit per date; KIT_ITEM_DATE_KEY names it so that the service can tell that refusal apart.
+// This file owns the shapes of a kit, a tiedown and an item in a kit as they are written
+// and read; lib/kits/assemble.ts maps them to the planner's model.
 
 export const KIT_ITEM_DATE_KEY = "kit_items_item_date";
+
+/** A kit as every query answers it (its machine, trailer and tiedowns by id). */
+export interface KitRecord {
+  id: string;
+  /** YYYY-MM-DD */
+  date: string;
+  job: string;
+  site: string | null;
+  state: KitState;
+  machineId: string;
+  trailerId: string;
+  articulationRestrained: boolean;
+  machineFrontFromDeckFrontMm: number | null;
+}
+
+/** An item of stock as a kit reads it: what its description, rating and usability need. */
+export interface KitItemRecord {
+  id: string;
+  tagCode: string;
+  kind: string;
+  grade: number | null;
+  gradeMarked: boolean;
+  size: string | null;
+  markedWllLb: number | null;
+  wllLb: number | null;
+  status: string;
+  /** YYYY-MM-DD, or null when no periodic inspection is scheduled. */
+  nextInspectionDue: string | null;
+  details: Record<string, unknown>;
+}
+
+/** What a tiedown's details decide. */
+export interface TiedownFields {
+  label: string;
+  anchorPointId: string;
+  attachment: Attachment;
+  secures: string;
+  machinePoint: string | null;
+}
+
+/** A tiedown as it is read, with its items in order. */
+export interface TiedownRecord extends TiedownFields {
+  id: string;
+  kitId: string;
+  items: KitItemRecord[];
+}
 
 const KIT_COLUMNS = [
   "k.id", db.raw("to_char(k.date, 'YYYY-MM-DD') as date"), "k.job", "k.site", "k.state", "k.machine_id as machineId",
@@ -14,17 +63,17 @@ const KIT_COLUMNS = [
   "k.machine_front_from_deck_front_mm as machineFrontFromDeckFrontMm",
 ];
 
-export async function getKit(organisationId: string, id: string, trx: Knex = db): Promise<StoredKit | undefined> {
+export async function getKit(organisationId: string, id: string, trx: Knex = db): Promise<KitRecord | undefined> {
   return trx("kits as k").where({ "k.organisation_id": organisationId, "k.id": id }).first(KIT_COLUMNS);
 }
 
 /** Locks a kit row: every change to a kit (its tiedowns, items, state) takes this lock first. */
-export async function lockKit(organisationId: string, id: string, trx: Knex): Promise<StoredKit | undefined> {
+export async function lockKit(organisationId: string, id: string, trx: Knex): Promise<KitRecord | undefined> {
   return trx("kits as k").where({ "k.organisation_id": organisationId, "k.id": id }).forUpdate().first(KIT_COLUMNS);
 }
 
 /** Kits from one date to another (inclusive), by date then job. */
-export async function listKits(organisationId: string, from: string, to: string): Promise<StoredKit[]> {
+export async function listKits(organisationId: string, from: string, to: string): Promise<KitRecord[]> {
   return db("kits as k")
     .where("k.organisation_id", organisationId)
     .whereBetween("k.date", [from, to])
@@ -32,7 +81,8 @@ export async function listKits(organisationId: string, from: string, to: string)
     .select(KIT_COLUMNS);
 }
 
-export interface KitRow {
+/** A new kit (a copy names the kit it was copied from). */
+export interface NewKit {
   date: string;
   job: string;
   site: string | null;
@@ -44,7 +94,7 @@ export interface KitRow {
   createdBy: string;
 }
 
-export async function insertKit(organisationId: string, k: KitRow, trx: Knex): Promise<string> {
+export async function insertKit(organisationId: string, k: NewKit, trx: Knex): Promise<string> {
   const [row] = await trx("kits")
     .insert({
       organisation_id: organisationId,
@@ -62,10 +112,13 @@ export async function insertKit(organisationId: string, k: KitRow, trx: Knex): P
   return row.id;
 }
 
+/** A change to a kit: its job, site, state, articulation lock or placement. */
+export type KitUpdate = Partial<Pick<KitRecord, "job" | "site" | "state" | "articulationRestrained" | "machineFrontFromDeckFrontMm">>;
+
 export async function updateKit(
   organisationId: string,
   id: string,
-  patch: { job?: string; site?: string | null; state?: string; articulationRestrained?: boolean; machineFrontFromDeckFrontMm?: number | null },
+  patch: KitUpdate,
   trx: Knex,
 ): Promise<void> {
   await trx("kits")
@@ -86,14 +139,14 @@ const ITEM_COLUMNS = [
 ];
 
 /** The tiedowns of some kits, in order, each with its items in order. */
-export async function listTiedowns(organisationId: string, kitIds: string[], trx: Knex = db): Promise<StoredTiedown[]> {
+export async function listTiedowns(organisationId: string, kitIds: string[], trx: Knex = db): Promise<TiedownRecord[]> {
   if (!kitIds.length) return [];
   const tiedowns = await trx("kit_tiedowns")
     .where({ organisation_id: organisationId })
     .whereIn("kit_id", kitIds)
     .orderBy([{ column: "kit_id" }, { column: "position" }])
     .select("id", "kit_id as kitId", "label", "anchor_point_id as anchorPointId", "attachment", "secures", "machine_point as machinePoint");
-  const items: (StoredKitItem & { tiedownId: string })[] = await trx("kit_items as ki")
+  const items: (KitItemRecord & { tiedownId: string })[] = await trx("kit_items as ki")
     .join("items as i", "i.id", "ki.item_id")
     .where("ki.organisation_id", organisationId)
     .whereIn("ki.kit_id", kitIds)
@@ -112,15 +165,7 @@ export async function nextTiedownPosition(kitId: string, trx: Knex): Promise<num
   return (row?.max ?? -1) + 1;
 }
 
-export interface TiedownRow {
-  label: string;
-  anchorPointId: string;
-  attachment: string;
-  secures: string;
-  machinePoint: string | null;
-}
-
-export async function insertTiedown(organisationId: string, kitId: string, t: TiedownRow, position: number, trx: Knex): Promise<string> {
+export async function insertTiedown(organisationId: string, kitId: string, t: TiedownFields, position: number, trx: Knex): Promise<string> {
   const [row] = await trx("kit_tiedowns")
     .insert({
       organisation_id: organisationId,
@@ -136,7 +181,7 @@ export async function insertTiedown(organisationId: string, kitId: string, t: Ti
   return row.id;
 }
 
-export async function updateTiedown(organisationId: string, kitId: string, id: string, patch: Partial<TiedownRow>, trx: Knex): Promise<void> {
+export async function updateTiedown(organisationId: string, kitId: string, id: string, patch: Partial<TiedownFields>, trx: Knex): Promise<void> {
   await trx("kit_tiedowns")
     .where({ organisation_id: organisationId, kit_id: kitId, id })
     .update({
@@ -187,8 +232,15 @@ export async function kitItemIds(organisationId: string, kitId: string, trx: Kne
   return rows.map((r) => r.item_id);
 }
 
+/** An item and the kit (with its job) that holds it on a date. */
+export interface KitHolding {
+  itemId: string;
+  kitId: string;
+  job: string;
+}
+
 /** Which kit holds each of these items on a date (an item is in at most one). */
-export async function kitsHolding(organisationId: string, itemIds: string[], date: string, trx: Knex = db): Promise<{ itemId: string; kitId: string; job: string }[]> {
+export async function kitsHolding(organisationId: string, itemIds: string[], date: string, trx: Knex = db): Promise<KitHolding[]> {
   if (!itemIds.length) return [];
   return trx("kit_items as ki")
     .join("kits as k", "k.id", "ki.kit_id")
@@ -201,12 +253,12 @@ export async function kitsHolding(organisationId: string, itemIds: string[], dat
  * Locks items of the organisation for a kit change, in id order (so that two kits locking
  * the same items never wait on each other in a circle), as the tag-out locks one item.
  */
-export async function lockItemsForKit(organisationId: string, itemIds: string[], trx: Knex): Promise<StoredKitItem[]> {
+export async function lockItemsForKit(organisationId: string, itemIds: string[], trx: Knex): Promise<KitItemRecord[]> {
   if (!itemIds.length) return [];
   return trx("items as i").where("i.organisation_id", organisationId).whereIn("i.id", itemIds).orderBy("i.id").forUpdate().select(ITEM_COLUMNS);
 }
 
-export async function getItemsForKit(organisationId: string, itemIds: string[], trx: Knex = db): Promise<StoredKitItem[]> {
+export async function getItemsForKit(organisationId: string, itemIds: string[], trx: Knex = db): Promise<KitItemRecord[]> {
   if (!itemIds.length) return [];
   return trx("items as i").where("i.organisation_id", organisationId).whereIn("i.id", itemIds).select(ITEM_COLUMNS);
 }
@@ -215,7 +267,7 @@ export async function getItemsForKit(organisationId: string, itemIds: string[], 
  * Items in no kit on a date (retired ones left out: they never come back). Whether each
  * may be used that day is the caller's question, answered by the usability verdict.
  */
-export async function itemsFreeOn(organisationId: string, date: string, options: { kind?: string; limit?: number } = {}, trx: Knex = db): Promise<StoredKitItem[]> {
+export async function itemsFreeOn(organisationId: string, date: string, options: { kind?: string; limit?: number } = {}, trx: Knex = db): Promise<KitItemRecord[]> {
   const q = trx("items as i")
     .where("i.organisation_id", organisationId)
     .whereNot("i.status", "retired")
@@ -237,7 +289,7 @@ export async function stockWithHoldersOn(
   date: string,
   kinds: readonly string[],
   trx: Knex = db,
-): Promise<(StoredKitItem & { holderKitId: string | null; holderJob: string | null })[]> {
+): Promise<(KitItemRecord & { holderKitId: string | null; holderJob: string | null })[]> {
   return trx("items as i")
     .leftJoin("kit_items as ki", function () {
       this.on("ki.item_id", "=", "i.id").andOn("ki.kit_date", "=", trx.raw("?::date", [date]));
@@ -252,7 +304,7 @@ export async function stockWithHoldersOn(
 }
 
 /** Kits that use a trailer's anchor point on or after a date, not yet returned (for the trailer page). */
-export async function kitsUsingAnchor(organisationId: string, anchorPointId: string, from: string) {
+export async function kitsUsingAnchor(organisationId: string, anchorPointId: string, from: string): Promise<Pick<KitRecord, "id" | "date" | "job">[]> {
   return db("kit_tiedowns as t")
     .join("kits as k", "k.id", "t.kit_id")
     .where({ "t.organisation_id": organisationId, "t.anchor_point_id": anchorPointId })

@@ -1,105 +1,22 @@
 /**
- * From stored rows (db/fleet.ts, db/kits.ts) to the planner's model (model.ts), with the
+ * From stored records (db/fleet.ts, db/kits.ts) to the planner's model (model.ts), with the
  * usability verdict of every item and anchor point for the day that matters: the kit's date.
  * The verdict is lib/stock/usability.ts's, never derived again here.
  *
  * @module
  */
+import type { AnchorRecord, MachineRecord, TrailerRecord } from "@/db/fleet";
+import type { KitItemRecord, KitRecord, TiedownRecord } from "@/db/kits";
 import { describeItem } from "@/lib/stock/describe";
 import type { ItemStatus } from "@/lib/stock/labels";
 import { itemUsability } from "@/lib/stock/usability";
-import type { AnchorPoint, AnchorStatus, Coupling, Kit, KitItem, KitState, KitTiedown, Machine, MachinePoint, Side, Trailer, TrailerType } from "./model";
-import type { Attachment } from "@/lib/securement";
-
-/** A machine as db/fleet.ts reads it. */
-export interface StoredMachine {
-  id: string;
-  name: string;
-  machineClass: string;
-  weightLb: number;
-  lengthMm: number;
-  widthMm: number | null;
-  heightMm: number | null;
-  articulated: boolean;
-  accessories: string[];
-  tiedownPoints: MachinePoint[];
-  cgFromFrontMm: number | null;
-}
-
-/** A trailer as db/fleet.ts reads it (its anchor points apart). */
-export interface StoredTrailer {
-  id: string;
-  name: string;
-  trailerType: TrailerType;
-  coupling: Coupling;
-  deckLengthMm: number;
-  tiltLengthMm: number;
-  deckWidthMm: number | null;
-  gvwrLb: number;
-  emptyWeightLb: number;
-  emptyTongueWeightLb: number;
-  hitchToAxleMm: number;
-  hitchToDeckFrontMm: number | null;
-}
-
-/** An anchor point as db/fleet.ts reads it. */
-export interface StoredAnchor {
-  id: string;
-  trailerId: string;
-  label: string;
-  side: Side;
-  positionMm: number;
-  wllLb: number;
-  status: AnchorStatus;
-  nextInspectionDue: string | null;
-  lastInspectedOn: string | null;
-}
-
-/** An item of stock as db/kits.ts reads it for a kit. */
-export interface StoredKitItem {
-  id: string;
-  tagCode: string;
-  kind: string;
-  grade: number | null;
-  gradeMarked: boolean;
-  size: string | null;
-  markedWllLb: number | null;
-  wllLb: number | null;
-  status: string;
-  nextInspectionDue: string | null;
-  details: Record<string, unknown>;
-}
-
-/** A tiedown row, with its items in order. */
-export interface StoredTiedown {
-  id: string;
-  kitId: string;
-  label: string;
-  anchorPointId: string;
-  attachment: Attachment;
-  secures: string;
-  machinePoint: string | null;
-  items: StoredKitItem[];
-}
-
-/** A kit row. */
-export interface StoredKit {
-  id: string;
-  date: string;
-  job: string;
-  site: string | null;
-  state: KitState;
-  machineId: string;
-  trailerId: string;
-  articulationRestrained: boolean;
-  machineFrontFromDeckFrontMm: number | null;
-}
+import type { AnchorPoint, Kit, KitItem, KitTiedown, Machine, Side, Trailer } from "./model";
 
 /**
  * @example
  * toMachine(row).accessories; // ["bucket", "blade"]
  */
-export function toMachine(row: StoredMachine): Machine {
+export function toMachine(row: MachineRecord): Machine {
   return { ...row, accessories: [...row.accessories], tiedownPoints: [...row.tiedownPoints] };
 }
 
@@ -109,7 +26,7 @@ export function toMachine(row: StoredMachine): Machine {
  * @example
  * toAnchor(row, "2026-12-03").usable.ok; // false when it is out of use
  */
-export function toAnchor(row: StoredAnchor, on: string): AnchorPoint {
+export function toAnchor(row: AnchorRecord, on: string): AnchorPoint {
   return {
     id: row.id,
     label: row.label,
@@ -129,7 +46,7 @@ export function toAnchor(row: StoredAnchor, on: string): AnchorPoint {
  * @example
  * toTrailer(row, anchors, "2026-12-03").anchorPoints.length;
  */
-export function toTrailer(row: StoredTrailer, anchors: readonly StoredAnchor[], on: string): Trailer {
+export function toTrailer(row: TrailerRecord, anchors: readonly AnchorRecord[], on: string): Trailer {
   const sideOrder: Record<Side, number> = { left: 0, centre: 1, right: 2 };
   return {
     ...row,
@@ -146,7 +63,7 @@ export function toTrailer(row: StoredTrailer, anchors: readonly StoredAnchor[], 
  * @example
  * toKitItem(row, "2026-12-03").description; // "Chain, grade 70, 3/8 in"
  */
-export function toKitItem(row: StoredKitItem, on: string): KitItem {
+export function toKitItem(row: KitItemRecord, on: string): KitItem {
   return {
     id: row.id,
     tagCode: row.tagCode,
@@ -170,11 +87,11 @@ export function toKitItem(row: StoredKitItem, on: string): KitItem {
  * kitVerdict(k).pass;
  */
 export function toKit(
-  row: StoredKit,
-  machine: StoredMachine,
-  trailer: StoredTrailer,
-  anchors: readonly StoredAnchor[],
-  tiedowns: readonly StoredTiedown[],
+  row: KitRecord,
+  machine: MachineRecord,
+  trailer: TrailerRecord,
+  anchors: readonly AnchorRecord[],
+  tiedowns: readonly TiedownRecord[],
 ): Kit {
   const used = new Set(tiedowns.map((t) => t.anchorPointId));
   // Retired points stay out of the trailer's list unless this kit still uses one.

@@ -132,7 +132,7 @@ export async function getTrailer(organisationId: string, id: string, on: string,
   return toTrailer(row, await fleet.listAnchorPoints(organisationId, [id], options), on);
 }
 
-function trailerRow(input: TrailerInput): fleet.TrailerRow {
+function trailerRow(input: TrailerInput): fleet.TrailerFields {
   const { anchorPoints: _a, ...row } = input;
   return row;
 }

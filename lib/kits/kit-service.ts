@@ -14,7 +14,7 @@ import { nextStatus } from "@/lib/stock/status";
 import { itemUsability, type UsabilityReason } from "@/lib/stock/usability";
 import { queueTagOutMail } from "@/lib/reminders/tag-out";
 import { kitItemJson, kitJson, kitListEntry, type KitJson } from "./answers";
-import { toAnchor, toKit, toKitItem, type StoredKit, type StoredKitItem } from "./assemble";
+import { toAnchor, toKit, toKitItem } from "./assemble";
 import { addDays } from "./dates";
 import { compareScan, kitEventNote, transitionRule } from "./lifecycle";
 import { cornerPlans, suggestItems, type CornerPlan } from "./matching";
@@ -39,7 +39,7 @@ function audit(actor: Principal, action: AuditAction, kitId: string, after: unkn
 // Reading
 
 /** Whole kits in the model, judged for their own dates, in a few queries whatever their number. */
-async function modelsOf(organisationId: string, rows: StoredKit[], trx: Knex = db): Promise<Kit[]> {
+async function modelsOf(organisationId: string, rows: kits.KitRecord[], trx: Knex = db): Promise<Kit[]> {
   if (!rows.length) return [];
   const machineIds = [...new Set(rows.map((r) => r.machineId))];
   const trailerIds = [...new Set(rows.map((r) => r.trailerId))];
@@ -97,7 +97,7 @@ export async function createKit(actor: Principal, input: KitCreateInput): Promis
   });
 }
 
-async function lockDraft(actor: Principal, kitId: string, trx: Knex): Promise<StoredKit> {
+async function lockDraft(actor: Principal, kitId: string, trx: Knex): Promise<kits.KitRecord> {
   const kit = await kits.lockKit(actor.organisationId, kitId, trx);
   if (!kit) throw notFound("No such kit.");
   if (kit.state !== "draft") {
@@ -122,7 +122,7 @@ export async function patchKit(actor: Principal, kitId: string, input: KitPatchI
 }
 
 /** The kit's anchor point, which must be on its trailer and may be used on its date. */
-async function requireAnchor(actor: Principal, kit: StoredKit, anchorPointId: string, trx: Knex) {
+async function requireAnchor(actor: Principal, kit: kits.KitRecord, anchorPointId: string, trx: Knex) {
   const anchor = await fleet.getAnchorPoint(actor.organisationId, anchorPointId, trx);
   if (!anchor) throw notFound("No such anchor point.");
   if (anchor.trailerId !== kit.trailerId) throw fieldError("anchorPointId", "This anchor point is on another trailer; choose one on the kit's trailer.");
@@ -137,7 +137,7 @@ async function requireAnchor(actor: Principal, kit: StoredKit, anchorPointId: st
   return anchor;
 }
 
-async function requireSecures(organisationId: string, kit: StoredKit, secures: string, trx: Knex): Promise<string> {
+async function requireSecures(organisationId: string, kit: kits.KitRecord, secures: string, trx: Knex): Promise<string> {
   if (secures.toLowerCase() === "machine") return "machine";
   const machine = await fleet.getMachine(organisationId, kit.machineId, trx);
   const accessory = machine?.accessories.find((a) => a.toLowerCase() === secures.toLowerCase());
@@ -155,7 +155,7 @@ function tooManyTiedowns() {
  * Puts items into a tiedown of a locked kit: every item of the organisation, locked, may be
  * used on the kit's date (the usability verdict), and is in no kit that date.
  */
-async function putItems(actor: Principal, kit: StoredKit, tiedownId: string, itemIds: string[], trx: Knex): Promise<void> {
+async function putItems(actor: Principal, kit: kits.KitRecord, tiedownId: string, itemIds: string[], trx: Knex): Promise<void> {
   if (!itemIds.length) return;
   const locked = await kits.lockItemsForKit(actor.organisationId, itemIds, trx);
   for (const id of itemIds) {
@@ -176,7 +176,7 @@ async function putItems(actor: Principal, kit: StoredKit, tiedownId: string, ite
   await kits.insertKitItems(actor.organisationId, { id: kit.id, date: kit.date }, tiedownId, itemIds, trx);
 }
 
-function takenError(holder: { itemId: string; kitId: string; job: string }, kit: { id: string; date: string }, known: StoredKitItem[] = []) {
+function takenError(holder: { itemId: string; kitId: string; job: string }, kit: { id: string; date: string }, known: kits.KitItemRecord[] = []) {
   const tag = known.find((i) => i.id === holder.itemId)?.tagCode ?? "This item";
   const where = holder.kitId === kit.id ? "is already in this kit" : `is already in the kit for ${holder.job} on ${kit.date}`;
   return new AppError(409, `${tag} ${where}.`, [], { code: "ITEM_IN_OTHER_KIT", itemId: holder.itemId, kitId: holder.kitId });

@@ -1,7 +1,8 @@
 import { describe, expect, it } from "vitest";
 import { checkSecurement } from "@/lib/securement";
 import { kitFromJson, kitJson, kitListEntry, machineJson, trailerJson } from "@/lib/kits/answers";
-import { toKit, type StoredTiedown } from "@/lib/kits/assemble";
+import type { TiedownRecord } from "@/db/kits";
+import { toKit } from "@/lib/kits/assemble";
 import { kitCheckRequest } from "@/lib/kits/plan";
 import { excavator, kit, tiedown, chain, binder, trailer } from "./fixtures";
 
@@ -66,7 +67,7 @@ describe("toKit", () => {
       { id: "a3", trailerId: "t", label: "A3", side: "right" as const, positionMm: 900, wllLb: 5000, status: "retired" as const, nextInspectionDue: null, lastInspectedOn: null },
     ];
     const item = { id: "i", tagCode: "AAAA-CCCC", kind: "chain", grade: 70, gradeMarked: true, size: "3/8", markedWllLb: null, wllLb: 6600, status: "in_service", nextInspectionDue: "2026-12-03", details: {} };
-    const tiedowns: StoredTiedown[] = [{ id: "td", kitId: "k", label: "x", anchorPointId: "a2", attachment: "direct", secures: "machine", machinePoint: null, items: [item] }];
+    const tiedowns: TiedownRecord[] = [{ id: "td", kitId: "k", label: "x", anchorPointId: "a2", attachment: "direct", secures: "machine", machinePoint: null, items: [item] }];
     const { id: _m, ...machine } = { ...excavator, accessories: [...excavator.accessories], tiedownPoints: [...excavator.tiedownPoints] };
     const { id: _t, anchorPoints: _a, ...t } = trailer;
     const k = toKit(stored, { id: "m", ...machine }, { id: "t", ...t }, anchors, tiedowns);
