@@ -1,12 +1,29 @@
 import type { Knex } from "knex";
 import type { UnitSystem } from "@/lib/kits/display";
 import type { AnchorStatus, Coupling, Side, TrailerType } from "@/lib/kits/model";
+import { uniqueRefusal } from "./errors";
 import { db } from "./index";
 
 // Machines, their classes, trailers and their anchor points. Every function takes the
 // organisation id and filters on it. This file owns the shapes of a machine, a trailer and
 // an anchor point as they are written (…Fields) and read (…Record); lib/kits/assemble.ts
 // maps the records to the planner's model.
+
+/** The unique keys of names and labels in the fleet tables, by what they keep apart. */
+const NAME_KEYS = {
+  machines_org_name: "machine-name",
+  trailers_org_name: "trailer-name",
+  anchor_points_trailer_label: "anchor-label",
+} as const;
+
+/**
+ * Which name a unique key refused: a machine's or a trailer's name in the organisation, or an
+ * anchor point's label on its trailer (among points in use); null for any other error.
+ */
+export function nameRefusal(error: unknown): (typeof NAME_KEYS)[keyof typeof NAME_KEYS] | null {
+  const key = uniqueRefusal(error)?.key;
+  return key && Object.hasOwn(NAME_KEYS, key) ? NAME_KEYS[key as keyof typeof NAME_KEYS] : null;
+}
 
 // Settings the fleet screens read
 

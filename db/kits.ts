@@ -1,15 +1,28 @@
 import type { Knex } from "knex";
 import type { KitState } from "@/lib/kits/model";
 import type { Attachment } from "@/lib/securement";
+import { uniqueRefusal } from "./errors";
 import { db } from "./index";
 
 // Kits, their tiedowns and the items in them. Every function takes the organisation id and
 // filters on it. kit_items' unique key on (item_id, kit_date) is what keeps an item in one
-// kit per date; KIT_ITEM_DATE_KEY names it so that the service can tell that refusal apart.
+// kit per date; itemTakenRefusal() tells that refusal apart for the service.
 // This file owns the shapes of a kit, a tiedown and an item in a kit as they are written
 // and read; lib/kits/assemble.ts maps them to the planner's model.
 
-export const KIT_ITEM_DATE_KEY = "kit_items_item_date";
+const KIT_ITEM_DATE_KEY = "kit_items_item_date";
+
+/**
+ * Whether an error is KIT_ITEM_DATE_KEY's refusal (an item put into a second kit for a date,
+ * which only a race between two requests reaches past the service's check): the item and the
+ * date it names, when PostgreSQL's detail gives them; null for any other error.
+ */
+export function itemTakenRefusal(error: unknown): { itemId: string; date: string } | { itemId: null; date: null } | null {
+  const refusal = uniqueRefusal(error);
+  if (refusal?.key !== KIT_ITEM_DATE_KEY) return null;
+  const match = /\(item_id, kit_date\)=\(([0-9a-f-]{36}), (\d{4}-\d{2}-\d{2})\)/.exec(refusal.detail);
+  return match ? { itemId: match[1]!, date: match[2]! } : { itemId: null, date: null };
+}
 
 /** A kit as every query answers it (its machine, trailer and tiedowns by id). */
 export interface KitRecord {
@@ -205,7 +218,7 @@ export async function deleteAllTiedowns(organisationId: string, kitId: string, t
 
 /**
  * Puts items into a tiedown. A second kit for the same item on the same date is refused by
- * the database (unique key KIT_ITEM_DATE_KEY, SQLSTATE 23505).
+ * the database (unique key KIT_ITEM_DATE_KEY: itemTakenRefusal()).
  */
 export async function insertKitItems(
   organisationId: string,

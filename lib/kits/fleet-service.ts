@@ -1,7 +1,6 @@
 import "server-only";
-import type { Knex } from "knex";
-import { db } from "@/db";
-import { writeAudit } from "@/db/audit";
+import type { Tx } from "@/db";
+import { audited } from "@/db/audit";
 import * as fleet from "@/db/fleet";
 import { can, type Permission } from "@/lib/auth/roles";
 import type { Principal } from "@/lib/auth/session";
@@ -23,9 +22,6 @@ function require(actor: Principal, permission: Permission) {
   if (!can(actor, permission)) throw forbidden();
 }
 
-const isUniqueViolation = (error: unknown): error is { code: string; constraint?: string } =>
-  typeof error === "object" && error !== null && (error as { code?: string }).code === "23505";
-
 /** Today in the organisation's time zone (YYYY-MM-DD). */
 export async function organisationToday(organisationId: string): Promise<string> {
   return dayIn((await fleet.getFleetSettings(organisationId)).timeZone);
@@ -33,9 +29,9 @@ export async function organisationToday(organisationId: string): Promise<string>
 
 export async function setUnitsPreference(actor: Principal, units: UnitSystem): Promise<void> {
   require(actor, "settings.manage");
-  await db.transaction(async (trx) => {
+  await audited(actor, async (trx, audit) => {
     const before = await fleet.setUnits(actor.organisationId, units, trx);
-    await writeAudit({ organisationId: actor.organisationId, actorId: actor.userId, action: "organisation.units_updated", entity: "organisation", entityId: actor.organisationId, before: { units: before }, after: { units } }, trx);
+    await audit({ action: "organisation.units_updated", entity: "organisation", entityId: actor.organisationId, before: { units: before }, after: { units } });
   });
 }
 
@@ -56,16 +52,16 @@ export async function addMachineClass(actor: Principal, name: string): Promise<{
   if ((MACHINE_CLASSES as readonly string[]).includes(name.toLowerCase().replace(/\s+/g, "-"))) {
     throw conflict(`"${name}" is already a built-in class.`, [{ path: "name", message: `"${name}" is already a built-in class.` }]);
   }
-  return db.transaction(async (trx) => {
+  return audited(actor, async (trx, audit) => {
     const id = await fleet.insertMachineClass(actor.organisationId, name, trx);
     if (!id) return { name: (await fleet.machineClassExists(actor.organisationId, name, trx)) ?? name, created: false };
-    await writeAudit({ organisationId: actor.organisationId, actorId: actor.userId, action: "machine_class.created", entity: "machine_class", entityId: id, after: { name } }, trx);
+    await audit({ action: "machine_class.created", entity: "machine_class", entityId: id, after: { name } });
     return { name, created: true };
   });
 }
 
 /** The stored class of a machine: a built-in key, or the organisation's own name as first written. */
-async function resolveClass(organisationId: string, given: string, trx: Knex): Promise<string> {
+async function resolveClass(organisationId: string, given: string, trx: Tx): Promise<string> {
   const key = given.toLowerCase().replace(/\s+/g, "-");
   if ((MACHINE_CLASSES as readonly string[]).includes(key)) return key;
   const own = await fleet.machineClassExists(organisationId, given, trx);
@@ -88,12 +84,12 @@ export async function getMachine(organisationId: string, id: string): Promise<Ma
 export async function createMachine(actor: Principal, input: MachineInput): Promise<string> {
   require(actor, "fleet.manage");
   return withLabelGuard(() =>
-    db.transaction(async (trx) => {
+    audited(actor, async (trx, audit) => {
       const machineClass = await resolveClass(actor.organisationId, input.machineClass, trx);
       if (await fleet.machineNameTaken(actor.organisationId, input.name, null, trx)) throw nameTaken("machine");
       const row = { ...input, machineClass };
       const id = await fleet.insertMachine(actor.organisationId, row, trx);
-      await writeAudit({ organisationId: actor.organisationId, actorId: actor.userId, action: "machine.created", entity: "machine", entityId: id, after: row }, trx);
+      await audit({ action: "machine.created", entity: "machine", entityId: id, after: row });
       return id;
     }),
   );
@@ -101,14 +97,14 @@ export async function createMachine(actor: Principal, input: MachineInput): Prom
 
 export async function editMachine(actor: Principal, id: string, input: MachineInput): Promise<void> {
   require(actor, "fleet.manage");
-  await db.transaction(async (trx) => {
+  await audited(actor, async (trx, audit) => {
     const before = await fleet.lockMachine(actor.organisationId, id, trx);
     if (!before) throw notFound("No such machine.");
     const machineClass = await resolveClass(actor.organisationId, input.machineClass, trx);
     if (await fleet.machineNameTaken(actor.organisationId, input.name, id, trx)) throw nameTaken("machine");
     const row = { ...input, machineClass };
     await fleet.updateMachine(actor.organisationId, id, row, trx);
-    await writeAudit({ organisationId: actor.organisationId, actorId: actor.userId, action: "machine.updated", entity: "machine", entityId: id, before, after: row }, trx);
+    await audit({ action: "machine.updated", entity: "machine", entityId: id, before, after: row });
   });
 }
 
@@ -144,14 +140,14 @@ export async function createTrailer(actor: Principal, input: TrailerInput): Prom
     throw fieldError(`anchorPoints.${i}.id`, "A new trailer's anchor points have no ids yet; leave the id out.");
   }
   return withLabelGuard(() =>
-    db.transaction(async (trx) => {
+    audited(actor, async (trx, audit) => {
       if (await fleet.trailerNameTaken(actor.organisationId, input.name, null, trx)) throw nameTaken("trailer");
       const id = await fleet.insertTrailer(actor.organisationId, trailerRow(input), trx);
       for (const a of input.anchorPoints) {
         const anchorId = await fleet.insertAnchorPoint(actor.organisationId, id, a, trx);
         await fleet.insertAnchorEvent({ organisationId: actor.organisationId, anchorPointId: anchorId, type: "created", actorId: actor.userId }, trx);
       }
-      await writeAudit({ organisationId: actor.organisationId, actorId: actor.userId, action: "trailer.created", entity: "trailer", entityId: id, after: input }, trx);
+      await audit({ action: "trailer.created", entity: "trailer", entityId: id, after: input });
       return id;
     }),
   );
@@ -167,7 +163,7 @@ const ANCHOR_TRACKED = ["label", "side", "positionMm", "wllLb", "nextInspectionD
 export async function editTrailer(actor: Principal, id: string, input: TrailerInput): Promise<{ retired: string[] }> {
   require(actor, "fleet.manage");
   return withLabelGuard(() =>
-    db.transaction(async (trx) => {
+    audited(actor, async (trx, audit) => {
       const before = await fleet.lockTrailer(actor.organisationId, id, trx);
       if (!before) throw notFound("No such trailer.");
       if (await fleet.trailerNameTaken(actor.organisationId, input.name, id, trx)) throw nameTaken("trailer");
@@ -203,7 +199,7 @@ export async function editTrailer(actor: Principal, id: string, input: TrailerIn
         await fleet.updateAnchorPoint(actor.organisationId, a.id, a, trx);
         await fleet.insertAnchorEvent({ organisationId: actor.organisationId, anchorPointId: a.id, type: "edited", changes, actorId: actor.userId }, trx);
       }
-      await writeAudit({ organisationId: actor.organisationId, actorId: actor.userId, action: "trailer.updated", entity: "trailer", entityId: id, before: { ...before, anchorPoints: current }, after: input }, trx);
+      await audit({ action: "trailer.updated", entity: "trailer", entityId: id, before: { ...before, anchorPoints: current }, after: input });
       return { retired };
     }),
   );
@@ -218,11 +214,12 @@ async function withLabelGuard<T>(work: () => Promise<T>): Promise<T> {
   try {
     return await work();
   } catch (error) {
-    if (isUniqueViolation(error) && error.constraint === "anchor_points_trailer_label") {
+    const refused = fleet.nameRefusal(error);
+    if (refused === "anchor-label") {
       throw conflict("Two anchor points in use would share a label; give each its own.", [{ path: "anchorPoints", message: "Two anchor points in use would share a label." }]);
     }
-    if (isUniqueViolation(error) && error.constraint === "trailers_org_name") throw nameTaken("trailer");
-    if (isUniqueViolation(error) && error.constraint === "machines_org_name") throw nameTaken("machine");
+    if (refused === "trailer-name") throw nameTaken("trailer");
+    if (refused === "machine-name") throw nameTaken("machine");
     throw error;
   }
 }
@@ -263,7 +260,7 @@ export async function recordAnchorEvent(actor: Principal, anchorPointId: string,
   const { timeZone } = await fleet.getFleetSettings(actor.organisationId);
   const today = dayIn(timeZone);
   const intervals = await inspectionIntervals(actor.organisationId);
-  return db.transaction(async (trx) => {
+  return audited(actor, async (trx, audit) => {
     const anchor = await fleet.lockAnchorPoint(actor.organisationId, anchorPointId, trx);
     if (!anchor) throw notFound("No such anchor point.");
     if (!change.from.includes(anchor.status)) throw new AppError(409, ANCHOR_WHY_NOT[anchor.status]);
@@ -278,7 +275,7 @@ export async function recordAnchorEvent(actor: Principal, anchorPointId: string,
       await fleet.updateAnchorPoint(actor.organisationId, anchorPointId, { status: change.to }, trx);
     }
     await fleet.insertAnchorEvent({ organisationId: actor.organisationId, anchorPointId, type: input.type, outcome: input.type === "inspection" ? input.outcome : null, note, actorId: actor.userId }, trx);
-    await writeAudit({ organisationId: actor.organisationId, actorId: actor.userId, action: change.action, entity: "anchor_point", entityId: anchorPointId, before: { status: anchor.status }, after: { status: change.to, note } }, trx);
+    await audit({ action: change.action, entity: "anchor_point", entityId: anchorPointId, before: { status: anchor.status }, after: { status: change.to, note } });
     return { status: change.to, trailerId: anchor.trailerId };
   });
 }

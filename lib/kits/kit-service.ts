@@ -1,8 +1,7 @@
 import "server-only";
-import type { Knex } from "knex";
-import { db } from "@/db";
-import { writeAudit } from "@/db/audit";
-import { KIT_STATE_ACTIONS, type AuditAction } from "@/lib/audit/actions";
+import type { Tx } from "@/db";
+import { audited } from "@/db/audit";
+import { KIT_STATE_ACTIONS } from "@/lib/audit/actions";
 import * as fleet from "@/db/fleet";
 import * as items from "@/db/items";
 import * as kits from "@/db/kits";
@@ -32,14 +31,10 @@ function require(actor: Principal, permission: Permission) {
   if (!can(actor, permission)) throw forbidden();
 }
 
-function audit(actor: Principal, action: AuditAction, kitId: string, after: unknown, trx: Knex, before?: unknown) {
-  return writeAudit({ organisationId: actor.organisationId, actorId: actor.userId, action, entity: "kit", entityId: kitId, before, after }, trx);
-}
-
 // Reading
 
 /** Whole kits in the model, judged for their own dates, in a few queries whatever their number. */
-async function modelsOf(organisationId: string, rows: kits.KitRecord[], trx: Knex = db): Promise<Kit[]> {
+async function modelsOf(organisationId: string, rows: kits.KitRecord[], trx?: Tx): Promise<Kit[]> {
   if (!rows.length) return [];
   const machineIds = [...new Set(rows.map((r) => r.machineId))];
   const trailerIds = [...new Set(rows.map((r) => r.trailerId))];
@@ -56,7 +51,7 @@ async function modelsOf(organisationId: string, rows: kits.KitRecord[], trx: Kne
   });
 }
 
-export async function loadKit(organisationId: string, id: string, trx: Knex = db): Promise<Kit | undefined> {
+export async function loadKit(organisationId: string, id: string, trx?: Tx): Promise<Kit | undefined> {
   const row = await kits.getKit(organisationId, id, trx);
   return row ? (await modelsOf(organisationId, [row], trx))[0] : undefined;
 }
@@ -75,7 +70,7 @@ export async function listKitEntries(organisationId: string, from: string, to: s
 
 // Creating and editing
 
-async function requireMachineAndTrailer(organisationId: string, machineId: string, trailerId: string, trx: Knex) {
+async function requireMachineAndTrailer(organisationId: string, machineId: string, trailerId: string, trx: Tx) {
   const machine = await fleet.getMachine(organisationId, machineId, trx);
   if (!machine) throw notFound("No such machine.");
   const trailer = await fleet.getTrailer(organisationId, trailerId, trx);
@@ -85,19 +80,19 @@ async function requireMachineAndTrailer(organisationId: string, machineId: strin
 
 export async function createKit(actor: Principal, input: KitCreateInput): Promise<string> {
   require(actor, "fleet.manage");
-  return db.transaction(async (trx) => {
+  return audited(actor, async (trx, audit) => {
     const { machine } = await requireMachineAndTrailer(actor.organisationId, input.machineId, input.trailerId, trx);
     const id = await kits.insertKit(
       actor.organisationId,
       { ...input, site: input.site ?? null, articulationRestrained: machine.articulated ? input.articulationRestrained : false, createdBy: actor.userId },
       trx,
     );
-    await audit(actor, "kit.created", id, input, trx);
+    await audit({ action: "kit.created", entity: "kit", entityId: id, after: input });
     return id;
   });
 }
 
-async function lockDraft(actor: Principal, kitId: string, trx: Knex): Promise<kits.KitRecord> {
+async function lockDraft(actor: Principal, kitId: string, trx: Tx): Promise<kits.KitRecord> {
   const kit = await kits.lockKit(actor.organisationId, kitId, trx);
   if (!kit) throw notFound("No such kit.");
   if (kit.state !== "draft") {
@@ -109,7 +104,7 @@ async function lockDraft(actor: Principal, kitId: string, trx: Knex): Promise<ki
 /** The job, site and articulation lock of a kit; the lock changes the check, so only in a draft. */
 export async function patchKit(actor: Principal, kitId: string, input: KitPatchInput): Promise<void> {
   require(actor, "fleet.manage");
-  await db.transaction(async (trx) => {
+  await audited(actor, async (trx, audit) => {
     const kit = await kits.lockKit(actor.organisationId, kitId, trx);
     if (!kit) throw notFound("No such kit.");
     if (input.articulationRestrained !== undefined && kit.state !== "draft") {
@@ -117,12 +112,12 @@ export async function patchKit(actor: Principal, kitId: string, input: KitPatchI
     }
     if (kit.state === "returned") throw new AppError(409, "The kit has been returned; its record stays as it was.", [], { code: "KIT_RETURNED" });
     await kits.updateKit(actor.organisationId, kitId, { job: input.job, site: input.site, articulationRestrained: input.articulationRestrained }, trx);
-    await audit(actor, "kit.updated", kitId, input, trx, kit);
+    await audit({ action: "kit.updated", entity: "kit", entityId: kitId, before: kit, after: input });
   });
 }
 
 /** The kit's anchor point, which must be on its trailer and may be used on its date. */
-async function requireAnchor(actor: Principal, kit: kits.KitRecord, anchorPointId: string, trx: Knex) {
+async function requireAnchor(actor: Principal, kit: kits.KitRecord, anchorPointId: string, trx: Tx) {
   const anchor = await fleet.getAnchorPoint(actor.organisationId, anchorPointId, trx);
   if (!anchor) throw notFound("No such anchor point.");
   if (anchor.trailerId !== kit.trailerId) throw fieldError("anchorPointId", "This anchor point is on another trailer; choose one on the kit's trailer.");
@@ -137,7 +132,7 @@ async function requireAnchor(actor: Principal, kit: kits.KitRecord, anchorPointI
   return anchor;
 }
 
-async function requireSecures(organisationId: string, kit: kits.KitRecord, secures: string, trx: Knex): Promise<string> {
+async function requireSecures(organisationId: string, kit: kits.KitRecord, secures: string, trx: Tx): Promise<string> {
   if (secures.toLowerCase() === "machine") return "machine";
   const machine = await fleet.getMachine(organisationId, kit.machineId, trx);
   const accessory = machine?.accessories.find((a) => a.toLowerCase() === secures.toLowerCase());
@@ -155,7 +150,7 @@ function tooManyTiedowns() {
  * Puts items into a tiedown of a locked kit: every item of the organisation, locked, may be
  * used on the kit's date (the usability verdict), and is in no kit that date.
  */
-async function putItems(actor: Principal, kit: kits.KitRecord, tiedownId: string, itemIds: string[], trx: Knex): Promise<void> {
+async function putItems(actor: Principal, kit: kits.KitRecord, tiedownId: string, itemIds: string[], trx: Tx): Promise<void> {
   if (!itemIds.length) return;
   const locked = await kits.lockItemsForKit(actor.organisationId, itemIds, trx);
   for (const id of itemIds) {
@@ -190,12 +185,11 @@ async function guardTaken<T>(actor: Principal, kitId: string, work: () => Promis
   try {
     return await work();
   } catch (error) {
-    const e = error as { code?: string; constraint?: string; detail?: string };
-    if (e?.code !== "23505" || e.constraint !== kits.KIT_ITEM_DATE_KEY) throw error;
-    const match = /\(item_id, kit_date\)=\(([0-9a-f-]{36}), (\d{4}-\d{2}-\d{2})\)/.exec(e.detail ?? "");
+    const taken = kits.itemTakenRefusal(error);
+    if (!taken) throw error;
     const kit = await kits.getKit(actor.organisationId, kitId);
-    if (match && kit) {
-      const [holder] = await kits.kitsHolding(actor.organisationId, [match[1]!], match[2]!);
+    if (taken.itemId && kit) {
+      const [holder] = await kits.kitsHolding(actor.organisationId, [taken.itemId], taken.date);
       if (holder) throw takenError(holder, kit, await kits.getItemsForKit(actor.organisationId, [holder.itemId]));
     }
     throw new AppError(409, "An item was taken by another kit at the same moment. Look again and retry.", [], { code: "ITEM_IN_OTHER_KIT" });
@@ -205,7 +199,7 @@ async function guardTaken<T>(actor: Principal, kitId: string, work: () => Promis
 export async function addTiedown(actor: Principal, kitId: string, input: TiedownInput): Promise<string> {
   require(actor, "fleet.manage");
   return guardTaken(actor, kitId, () =>
-    db.transaction(async (trx) => {
+    audited(actor, async (trx, audit) => {
       const kit = await lockDraft(actor, kitId, trx);
       const anchor = await requireAnchor(actor, kit, input.anchorPointId, trx);
       const secures = await requireSecures(actor.organisationId, kit, input.secures, trx);
@@ -214,7 +208,7 @@ export async function addTiedown(actor: Principal, kitId: string, input: Tiedown
       const label = input.label || input.machinePoint || (secures === "machine" ? `tiedown ${position + 1}` : secures);
       const id = await kits.insertTiedown(actor.organisationId, kitId, { label, anchorPointId: anchor.id, attachment: input.attachment, secures, machinePoint: input.machinePoint ?? null }, position, trx);
       await putItems(actor, kit, id, input.itemIds, trx);
-      await audit(actor, "kit.tiedown_added", kitId, { tiedownId: id, ...input, label, secures }, trx);
+      await audit({ action: "kit.tiedown_added", entity: "kit", entityId: kitId, after: { tiedownId: id, ...input, label, secures } });
       return id;
     }),
   );
@@ -222,46 +216,46 @@ export async function addTiedown(actor: Principal, kitId: string, input: Tiedown
 
 export async function patchTiedown(actor: Principal, kitId: string, tiedownId: string, input: TiedownPatchInput): Promise<void> {
   require(actor, "fleet.manage");
-  await db.transaction(async (trx) => {
+  await audited(actor, async (trx, audit) => {
     const kit = await lockDraft(actor, kitId, trx);
     const tiedown = (await kits.listTiedowns(actor.organisationId, [kitId], trx)).find((t) => t.id === tiedownId);
     if (!tiedown) throw notFound("No such tiedown in this kit.");
     if (input.anchorPointId) await requireAnchor(actor, kit, input.anchorPointId, trx);
     const secures = input.secures === undefined ? undefined : await requireSecures(actor.organisationId, kit, input.secures, trx);
     await kits.updateTiedown(actor.organisationId, kitId, tiedownId, { ...input, secures }, trx);
-    await audit(actor, "kit.tiedown_updated", kitId, { tiedownId, ...input }, trx);
+    await audit({ action: "kit.tiedown_updated", entity: "kit", entityId: kitId, after: { tiedownId, ...input } });
   });
 }
 
 export async function removeTiedown(actor: Principal, kitId: string, tiedownId: string): Promise<void> {
   require(actor, "fleet.manage");
-  await db.transaction(async (trx) => {
+  await audited(actor, async (trx, audit) => {
     await lockDraft(actor, kitId, trx);
     if (!(await kits.deleteTiedown(actor.organisationId, kitId, tiedownId, trx))) throw notFound("No such tiedown in this kit.");
-    await audit(actor, "kit.tiedown_removed", kitId, { tiedownId }, trx);
+    await audit({ action: "kit.tiedown_removed", entity: "kit", entityId: kitId, after: { tiedownId } });
   });
 }
 
 export async function addItems(actor: Principal, kitId: string, tiedownId: string, itemIds: string[]): Promise<void> {
   require(actor, "fleet.manage");
   await guardTaken(actor, kitId, () =>
-    db.transaction(async (trx) => {
+    audited(actor, async (trx, audit) => {
       const kit = await lockDraft(actor, kitId, trx);
       const tiedown = (await kits.listTiedowns(actor.organisationId, [kitId], trx)).find((t) => t.id === tiedownId);
       if (!tiedown) throw notFound("No such tiedown in this kit.");
       if (tiedown.items.length + itemIds.length > 10) throw fieldError("itemIds", "At most 10 items in one tiedown.");
       await putItems(actor, kit, tiedownId, itemIds, trx);
-      await audit(actor, "kit.items_added", kitId, { tiedownId, itemIds }, trx);
+      await audit({ action: "kit.items_added", entity: "kit", entityId: kitId, after: { tiedownId, itemIds } });
     }),
   );
 }
 
 export async function removeItem(actor: Principal, kitId: string, tiedownId: string, itemId: string): Promise<void> {
   require(actor, "fleet.manage");
-  await db.transaction(async (trx) => {
+  await audited(actor, async (trx, audit) => {
     await lockDraft(actor, kitId, trx);
     if (!(await kits.deleteKitItem(actor.organisationId, kitId, tiedownId, itemId, trx))) throw notFound("No such item in this tiedown.");
-    await audit(actor, "kit.item_removed", kitId, { tiedownId, itemId }, trx);
+    await audit({ action: "kit.item_removed", entity: "kit", entityId: kitId, after: { tiedownId, itemId } });
   });
 }
 
@@ -274,7 +268,7 @@ export async function removeItem(actor: Principal, kitId: string, tiedownId: str
  */
 export async function placeKit(actor: Principal, kitId: string, input: PlacementInput): Promise<void> {
   require(actor, "fleet.manage");
-  await db.transaction(async (trx) => {
+  await audited(actor, async (trx, audit) => {
     const kit = await lockDraft(actor, kitId, trx);
     const mm = input.machineFrontFromDeckFrontMm;
     if (mm !== null) {
@@ -284,14 +278,14 @@ export async function placeKit(actor: Principal, kitId: string, input: Placement
       }
     }
     await kits.updateKit(actor.organisationId, kitId, { machineFrontFromDeckFrontMm: mm }, trx);
-    await audit(actor, "kit.placed", kitId, { machineFrontFromDeckFrontMm: mm }, trx, { machineFrontFromDeckFrontMm: kit.machineFrontFromDeckFrontMm });
+    await audit({ action: "kit.placed", entity: "kit", entityId: kitId, before: { machineFrontFromDeckFrontMm: kit.machineFrontFromDeckFrontMm }, after: { machineFrontFromDeckFrontMm: mm } });
   });
 }
 
 // A proposed kit
 
 /** The stock a proposal of this kit chooses from, and what it may not use with why (lib/kits/proposal.ts). */
-async function stockForProposal(organisationId: string, kit: Kit, trx: Knex) {
+async function stockForProposal(organisationId: string, kit: Kit, trx?: Tx) {
   const rows = await kits.stockWithHoldersOn(organisationId, kit.date, PROPOSAL_KINDS, trx);
   return proposalStock(
     kit.id,
@@ -329,11 +323,11 @@ export async function proposeForKit(actor: Principal, kitId: string, options: { 
   if (!options.apply) {
     const kit = await loadKit(actor.organisationId, kitId);
     if (!kit) throw notFound("No such kit.");
-    const { free, unavailable } = await stockForProposal(actor.organisationId, kit, db);
+    const { free, unavailable } = await stockForProposal(actor.organisationId, kit);
     return { ...proposalAnswer(proposeKit(kit, free, unavailable), free), applied: false };
   }
   return guardTaken(actor, kitId, () =>
-    db.transaction(async (trx) => {
+    audited(actor, async (trx, audit) => {
       const row = await lockDraft(actor, kitId, trx);
       const kit = (await modelsOf(actor.organisationId, [row], trx))[0]!;
       const { free, unavailable } = await stockForProposal(actor.organisationId, kit, trx);
@@ -349,7 +343,7 @@ export async function proposeForKit(actor: Principal, kitId: string, options: { 
         await putItems(actor, row, id, [...t.itemIds], trx);
       }
       const before = kit.tiedowns.map((t) => ({ label: t.label, anchorPointId: t.anchorPointId, itemIds: t.items.map((i) => i.id) }));
-      await audit(actor, "kit.proposal_applied", kitId, { tiedowns: proposal.tiedowns }, trx, { tiedowns: before });
+      await audit({ action: "kit.proposal_applied", entity: "kit", entityId: kitId, before: { tiedowns: before }, after: { tiedowns: proposal.tiedowns } });
       return { ...proposalAnswer(proposal, free), applied: true };
     }),
   );
@@ -378,7 +372,7 @@ export async function freeItems(actor: Principal, kitId: string, options: { forT
 export async function fillCorners(actor: Principal, kitId: string, fromTiedownId: string): Promise<CornerPlan[]> {
   require(actor, "fleet.manage");
   return guardTaken(actor, kitId, () =>
-    db.transaction(async (trx) => {
+    audited(actor, async (trx, audit) => {
       await lockDraft(actor, kitId, trx);
       const kit = (await loadKit(actor.organisationId, kitId, trx))!;
       const from = kit.tiedowns.find((t) => t.id === fromTiedownId);
@@ -396,7 +390,7 @@ export async function fillCorners(actor: Principal, kitId: string, fromTiedownId
           (await kits.insertTiedown(actor.organisationId, kitId, { label: plan.label, anchorPointId: plan.anchorPointId, attachment: plan.attachment, secures: "machine", machinePoint: plan.machinePoint }, position++, trx));
         await putItems(actor, stored, tiedownId, [...plan.itemIds], trx);
       }
-      await audit(actor, "kit.corners_filled", kitId, { fromTiedownId, plans }, trx);
+      await audit({ action: "kit.corners_filled", entity: "kit", entityId: kitId, after: { fromTiedownId, plans } });
       return plans;
     }),
   );
@@ -419,7 +413,7 @@ function itemBrief(i: { id: string; tagCode: string; description: string }) {
  */
 export async function transitionKit(actor: Principal, kitId: string, input: TransitionInput): Promise<void> {
   require(actor, "kits.load");
-  await db.transaction(async (trx) => {
+  await audited(actor, async (trx, audit) => {
     const row = await kits.lockKit(actor.organisationId, kitId, trx);
     if (!row) throw notFound("No such kit.");
     const rule = transitionRule(row.state, input.to);
@@ -480,7 +474,7 @@ export async function transitionKit(actor: Principal, kitId: string, input: Tran
       if ("error" in next) continue; // already out of use: the kit entry and the note below say it
       const [eventId] = await items.insertEvents([{ organisationId: actor.organisationId, itemId: item.id, type: "tag_out", note: `Reported damaged on return (${row.job}, ${row.date}): ${d.note}`, actorId: actor.userId }], trx);
       await items.updateItem(actor.organisationId, item.id, { status: next.status }, trx);
-      await writeAudit({ organisationId: actor.organisationId, actorId: actor.userId, action: "item.tagged_out", entity: "item", entityId: item.id, after: { status: next.status, note: d.note, kitId } }, trx);
+      await audit({ action: "item.tagged_out", entity: "item", entityId: item.id, after: { status: next.status, note: d.note, kitId } });
       await queueTagOutMail(trx, { organisationId: actor.organisationId, eventId: eventId!, reporterName: actor.name, item, defects: [], note: d.note });
     }
     for (const l of input.lost) {
@@ -489,10 +483,10 @@ export async function transitionKit(actor: Principal, kitId: string, input: Tran
       if ("error" in next) continue;
       await items.insertEvents([{ organisationId: actor.organisationId, itemId: item.id, type: "lost", note: `Not back from ${row.job} (${row.date}): ${l.note}`, actorId: actor.userId }], trx);
       await items.updateItem(actor.organisationId, item.id, { status: next.status }, trx);
-      await writeAudit({ organisationId: actor.organisationId, actorId: actor.userId, action: "item.lost", entity: "item", entityId: item.id, after: { status: next.status, note: l.note, kitId } }, trx);
+      await audit({ action: "item.lost", entity: "item", entityId: item.id, after: { status: next.status, note: l.note, kitId } });
     }
     await kits.updateKit(actor.organisationId, kitId, { state: input.to }, trx);
-    await audit(actor, KIT_STATE_ACTIONS[input.to], kitId, { state: input.to, scannedItemIds: input.scannedItemIds, damaged: input.damaged, lost: input.lost }, trx, { state: row.state });
+    await audit({ action: KIT_STATE_ACTIONS[input.to], entity: "kit", entityId: kitId, before: { state: row.state }, after: { state: input.to, scannedItemIds: input.scannedItemIds, damaged: input.damaged, lost: input.lost } });
   });
 }
 
@@ -504,7 +498,7 @@ export async function transitionKit(actor: Principal, kitId: string, input: Tran
 export async function copyKit(actor: Principal, kitId: string, input: { date: string; job?: string; site?: string | null }) {
   require(actor, "fleet.manage");
   return guardTaken(actor, kitId, () =>
-    db.transaction(async (trx) => {
+    audited(actor, async (trx, audit) => {
       const source = await loadKit(actor.organisationId, kitId, trx);
       if (!source) throw notFound("No such kit.");
       const row = (await kits.getKit(actor.organisationId, kitId, trx))!;
@@ -543,7 +537,7 @@ export async function copyKit(actor: Principal, kitId: string, input: { date: st
         }
         await kits.insertKitItems(actor.organisationId, copy, tiedownId, keep, trx);
       }
-      await audit(actor, "kit.copied", copyId, { from: kitId, date: input.date, leftOut: leftOut.map((l) => l.itemId) }, trx);
+      await audit({ action: "kit.copied", entity: "kit", entityId: copyId, after: { from: kitId, date: input.date, leftOut: leftOut.map((l) => l.itemId) } });
       return { id: copyId, leftOut };
     }),
   );
