@@ -2,11 +2,9 @@ import type { Metadata } from "next";
 import { notFound } from "next/navigation";
 import { PrintedCheck } from "@/components/securement/print/printed-check";
 import { PrintToolbar } from "@/components/securement/print/print-toolbar";
-import { getSavedCheck } from "@/db/saved-checks";
-import { can } from "@/lib/auth/roles";
 import { requirePage } from "@/lib/auth/session";
 import { isUuid } from "@/lib/http/ids";
-import { maySaveOver, savedCheckAnswer } from "@/lib/securement";
+import { readSavedCheck } from "@/lib/securement-checks/service";
 
 export const metadata: Metadata = { title: "Load check (print)" };
 
@@ -17,9 +15,8 @@ export const metadata: Metadata = { title: "Load check (print)" };
 export default async function PrintCheckPage({ params }: { params: Promise<{ id: string }> }) {
   const principal = await requirePage("securement.check");
   const { id } = await params;
-  const row = isUuid(id) ? await getSavedCheck(principal.organisationId, id) : undefined;
-  if (!row) notFound();
-  const check = savedCheckAnswer(row, maySaveOver({ userId: principal.userId, mayChangeAny: can(principal, "fleet.manage") }, row.savedById));
+  const check = isUuid(id) ? await readSavedCheck(principal, id) : undefined;
+  if (!check) notFound();
   return (
     <main className="mx-auto max-w-3xl bg-white">
       <style>{PRINT_CSS}</style>
