@@ -27,13 +27,10 @@ export function nameRefusal(error: unknown): (typeof NAME_KEYS)[keyof typeof NAM
 
 // Settings the fleet screens read
 
-/**
- * The organisation's preferred units and its time zone. The time zone column comes with the
- * settings page; until it exists every organisation's day is the UTC day.
- */
-export async function getFleetSettings(organisationId: string): Promise<{ units: UnitSystem; timeZone: string }> {
-  const row = await db("organisations").where({ id: organisationId }).first("*");
-  return { units: row?.units === "metric" ? "metric" : "us", timeZone: (row?.time_zone as string | undefined) || "UTC" };
+/** The organisation's preferred units (its time zone is organisationClock()'s, lib/organisations/service.ts). */
+export async function getUnits(organisationId: string): Promise<UnitSystem> {
+  const row = await db("organisations").where({ id: organisationId }).first("units");
+  return row?.units === "metric" ? "metric" : "us";
 }
 
 export async function setUnits(organisationId: string, units: UnitSystem, trx: Knex): Promise<UnitSystem | undefined> {

@@ -1,5 +1,5 @@
 import type { Knex } from "knex";
-import { addDays, dayIn } from "../lib/kits/dates";
+import { addDays, DEFAULT_TIME_ZONE, todayIn } from "../lib/time";
 import type { ItemStatus } from "../lib/stock/labels";
 import { itemUsability } from "../lib/stock/usability";
 
@@ -119,7 +119,7 @@ export async function seed(knex: Knex): Promise<void> {
   if (!org) return; // only the demo outfit gets demo machines
   if (await knex("machines").where({ organisation_id: org.id }).first("id")) return; // never twice
   const organisationId: string = org.id;
-  const today = dayIn((org.time_zone as string | undefined) || "UTC");
+  const today = todayIn((org.time_zone as string | undefined) || DEFAULT_TIME_ZONE);
   const tomorrow = addDays(today, 1);
 
   await knex.transaction(async (trx) => {

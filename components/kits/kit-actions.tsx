@@ -3,7 +3,7 @@ import Link from "next/link";
 import { useState } from "react";
 import { buttonClass } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
-import { addDays } from "@/lib/kits/dates";
+import { addDays } from "@/lib/time";
 import type { KitJson } from "@/lib/kits/answers";
 import { refusal } from "./item-picker";
 import { apiJson, useKit, useKitChange } from "./use-kit";

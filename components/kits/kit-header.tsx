@@ -1,6 +1,6 @@
 "use client";
 import { Toggle } from "@/components/ui/choice-group";
-import { dayLabel } from "@/lib/kits/dates";
+import { dayLabel } from "@/lib/time";
 import { formatLength, formatWeight, type UnitSystem } from "@/lib/kits/display";
 import type { KitJson } from "@/lib/kits/answers";
 import { refusal } from "./item-picker";

@@ -2,7 +2,7 @@
 import { CautionNote } from "@/components/securement/caution-note";
 import { FindingList } from "@/components/securement/check/finding-list";
 import { SeverityIcon } from "@/components/securement/severity";
-import { writtenDate } from "@/lib/kits/dates";
+import { writtenDate } from "@/lib/time";
 import { formatCheckWeight, type UnitSystem } from "@/lib/kits/display";
 import type { KitJson } from "@/lib/kits/answers";
 import { bandWords } from "@/lib/kits/placement";

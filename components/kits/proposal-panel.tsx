@@ -2,7 +2,7 @@
 import { useState } from "react";
 import { buttonClass } from "@/components/ui/button";
 import type { KitJson } from "@/lib/kits/answers";
-import { writtenDate } from "@/lib/kits/dates";
+import { writtenDate } from "@/lib/time";
 import { formatCheckWeight, formatWeight, type UnitSystem } from "@/lib/kits/display";
 import type { ProposalAnswer as ProposalAnswerJson } from "@/lib/kits/kit-service";
 import { strapsAllowed } from "@/lib/kits/proposal";

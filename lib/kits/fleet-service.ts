@@ -6,11 +6,10 @@ import { can, type Permission } from "@/lib/auth/roles";
 import type { Principal } from "@/lib/auth/session";
 import { AppError, conflict, fieldError, forbidden, notFound } from "@/lib/http/errors";
 import type { AuditAction } from "@/lib/audit/actions";
-import { inspectionIntervals } from "@/lib/organisations/service";
+import { inspectionIntervals, organisationClock } from "@/lib/organisations/service";
 import { nextDue } from "@/lib/stock/intervals";
 import { machineClassLabel } from "./answers";
 import { toMachine, toTrailer } from "./assemble";
-import { dayIn } from "./dates";
 import type { UnitSystem } from "./display";
 import { MACHINE_CLASSES, type AnchorStatus, type Machine, type Trailer } from "./model";
 import type { AnchorEventInput, MachineInput, TrailerInput } from "./schemas";
@@ -20,11 +19,6 @@ import type { AnchorEventInput, MachineInput, TrailerInput } from "./schemas";
 
 function require(actor: Principal, permission: Permission) {
   if (!can(actor, permission)) throw forbidden();
-}
-
-/** Today in the organisation's time zone (YYYY-MM-DD). */
-export async function organisationToday(organisationId: string): Promise<string> {
-  return dayIn((await fleet.getFleetSettings(organisationId)).timeZone);
 }
 
 export async function setUnitsPreference(actor: Principal, units: UnitSystem): Promise<void> {
@@ -257,8 +251,7 @@ const ANCHOR_WHY_NOT: Record<AnchorStatus, string> = {
 export async function recordAnchorEvent(actor: Principal, anchorPointId: string, input: AnchorEventInput): Promise<{ status: AnchorStatus; trailerId: string }> {
   const change = anchorChange(input);
   require(actor, change.permission);
-  const { timeZone } = await fleet.getFleetSettings(actor.organisationId);
-  const today = dayIn(timeZone);
+  const { today } = await organisationClock(actor.organisationId);
   const intervals = await inspectionIntervals(actor.organisationId);
   return audited(actor, async (trx, audit) => {
     const anchor = await fleet.lockAnchorPoint(actor.organisationId, anchorPointId, trx);

@@ -14,7 +14,7 @@ import { itemUsability, type UsabilityReason } from "@/lib/stock/usability";
 import { queueTagOutMail } from "@/lib/reminders/tag-out";
 import { kitItemJson, kitJson, kitListEntry, type KitJson } from "./answers";
 import { toAnchor, toKit, toKitItem } from "./assemble";
-import { addDays } from "./dates";
+import { addDays } from "@/lib/time";
 import { compareScan, kitEventNote, transitionRule } from "./lifecycle";
 import { cornerPlans, suggestItems, type CornerPlan } from "./matching";
 import { MAX_KIT_TIEDOWNS, type Kit, type KitItem } from "./model";

@@ -1,6 +1,6 @@
 import "server-only";
 import { notFound } from "next/navigation";
-import { getFleetSettings } from "@/db/fleet";
+import { getUnits } from "@/db/fleet";
 import type { Permission } from "@/lib/auth/roles";
 import { requirePage } from "@/lib/auth/session";
 import { isUuid } from "@/lib/http/ids";
@@ -19,6 +19,6 @@ export async function requireKitPage(permission: Permission, params: Promise<{ i
   if (!isUuid(id)) notFound();
   const kit = await loadKit(principal.organisationId, id);
   if (!kit) notFound();
-  const [{ units }, { timeZone, today }] = await Promise.all([getFleetSettings(principal.organisationId), organisationClock(principal.organisationId)]);
+  const [units, { timeZone, today }] = await Promise.all([getUnits(principal.organisationId), organisationClock(principal.organisationId)]);
   return { principal, kit: kitJson(kit), units, timeZone, today };
 }

@@ -11,7 +11,7 @@
  */
 import { z } from "zod";
 import { ATTACHMENTS } from "@/lib/securement";
-import { isIsoDate } from "./dates";
+import { isIsoDate } from "@/lib/time";
 import { UNIT_SYSTEMS } from "./display";
 import { COUPLINGS, DEFAULT_COUPLING, KIT_STATES, SIDES, TRAILER_TYPES, type TrailerType } from "./model";
 import { lengthField, weightField } from "./quantities";

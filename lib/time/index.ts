@@ -1,5 +1,5 @@
 import { TZDate } from "@date-fns/tz";
-import { addDays as addCalendarDays, format } from "date-fns";
+import { addDays as addCalendarDays, differenceInCalendarDays, format } from "date-fns";
 
 // One "today", and every date and time shown to a person, in the organisation's time zone
 // (an IANA name such as "America/Chicago"). Calendar dates (inspection due, in service since)
@@ -59,8 +59,7 @@ export function todayIn(zone: string, now: Date = new Date()): string {
  * @example addDays("2026-01-31", 30) // "2026-03-02"
  */
 export function addDays(day: string, days: number): string {
-  const [y, m, d] = day.split("-").map(Number);
-  return format(addCalendarDays(new TZDate(y, m - 1, d, "UTC"), days), "yyyy-MM-dd");
+  return format(addCalendarDays(calendarDay(day), days), "yyyy-MM-dd");
 }
 
 /**
@@ -79,12 +78,52 @@ export function formatDateTime(at: Date | string, zone: string): string {
   return format(new TZDate(new Date(at).getTime(), zone), "yyyy-MM-dd HH:mm");
 }
 
+const ISO_DAY = /^\d{4}-\d{2}-\d{2}$/;
+
 /**
- * Whole calendar days from one date to another (negative when `to` is earlier).
- * @example daysBetween("2026-12-01", "2026-12-09") // 8
+ * Whether a text is a real calendar date written YYYY-MM-DD.
+ * @example isIsoDate("2028-02-29") // true
+ * @example isIsoDate("2026-02-29") // false
+ */
+export function isIsoDate(text: string): boolean {
+  if (!ISO_DAY.test(text)) return false;
+  const at = new Date(`${text}T00:00:00Z`); // an impossible day (Feb 30) is Invalid Date or rolls over
+  return !Number.isNaN(at.getTime()) && at.toISOString().slice(0, 10) === text;
+}
+
+/** A calendar date (YYYY-MM-DD) as a date-fns date at midnight UTC: calendar arithmetic with no zone in it. */
+function calendarDay(day: string): TZDate {
+  const [y, m, d] = day.split("-").map(Number);
+  return new TZDate(y, m - 1, d, "UTC");
+}
+
+/**
+ * Whole calendar days from one date to another (negative when `to` comes first).
+ * @example daysBetween("2026-12-01", "2026-12-14") // 13
  */
 export function daysBetween(from: string, to: string): number {
-  return Math.round((Date.parse(`${to}T00:00:00Z`) - Date.parse(`${from}T00:00:00Z`)) / 86_400_000);
+  return differenceInCalendarDays(calendarDay(to), calendarDay(from));
+}
+
+/**
+ * A calendar date written out for people: weekday, day, month, year.
+ * @example writtenDate("2026-12-03") // "Thu 3 Dec 2026"
+ */
+export function writtenDate(day: string): string {
+  return format(calendarDay(day), "EEE d MMM yyyy");
+}
+
+/**
+ * A date as a planner says it, relative to today: "Today", "Tomorrow", "Yesterday", else the
+ * weekday; always followed by the date itself.
+ * @example dayLabel("2026-12-03", "2026-12-02") // "Tomorrow, Thu 3 Dec 2026"
+ * @example dayLabel("2026-12-09", "2026-12-02") // "Wed 9 Dec 2026"
+ */
+export function dayLabel(day: string, today: string): string {
+  const written = writtenDate(day);
+  const offset = daysBetween(today, day);
+  const word = offset === 0 ? "Today" : offset === 1 ? "Tomorrow" : offset === -1 ? "Yesterday" : null;
+  return word ? `${word}, ${written}` : written;
 }
 
 /**
@@ -92,7 +131,7 @@ export function daysBetween(from: string, to: string): number {
  * @example weekday("2026-12-09") // "Wed"
  */
 export function weekday(day: string): string {
-  return format(new TZDate(Date.parse(`${day}T12:00:00Z`), "UTC"), "EEE");
+  return format(calendarDay(day), "EEE");
 }
 
 /**

@@ -2,12 +2,12 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { KitCard } from "@/components/kits/kit-card";
 import { buttonClass } from "@/components/ui/button-class";
-import { getFleetSettings } from "@/db/fleet";
 import { can } from "@/lib/auth/roles";
 import { requirePage } from "@/lib/auth/session";
 import type { KitListEntry } from "@/lib/kits/answers";
-import { addDays, dayIn, dayLabel, isIsoDate } from "@/lib/kits/dates";
 import { kitsStillOut, listKitEntries } from "@/lib/kits/kit-service";
+import { organisationClock } from "@/lib/organisations/service";
+import { addDays, dayLabel, isIsoDate } from "@/lib/time";
 
 export const metadata: Metadata = { title: "Kits" };
 
@@ -16,8 +16,7 @@ const DAYS = 14;
 /** The coming days' kits by date, each with its state and verdict in words; gear still out first. */
 export default async function KitsPage({ searchParams }: { searchParams: Promise<{ from?: string }> }) {
   const principal = await requirePage("fleet.view");
-  const { timeZone } = await getFleetSettings(principal.organisationId);
-  const today = dayIn(timeZone);
+  const { today } = await organisationClock(principal.organisationId);
   const asked = (await searchParams).from;
   const from = asked && isIsoDate(asked) ? asked : today;
   const to = addDays(from, DAYS - 1);

@@ -2,7 +2,7 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { MachineClassForm } from "@/components/fleet/machine-class-form";
 import { buttonClass } from "@/components/ui/button-class";
-import { getFleetSettings, listMachineClasses } from "@/db/fleet";
+import { getUnits, listMachineClasses } from "@/db/fleet";
 import { can } from "@/lib/auth/roles";
 import { requirePage } from "@/lib/auth/session";
 import { machineClassLabel } from "@/lib/kits/answers";
@@ -14,7 +14,7 @@ export const metadata: Metadata = { title: "Machines" };
 /** The machines the outfit hauls, with what the kit builder needs to know of each. */
 export default async function MachinesPage() {
   const principal = await requirePage("fleet.view");
-  const [machines, { units }] = await Promise.all([listMachines(principal.organisationId), getFleetSettings(principal.organisationId)]);
+  const [machines, units] = await Promise.all([listMachines(principal.organisationId), getUnits(principal.organisationId)]);
   const owner = can(principal, "settings.manage");
   const classes = owner ? await listMachineClasses(principal.organisationId) : [];
   return (

@@ -2,7 +2,7 @@ import type { Metadata } from "next";
 import { CreateTokenForm, IntervalsForm, OrganisationForm, RevokeTokenButton } from "@/components/settings/settings-forms";
 import { DigestTimeForm, ResendMailButton } from "@/components/settings/mail-settings";
 import { UnitsForm } from "@/components/settings/units-form";
-import { getFleetSettings } from "@/db/fleet";
+import { getUnits } from "@/db/fleet";
 import { listApiTokens } from "@/db/api-tokens";
 import { getOrganisation } from "@/db/organisations";
 import { failedMail } from "@/lib/mail/service";
@@ -16,18 +16,18 @@ export const metadata: Metadata = { title: "Settings" };
 
 export default async function SettingsPage() {
   const principal = await requirePage("settings.manage");
-  const [organisation, tokens, intervals, fleet, failed] = await Promise.all([
+  const [organisation, tokens, intervals, units, failed] = await Promise.all([
     getOrganisation(principal.organisationId),
     listApiTokens(principal.organisationId),
     inspectionIntervals(principal.organisationId),
-    getFleetSettings(principal.organisationId),
+    getUnits(principal.organisationId),
     failedMail(principal),
   ]);
   return (
     <div className="flex max-w-3xl flex-col gap-6">
       <h1 className="text-3xl font-bold">Settings</h1>
       <OrganisationForm name={organisation!.name} publicTagView={organisation!.publicTagView} timeZone={organisation!.timeZone} timeZones={timeZones()} action={saveOrganisationAction} />
-      <UnitsForm units={fleet.units} action={saveUnitsAction} />
+      <UnitsForm units={units} action={saveUnitsAction} />
       <IntervalsForm intervals={intervals} action={saveIntervalsAction} />
       <section aria-labelledby="mail-heading" className="flex flex-col gap-3 rounded-xl border-2 border-ink-soft p-4">
         <h2 id="mail-heading" className="text-xl font-bold">E-mail</h2>

@@ -1,21 +1,21 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { buttonClass } from "@/components/ui/button-class";
-import { getFleetSettings } from "@/db/fleet";
+import { getUnits } from "@/db/fleet";
 import { can } from "@/lib/auth/roles";
 import { requirePage } from "@/lib/auth/session";
-import { dayIn } from "@/lib/kits/dates";
 import { formatLength, formatWeight } from "@/lib/kits/display";
 import { listTrailers } from "@/lib/kits/fleet-service";
 import { TRAILER_TYPE_LABELS } from "@/lib/kits/model";
+import { organisationClock } from "@/lib/organisations/service";
 
 export const metadata: Metadata = { title: "Trailers" };
 
 /** The trailers, each with how many of its anchor points may be used today. */
 export default async function TrailersPage() {
   const principal = await requirePage("fleet.view");
-  const { units, timeZone } = await getFleetSettings(principal.organisationId);
-  const trailers = await listTrailers(principal.organisationId, dayIn(timeZone));
+  const [units, { today }] = await Promise.all([getUnits(principal.organisationId), organisationClock(principal.organisationId)]);
+  const trailers = await listTrailers(principal.organisationId, today);
   return (
     <div className="flex max-w-3xl flex-col gap-5">
       <div className="flex flex-wrap items-center justify-between gap-3">

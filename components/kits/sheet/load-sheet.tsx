@@ -2,7 +2,7 @@ import { KitDeck } from "@/components/kits/deck/kit-deck";
 import { SEVERITY_WORDS } from "@/components/securement/severity";
 import { ATTACHMENT_LABELS } from "@/lib/forms/securement-draft";
 import { kitFromJson, type KitJson } from "@/lib/kits/answers";
-import { writtenDate } from "@/lib/kits/dates";
+import { writtenDate } from "@/lib/time";
 import { deckPicture } from "@/lib/kits/deck";
 import { formatCheckWeight, formatLength, formatWeight, type UnitSystem } from "@/lib/kits/display";
 import { SIDE_LABELS } from "@/lib/kits/model";

@@ -1,9 +1,8 @@
 import type { SavedCheckAnswer, SecurementCheckRequest } from "@/lib/securement";
 import { formatNumber, SECUREMENT_CAUTION } from "@/lib/securement";
 import { ATTACHMENT_LABELS } from "@/lib/forms/securement-draft";
+import { formatDateTime } from "@/lib/time";
 import { CheckResult } from "../check/check-result";
-
-const day = (iso: string) => new Date(iso).toLocaleString("en-US", { year: "numeric", month: "long", day: "numeric", hour: "numeric", minute: "2-digit", timeZoneName: "short" });
 
 function cargoLine(c: SecurementCheckRequest["cargo"]): string {
   const parts = [
@@ -17,8 +16,12 @@ function cargoLine(c: SecurementCheckRequest["cargo"]): string {
   return parts.join(" · ");
 }
 
-/** A saved load check on paper: what was entered, the answer worked out now, and the caution. */
-export function PrintedCheck({ check, printedAt }: { check: SavedCheckAnswer; printedAt: string }) {
+/**
+ * A saved load check on paper: what was entered, the answer worked out now, and the caution.
+ * Times are on the organisation's clock (`timeZone`), named once after the printing time.
+ */
+export function PrintedCheck({ check, printedAt, timeZone }: { check: SavedCheckAnswer; printedAt: Date; timeZone: string }) {
+  const day = (at: Date | string) => formatDateTime(at, timeZone);
   return (
     <article className="check-print flex flex-col gap-4 px-4 py-6 text-ink">
       <header className="flex flex-col gap-1 border-b-2 border-ink pb-3">
@@ -26,7 +29,7 @@ export function PrintedCheck({ check, printedAt }: { check: SavedCheckAnswer; pr
         <h1 className="text-3xl font-bold leading-tight">{check.name}</h1>
         <p className="text-base">
           Saved by {check.savedBy}, {day(check.savedAt)}
-          {check.updatedAt !== check.savedAt ? `; last changed by ${check.updatedBy}, ${day(check.updatedAt)}` : ""}. Printed {day(printedAt)}.
+          {check.updatedAt !== check.savedAt ? `; last changed by ${check.updatedBy}, ${day(check.updatedAt)}` : ""}. Printed {day(printedAt)} ({timeZone}).
         </p>
         <p className="text-base">
           Checked again at printing against the rules as Linkyard applies them today; when it was saved it {check.passAtSave ? "met" : "did not meet"} the published minimums.

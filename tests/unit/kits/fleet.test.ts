@@ -2,7 +2,6 @@
 // module as `<module>.suite.ts`, imported here so that vitest starts one worker for them all.
 import "./quantities.suite";
 import "./display.suite";
-import "./dates.suite";
 import "./schemas.suite";
 import "./matching.suite";
 import "./lifecycle.suite";

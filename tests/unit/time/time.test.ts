@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { addDays, canonicalTimeZone, clockTimeIn, daysBetween, formatDateTime, formatDay, isTimeZone, timeZones, todayIn, weekday } from "@/lib/time";
+import { addDays, canonicalTimeZone, clockTimeIn, dayLabel, daysBetween, formatDateTime, formatDay, isIsoDate, isTimeZone, timeZones, todayIn, weekday, writtenDate } from "@/lib/time";
 
 describe("todayIn", () => {
   it("a US yard (America/Chicago) at 7 pm local on 2026-12-01 sees 2026-12-01, not 12-02", () => {
@@ -74,5 +74,29 @@ describe("daysBetween, weekday and clockTimeIn", () => {
   it("gives the wall-clock time of an instant in a zone", () => {
     expect(clockTimeIn("America/Chicago", new Date("2026-07-02T13:05:00Z"))).toBe("08:05"); // daylight time
     expect(clockTimeIn("UTC", new Date("2026-07-02T00:00:00Z"))).toBe("00:00");
+  });
+});
+
+describe("calendar dates (kits are for a date)", () => {
+  it("knows a real date from a wrong one", () => {
+    expect(isIsoDate("2026-12-03")).toBe(true);
+    expect(isIsoDate("2028-02-29")).toBe(true);
+    expect(isIsoDate("2026-02-29")).toBe(false);
+    expect(isIsoDate("2026-13-01")).toBe(false);
+    expect(isIsoDate("3/12/2026")).toBe(false);
+  });
+
+  it("adds days across months and years", () => {
+    expect(addDays("2026-12-31", 1)).toBe("2027-01-01");
+    expect(addDays("2028-03-01", -1)).toBe("2028-02-29");
+    expect(daysBetween("2026-12-01", "2026-12-14")).toBe(13);
+  });
+
+  it("writes a date out, and says it as a planner does", () => {
+    expect(writtenDate("2026-12-03")).toBe("Thu 3 Dec 2026");
+    expect(dayLabel("2026-12-03", "2026-12-02")).toBe("Tomorrow, Thu 3 Dec 2026");
+    expect(dayLabel("2026-12-02", "2026-12-02")).toBe("Today, Wed 2 Dec 2026");
+    expect(dayLabel("2026-12-01", "2026-12-02")).toBe("Yesterday, Tue 1 Dec 2026");
+    expect(dayLabel("2026-12-09", "2026-12-02")).toBe("Wed 9 Dec 2026");
   });
 });

@@ -1,19 +1,19 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { NewKitForm } from "@/components/kits/new-kit-form";
-import { getFleetSettings } from "@/db/fleet";
+import { getUnits } from "@/db/fleet";
 import { requirePage } from "@/lib/auth/session";
-import { addDays, dayIn, isIsoDate } from "@/lib/kits/dates";
 import { formatWeight } from "@/lib/kits/display";
 import { listMachines, listTrailers } from "@/lib/kits/fleet-service";
+import { organisationClock } from "@/lib/organisations/service";
+import { addDays, isIsoDate } from "@/lib/time";
 
 export const metadata: Metadata = { title: "Plan a kit" };
 
 /** A new kit for a date (tomorrow unless asked), a job, a machine and a trailer. */
 export default async function NewKitPage({ searchParams }: { searchParams: Promise<{ date?: string }> }) {
   const principal = await requirePage("fleet.manage");
-  const { units, timeZone } = await getFleetSettings(principal.organisationId);
-  const today = dayIn(timeZone);
+  const [units, { today }] = await Promise.all([getUnits(principal.organisationId), organisationClock(principal.organisationId)]);
   const asked = (await searchParams).date;
   const [machines, trailers] = await Promise.all([listMachines(principal.organisationId), listTrailers(principal.organisationId, today)]);
   return (

@@ -2,7 +2,7 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
 import { MachineForm } from "@/components/fleet/machine-form";
-import { getFleetSettings, getMachine } from "@/db/fleet";
+import { getMachine, getUnits } from "@/db/fleet";
 import { can } from "@/lib/auth/roles";
 import { requirePage } from "@/lib/auth/session";
 import { isUuid } from "@/lib/http/ids";
@@ -30,7 +30,7 @@ export default async function MachinePage({ params, searchParams }: { params: Pr
   const row = await getMachine(principal.organisationId, id);
   if (!row) notFound();
   const m = machineJson(toMachine(row));
-  const { units } = await getFleetSettings(principal.organisationId);
+  const units = await getUnits(principal.organisationId);
   const saved = (await searchParams).saved === "1";
   return (
     <div className="flex max-w-3xl flex-col gap-5">

@@ -4,16 +4,17 @@ import { notFound } from "next/navigation";
 import { AnchorActions } from "@/components/fleet/anchor-actions";
 import { TrailerForm } from "@/components/fleet/trailer-form";
 import { UsableBadge } from "@/components/kits/state-badge";
-import { getFleetSettings, latestAnchorEvents } from "@/db/fleet";
+import { getUnits, latestAnchorEvents } from "@/db/fleet";
 import { kitsUsingAnchor } from "@/db/kits";
 import { can } from "@/lib/auth/roles";
 import { requirePage } from "@/lib/auth/session";
 import { isUuid } from "@/lib/http/ids";
 import { trailerJson } from "@/lib/kits/answers";
-import { dayIn } from "@/lib/kits/dates";
 import { formatLength, formatWeight } from "@/lib/kits/display";
 import { getTrailer } from "@/lib/kits/fleet-service";
 import { ANCHOR_STATUS_LABELS, COUPLING_LABELS, SIDE_LABELS } from "@/lib/kits/model";
+import { organisationClock } from "@/lib/organisations/service";
+import { formatDay } from "@/lib/time";
 
 export const metadata: Metadata = { title: "Trailer" };
 
@@ -40,8 +41,7 @@ export default async function TrailerPage({ params, searchParams }: { params: Pr
   const principal = await requirePage("fleet.view");
   const { id } = await params;
   if (!isUuid(id)) notFound();
-  const { units, timeZone } = await getFleetSettings(principal.organisationId);
-  const today = dayIn(timeZone);
+  const [units, { timeZone, today }] = await Promise.all([getUnits(principal.organisationId), organisationClock(principal.organisationId)]);
   const trailer = await getTrailer(principal.organisationId, id, today).catch(() => null);
   if (!trailer) notFound();
   const t = trailerJson(trailer);
@@ -89,7 +89,7 @@ export default async function TrailerPage({ params, searchParams }: { params: Pr
                 {!a.usable.ok && <p className="text-base font-bold text-stop">{a.usable.reasons.map((r) => r.message).join(" ")}</p>}
                 {last && last.type !== "created" && (
                   <p className="text-base">
-                    {EVENT_WORDS[last.type] ?? last.type} {new Date(last.at).toISOString().slice(0, 10)}
+                    {EVENT_WORDS[last.type] ?? last.type} {formatDay(last.at, timeZone)}
                     {last.actorName && ` by ${last.actorName}`}
                     {last.note && `: “${last.note}”`}
                   </p>

@@ -1,7 +1,7 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { LoadScreen } from "@/components/kits/load-screen";
-import { dayLabel } from "@/lib/kits/dates";
+import { dayLabel } from "@/lib/time";
 import { requireKitPage } from "@/lib/kits/page-kit";
 
 export const metadata: Metadata = { title: "Load or return a kit" };

@@ -4,6 +4,7 @@ import { PrintedCheck } from "@/components/securement/print/printed-check";
 import { PrintToolbar } from "@/components/securement/print/print-toolbar";
 import { requirePage } from "@/lib/auth/session";
 import { isUuid } from "@/lib/http/ids";
+import { organisationClock } from "@/lib/organisations/service";
 import { readSavedCheck } from "@/lib/securement-checks/service";
 
 export const metadata: Metadata = { title: "Load check (print)" };
@@ -17,11 +18,12 @@ export default async function PrintCheckPage({ params }: { params: Promise<{ id:
   const { id } = await params;
   const check = isUuid(id) ? await readSavedCheck(principal, id) : undefined;
   if (!check) notFound();
+  const { timeZone } = await organisationClock(principal.organisationId);
   return (
     <main className="mx-auto max-w-3xl bg-white">
       <style>{PRINT_CSS}</style>
       <PrintToolbar backHref={`/check?saved=${check.id}`} />
-      <PrintedCheck check={check} printedAt={new Date().toISOString()} />
+      <PrintedCheck check={check} printedAt={new Date()} timeZone={timeZone} />
     </main>
   );
 }

@@ -1,12 +1,13 @@
 import { uuidParam } from "@/lib/http/errors";
 import { route } from "@/lib/http/route";
 import { trailerJson } from "@/lib/kits/answers";
-import { editTrailer, getTrailer, organisationToday } from "@/lib/kits/fleet-service";
+import { editTrailer, getTrailer } from "@/lib/kits/fleet-service";
 import { onDateQuerySchema, trailerInputSchema } from "@/lib/kits/schemas";
+import { organisationClock } from "@/lib/organisations/service";
 
 /** The trailer and its anchor points in use or out of use, each judged for `on` (default today). */
 export const GET = route("fleet.view", { query: onDateQuerySchema }, async ({ principal, params, query }) => {
-  const on = query.on ?? (await organisationToday(principal.organisationId));
+  const on = query.on ?? ((await organisationClock(principal.organisationId)).today);
   return trailerJson(await getTrailer(principal.organisationId, uuidParam(params.id, "trailer"), on));
 });
 
@@ -17,6 +18,6 @@ export const GET = route("fleet.view", { query: onDateQuerySchema }, async ({ pr
 export const PUT = route("fleet.manage", { body: trailerInputSchema }, async ({ principal, params, body }) => {
   const id = uuidParam(params.id, "trailer");
   const { retired } = await editTrailer(principal, id, body);
-  const on = await organisationToday(principal.organisationId);
+  const on = (await organisationClock(principal.organisationId)).today;
   return { ...trailerJson(await getTrailer(principal.organisationId, id, on)), retired };
 });
