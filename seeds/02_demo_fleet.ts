@@ -1,6 +1,7 @@
 import type { Knex } from "knex";
 import { addDays, DEFAULT_TIME_ZONE, todayIn } from "../lib/time";
 import type { ItemStatus } from "../lib/stock/labels";
+import { MM_PER_IN } from "../lib/securement/units";
 import { itemUsability } from "../lib/stock/usability";
 
 // The demo outfit's machines and trailers (invented names and figures in the range of
@@ -12,7 +13,7 @@ const ORGANISATION = "Corvid Hollow Groundworks";
 const PLANNER = "demo-planner-pete";
 const YARD_HAND = "demo-yard-yara";
 
-const ft = (feet: number, inches = 0) => Math.round((feet * 12 + inches) * 25.4);
+const ft = (feet: number, inches = 0) => Math.round((feet * 12 + inches) * MM_PER_IN);
 
 const MACHINES = [
   {

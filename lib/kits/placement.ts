@@ -48,7 +48,7 @@
  *
  * @module
  */
-import { formatLbKg, formatNumber, roundHalfUp, type Severity } from "@/lib/securement";
+import { formatLbKg, formatNumber, MM_PER_IN, roundHalfUp, type Severity } from "@/lib/securement";
 import type { Coupling, Kit, Machine, Trailer } from "./model";
 
 /**
@@ -244,7 +244,7 @@ type PlacementTrailer = Pick<Trailer, "coupling" | "deckLengthMm" | "gvwrLb" | "
  */
 export function formatMetres(mm: number): string {
   const sign = mm < 0 ? "−" : "";
-  const inches = Math.round(Math.abs(mm) / 25.4);
+  const inches = Math.round(Math.abs(mm) / MM_PER_IN);
   return `${sign}${(Math.abs(mm) / 1000).toFixed(2)} m (${sign}${Math.floor(inches / 12)} ft ${inches % 12} in)`;
 }
 

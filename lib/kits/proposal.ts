@@ -50,13 +50,15 @@ import {
   meetsAggregate,
   minimumTiedowns,
   requiredAggregateWll,
+  settle,
   sizeMatchesRow,
+  toFeet,
   tryParseSize,
   type Attachment,
   type SecurementCheckResult,
 } from "@/lib/securement";
 import type { UsabilityCode } from "@/lib/stock/usability";
-import type { AnchorPoint, BuiltInMachineClass, Kit, KitItem, KitTiedown, MachinePoint, Side } from "./model";
+import type { AnchorPoint, BuiltInMachineClass, Kit, KitItem, KitTiedown, Machine, MachinePoint, Side } from "./model";
 import { kitVerdict, placementFails } from "./plan";
 import { formatMetres } from "./placement";
 
@@ -215,6 +217,11 @@ function chooseAnchor(candidates: readonly AnchorPoint[], atMm: number, targetLb
   return sorted[0] ?? null;
 }
 
+/** The machine's minimum number of tiedowns, its length in feet converted as the engine converts it (lib/securement/check.ts). */
+function machineMinimum(machine: Machine) {
+  return minimumTiedowns({ kind: "machine", weightLb: machine.weightLb, lengthFt: settle(toFeet({ value: machine.lengthMm, unit: "mm" }).value), blockedAtFront: false });
+}
+
 function slotsFor(kit: Kit, targetLb: number, notes: string[]): Slot[] {
   const { machine, trailer } = kit;
   const p = kit.machineFrontFromDeckFrontMm ?? 0;
@@ -239,7 +246,7 @@ function slotsFor(kit: Kit, targetLb: number, notes: string[]): Slot[] {
   }
 
   // 49 CFR 393.110 asks for more than four only on a machine longer than 30 ft: add them mid-machine.
-  const minimum = minimumTiedowns({ kind: "machine", weightLb: machine.weightLb, lengthFt: machine.lengthMm / 304.8, blockedAtFront: false });
+  const minimum = machineMinimum(machine);
   for (let i = 4; i < minimum.count; i++) {
     const side: Side = i % 2 === 0 ? "left" : "right";
     const mid = p + machine.lengthMm / 2;
@@ -596,7 +603,7 @@ export function proposeKit(kit: Kit, free: readonly KitItem[], unavailable: read
   const heavy = isHeavyMachine("machine", machine.weightLb);
   const requiredLb = requiredAggregateWll(machine.weightLb);
   const straps = strapsAllowed(machine.machineClass);
-  const machineSlots = Math.max(4, minimumTiedowns({ kind: "machine", weightLb: machine.weightLb, lengthFt: machine.lengthMm / 304.8, blockedAtFront: false }).count);
+  const machineSlots = Math.max(4, machineMinimum(machine).count);
   // A direct tiedown counts half its WLL, so n on the machine need W / n each to reach W / 2 between them.
   const targetLb = Math.max(heavy ? HANDBOOK_MIN_TIEDOWN_WLL_LB : 0, Math.ceil(machine.weightLb / machineSlots));
   const slots = slotsFor(kit, targetLb, notes);

@@ -1,12 +1,12 @@
 /**
  * Quantities at the edges of the fleet API: `{ value, unit }` in, whole pounds and whole
  * millimetres stored, and back. Conversions use the securement engine's exact factors
- * (1 lb = 0.45359237 kg, 1 in = 25.4 mm: lib/securement/units.ts) and round once, at the end.
+ * (lib/securement/units.ts) and round once, at the end.
  *
  * @module
  */
 import { z } from "zod";
-import { settle, toLb, toMillimetres } from "@/lib/securement";
+import { settle, toFeet, toLb, toMillimetres } from "@/lib/securement";
 
 /**
  * Units a fleet weight is given in.
@@ -117,7 +117,7 @@ export function lengthField(what: string, minMm: number, maxMm: number) {
     .transform((l, ctx) => {
       const mm = toWholeMm(l);
       if (mm < minMm || mm > maxMm) {
-        ctx.addIssue({ code: "custom", path: ["value"], message: `The ${what} must be between ${minMm} and ${maxMm.toLocaleString("en-US")} mm (${(maxMm / 304.8).toFixed(0)} ft); check the figure.` });
+        ctx.addIssue({ code: "custom", path: ["value"], message: `The ${what} must be between ${minMm} and ${maxMm.toLocaleString("en-US")} mm (${toFeet({ value: maxMm, unit: "mm" }).value.toFixed(0)} ft); check the figure.` });
         return z.NEVER;
       }
       return mm;

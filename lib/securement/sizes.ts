@@ -28,7 +28,7 @@ export type SizeInput = string | number;
  * A size that was read successfully.
  *
  * - `system`: `"inch"` when given in inches (or as a bare number), `"metric"` when in mm.
- * - `inches`, `mm`: the value in both units (one of them converted, exact factor 25.4).
+ * - `inches`, `mm`: the value in both units (one of them converted, exact factor MM_PER_IN).
  * - `label`: canonical label: a reduced fraction for inch sizes ("3/8", "1 3/4", "2"), a
  *   decimal when the value is not a whole number of 64ths ("0.029"), or "10 mm" for metric.
  * - `display`: the label with its unit ("3/8 in", "10 mm").

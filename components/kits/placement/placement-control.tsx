@@ -2,11 +2,11 @@
 import { useEffect, useId, useRef, useState } from "react";
 import type { Machine, Trailer } from "@/lib/kits/model";
 import { bandWords, formatMetres, inBandRange, placeMachine, positionLimits, type Placement } from "@/lib/kits/placement";
-import { formatNumber, KG_PER_LB } from "@/lib/securement";
+import { formatNumber, KG_PER_LB, M_PER_FT, MM_PER_IN } from "@/lib/securement";
 import { SEVERITY_BORDER, SEVERITY_TEXT, SeverityLabel } from "@/components/securement/severity";
 
 type DistanceUnit = "m" | "ft" | "in";
-const MM_PER: Record<DistanceUnit, number> = { m: 1000, ft: 304.8, in: 25.4 };
+const MM_PER: Record<DistanceUnit, number> = { m: 1000, ft: M_PER_FT * 1000, in: MM_PER_IN };
 const DECIMALS: Record<DistanceUnit, number> = { m: 2, ft: 2, in: 1 };
 /** The position is saved this long after the planner stops moving the machine. */
 const SETTLE_MS = 400;
