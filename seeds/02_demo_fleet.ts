@@ -17,7 +17,7 @@ const ft = (feet: number, inches = 0) => Math.round((feet * 12 + inches) * MM_PE
 
 const MACHINES = [
   {
-    name: "Marten 35 mini excavator",
+    name: "Unit 12 mini excavator",
     machine_class: "mini-excavator",
     weight_lb: 8100,
     length_mm: 4900,
@@ -34,7 +34,7 @@ const MACHINES = [
     cg_from_front_mm: 2300,
   },
   {
-    name: "Badger T76 track loader",
+    name: "Unit 7 track loader",
     machine_class: "compact-track-loader",
     weight_lb: 10400,
     length_mm: 3800,
@@ -51,7 +51,7 @@ const MACHINES = [
     cg_from_front_mm: null,
   },
   {
-    name: "Heron 50 wheel loader",
+    name: "Unit 4 wheel loader",
     machine_class: "wheel-loader",
     weight_lb: 9300,
     length_mm: 5200,
@@ -127,7 +127,7 @@ export async function seed(knex: Knex): Promise<void> {
     const machines: { id: string; name: string }[] = await trx("machines")
       .insert(MACHINES.map((m) => ({ ...m, organisation_id: organisationId, accessories: JSON.stringify(m.accessories), tiedown_points: JSON.stringify(m.tiedown_points) })))
       .returning(["id", "name"]);
-    const machine = (name: string) => machines.find((m) => m.name.startsWith(name))!.id;
+    const machine = (name: string) => machines.find((m) => m.name === name)!.id;
 
     const anchors = new Map<string, string>();
     const trailers = new Map<string, string>();
@@ -182,7 +182,7 @@ export async function seed(knex: Knex): Promise<void> {
     await kit({
       job: "Hollins driveway",
       site: "14 Quarry Lane, Hollins",
-      machine: "Marten",
+      machine: "Unit 12 mini excavator",
       trailer: "Deck 20 tilt",
       placedMm: 1000,
       tiedowns: [
@@ -202,7 +202,7 @@ export async function seed(knex: Knex): Promise<void> {
     await kit({
       job: "Brookside culvert",
       site: "Brookside Road culvert, by the mill bridge",
-      machine: "Badger",
+      machine: "Unit 7 track loader",
       trailer: "Gooseneck 25+5",
       tiedowns: [
         corner("front left", "L1", ["CH7-38", "BR-516-38"]),

@@ -91,7 +91,7 @@ export function MachineForm({ machine, classes, units }: { machine?: MachineJson
       <div role="alert" aria-live="polite">
         {problem && <p className="rounded-lg border-2 border-stop bg-stop-bg p-3 text-lg font-bold text-stop">{problem.message}</p>}
       </div>
-      <Field label="Name" name="name" value={name} onChange={(e) => setName(e.target.value)} error={issueAt(issues, "name")} maxLength={80} hint="As the crew says it, e.g. Badger 35 mini excavator" />
+      <Field label="Name" name="name" value={name} onChange={(e) => setName(e.target.value)} error={issueAt(issues, "name")} maxLength={80} hint="As the crew says it, e.g. Unit 12 mini excavator" />
       <SelectField label="Class" name="class" value={machineClass} onChange={(e) => setClass(e.target.value)} error={issueAt(issues, "class")} options={classes} />
       <FleetQuantity label="Shipping weight" name="weight" kind="weight" value={weight} onChange={setWeight} error={issueAt(issues, "weight")} hint="With the bucket, blade and anything else that rides on it" />
       <FleetQuantity label="Transport length" name="length" kind="length" value={length} onChange={setLength} error={issueAt(issues, "length")} />

@@ -158,7 +158,7 @@ export interface TiedownLine {
  * The machine as drawn.
  *
  * @example
- * const m: MachineMark = { name: "Ridgeback 8", rect: { … }, placed: true, widthAssumed: false, frontFromDeckFrontMm: 300, nameTag: { … }, frontTag: { … }, points: [] };
+ * const m: MachineMark = { name: "Unit 8", rect: { … }, placed: true, widthAssumed: false, frontFromDeckFrontMm: 300, nameTag: { … }, frontTag: { … }, points: [] };
  */
 export interface MachineMark {
   readonly name: string;

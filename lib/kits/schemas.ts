@@ -61,7 +61,7 @@ const side = z.enum(SIDES, { error: "The side is left, right or centre." });
  * A machine, as POST and PUT /api/v1/machines take it.
  *
  * @example
- * machineInputSchema.parse({ name: "Badger 35", class: "mini-excavator", weight: { value: 8100, unit: "lb" },
+ * machineInputSchema.parse({ name: "Unit 12", class: "mini-excavator", weight: { value: 8100, unit: "lb" },
  *   length: { value: 4.9, unit: "m" }, articulated: false, accessories: ["bucket", "blade"] });
  * // { ..., weightLb: 8100, lengthMm: 4900, ... }
  */

@@ -185,7 +185,7 @@ export function kitLostItemMail(p: {
 
 /**
  * A kit for tomorrow does not pass its securement check (the morning check).
- * @example kitCheckMail({ to, job: "Main St", kitDate: "2026-12-10", machine: "KX040", trailer: "Tilt 1", reasons: ["Aggregate WLL too low."], link }).subject // "Kit for Main St tomorrow does not pass its check"
+ * @example kitCheckMail({ to, job: "Main St", kitDate: "2026-12-10", machine: "Unit 12 mini excavator", trailer: "Tilt 1", reasons: ["Aggregate WLL too low."], link }).subject // "Kit for Main St tomorrow does not pass its check"
  */
 export function kitCheckMail(p: { to: string; job: string; kitDate: string; machine: string; trailer: string; reasons: string[]; link: string }): MailMessage {
   return {

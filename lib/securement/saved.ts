@@ -23,7 +23,7 @@ import { securementCheckRequestSchema } from "./schema";
  * a name and the request exactly as `POST /api/v1/securement-checks` takes it.
  *
  * @example
- * savedCheckInputSchema.parse({ name: "KX040 on the 20 ft tilt", request });
+ * savedCheckInputSchema.parse({ name: "Unit 12 on the 20 ft tilt", request });
  */
 export const savedCheckInputSchema = z.strictObject({
   name: z.string({ error: "Give the check a name" }).trim().min(1, { error: "Give the check a name" }).max(80, { error: "Keep the name under 80 characters" }),
@@ -53,7 +53,7 @@ export function maySaveOver(actor: { readonly userId: string; readonly mayChange
  * A saved check as stored (db/saved-checks.ts), the part this module reads.
  *
  * @example
- * const row: StoredCheck = { id, name: "KX040", passAtSave: true, savedById: "u1", savedBy: "Yara", savedAt, updatedBy: "Yara", updatedAt, request };
+ * const row: StoredCheck = { id, name: "Unit 12", passAtSave: true, savedById: "u1", savedBy: "Yara", savedAt, updatedBy: "Yara", updatedAt, request };
  */
 export interface StoredCheck {
   readonly id: string;

@@ -199,7 +199,7 @@ describe("where the machine sits, on the builder", () => {
       await section.screenshot({ path: `${SCREENSHOT_DIR}/builder-placement-${i + 1}-phone.png` });
     }
     // By hand (Deck 20 tilt: 3,600 lb empty, 450 lb on the pintle, axle 18 ft = 5,486 mm from the hitch, deck 1,500 mm behind it;
-    // Marten 35: 8,100 lb, CG 2,300 mm from its front): T = 450 + 8,100 × (5,486 − (1,500 + p + 2,300)) / 5,486.
+    // Unit 12: 8,100 lb, CG 2,300 mm from its front): T = 450 + 8,100 × (5,486 − (1,500 + p + 2,300)) / 5,486.
     expect(seen).toEqual(["2,939 lb", "2,053 lb", "1,182 lb"]);
     expect(await section.textContent()).toContain("In the band");
     const audits = await testDb("audit_log").where({ entity: "kit", entity_id: kitId, action: "kit.placed" }).count<{ count: string }[]>("id as count");

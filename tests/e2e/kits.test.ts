@@ -91,7 +91,7 @@ describe("the planner's screens, on a phone", () => {
     const good = page.locator(`[data-kit-id="${passing.id}"]`);
     const bad = page.locator(`[data-kit-id="${failing.id}"]`);
     expect(await good.textContent()).toContain("Passes the check");
-    expect(await good.textContent()).toContain("Marten 35 mini excavator on Deck 20 tilt");
+    expect(await good.textContent()).toContain("Unit 12 mini excavator on Deck 20 tilt");
     expect(await bad.textContent()).toContain("Does not pass");
     expect(await bad.textContent()).toContain("1 part not usable that day");
     expect(await good.textContent()).toContain("Draft");

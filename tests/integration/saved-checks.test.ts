@@ -42,9 +42,9 @@ afterAll(() => testDb.destroy());
 
 describe("saving and opening", () => {
   it("a yard hand saves a check by name; the answer is the check's own answer, worked out again", async () => {
-    const res = await hand.post("/api/v1/securement-checks/saved", { name: "  KX040 on the tilt deck ", request: request() });
+    const res = await hand.post("/api/v1/securement-checks/saved", { name: "  Unit 12 on the tilt deck ", request: request() });
     expect(res.status).toBe(201);
-    expect(res.json).toMatchObject({ name: "KX040 on the tilt deck", passAtSave: false, mayChange: true, request: request() });
+    expect(res.json).toMatchObject({ name: "Unit 12 on the tilt deck", passAtSave: false, mayChange: true, request: request() });
     expect(res.json.result.pass).toBe(false);
     expect(res.json.result.findings.filter((f: { code: string }) => f.code === "MISSING_WLL")).toHaveLength(4);
     const audit = await testDb("audit_log").where({ entity: "saved_check", entity_id: res.json.id }).select("action", "actor_id");
@@ -52,7 +52,7 @@ describe("saving and opening", () => {
 
     const list = await planner.get("/api/v1/securement-checks/saved");
     expect(list.status).toBe(200);
-    expect(list.json.data).toEqual([expect.objectContaining({ id: res.json.id, name: "KX040 on the tilt deck", passAtSave: false, mayChange: true })]);
+    expect(list.json.data).toEqual([expect.objectContaining({ id: res.json.id, name: "Unit 12 on the tilt deck", passAtSave: false, mayChange: true })]);
     const open = await otherHand.get(`/api/v1/securement-checks/saved/${res.json.id}`);
     expect(open.status).toBe(200);
     expect(open.json).toMatchObject({ id: res.json.id, mayChange: false, request: request() });

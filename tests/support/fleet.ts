@@ -15,7 +15,7 @@ const unique = (prefix: string) => `${prefix} ${Date.now().toString(36)}-${(n++)
 /** A 12,000 lb, 19 ft excavator with four corner points and no accessories. */
 export function machineBody(over: Record<string, unknown> = {}) {
   return {
-    name: unique("Ridgeback"),
+    name: unique("Unit"),
     class: "mini-excavator",
     weight: { value: 12000, unit: "lb" },
     length: { value: 19, unit: "ft" },

@@ -47,7 +47,7 @@ export function SaveCheck({
           {!open.mayChange && " (saved by someone else: save it under a new name to keep your changes)"}
         </p>
       )}
-      <Field name="check-name" label="Name of this check" value={name} onChange={(e) => setName(e.target.value)} placeholder="KX040 on the 20 ft tilt deck" autoComplete="off" maxLength={80} error={error} />
+      <Field name="check-name" label="Name of this check" value={name} onChange={(e) => setName(e.target.value)} placeholder="Unit 12 on the 20 ft tilt deck" autoComplete="off" maxLength={80} error={error} />
       <div className="grid grid-cols-1 gap-2 sm:grid-cols-2">
         {overOpen && (
           <button

@@ -204,8 +204,8 @@ describe("deckPicture: what it assumes, it says", () => {
     expect(pic.notes).toEqual([
       "Split tilt 20's deck width is not recorded: drawn at 82 in (2,083 mm), a common width between the fenders (an assumption).",
       "The distance from Split tilt 20's hitch to its deck front is not measured: the tongue, hitch and axle centre are not drawn.",
-      "Marten 35 mini excavator has not been placed yet: drawn against the front of the deck.",
-      "Marten 35 mini excavator's width is not recorded: drawn at 80 % of the deck width.",
+      "Unit 12 mini excavator has not been placed yet: drawn against the front of the deck.",
+      "Unit 12 mini excavator's width is not recorded: drawn at 80 % of the deck width.",
     ]);
     expect(pic.description).toContain("not placed yet");
     everything(pic);
@@ -217,7 +217,7 @@ describe("KitDeck rendered on the server", () => {
     const kit = passingScene();
     const html = renderToStaticMarkup(createElement(KitDeck, { picture: picture(kit) }));
     expect(html).toContain('aria-labelledby="deck-title deck-desc"');
-    expect(html).toContain("<title id=\"deck-title\">Marten 35 mini excavator on Split tilt 20, 2026-12-03</title>");
+    expect(html).toContain("<title id=\"deck-title\">Unit 12 mini excavator on Split tilt 20, 2026-12-03</title>");
     expect(html).toMatch(/<desc id="deck-desc">Top-down drawing to scale of Split tilt 20&#x27;s deck with 7 anchor points, .*The check passes\.<\/desc>/);
     expect(html).toContain("Tiedowns in words");
     for (const t of kit.tiedowns) expect(html).toContain(`href="#tiedown-${t.id}"`);

@@ -7,7 +7,7 @@ const usable = { ok: true, reasons: [] };
 
 export const excavator: Machine = {
   id: "m-ex",
-  name: "Ridgeback 8 excavator",
+  name: "Unit 8 excavator",
   machineClass: "mini-excavator",
   weightLb: 12000,
   lengthMm: 5791, // 19 ft

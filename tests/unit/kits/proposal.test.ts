@@ -28,7 +28,7 @@ function applied(kit: Kit, p: Proposal, stock: readonly KitItem[]): Kit {
  */
 const heavier = (k: Kit, over: Partial<Kit["machine"]> = {}): Kit => ({
   ...k,
-  machine: { ...k.machine, weightLb: 12500, name: "Marten 55 excavator", ...over },
+  machine: { ...k.machine, weightLb: 12500, name: "Unit 15 excavator", ...over },
   trailer: { ...k.trailer, gvwrLb: 20000 },
 });
 const sizesOf = (p: Proposal, stock: readonly KitItem[]) => p.tiedowns.map((t) => t.itemIds.map((id) => stock.find((i) => i.id === id)!).filter((i) => i.kind === "chain").map((i) => i.size));
@@ -195,7 +195,7 @@ describe("proposeKit: saying what is missing", () => {
     const p = proposeKit(heavy, [...weak, ...binders], away.map((item) => ({ item, reason: { code: "IN_OTHER_KIT", kitId: "k-3", job: "Mill Road culvert" } })));
     expect(p.pass).toBe(false);
     expect(p.missing).toEqual([
-      "The strongest tiedowns that free gear makes up on 2026-12-03 reach an aggregate WLL of 5,200 lb (2,358.7 kg); Marten 55 excavator needs 6,250 lb (2,835 kg), half its 12,500 lb (49 CFR 393.106(d)): 1,050 lb short.",
+      "The strongest tiedowns that free gear makes up on 2026-12-03 reach an aggregate WLL of 5,200 lb (2,358.7 kg); Unit 15 excavator needs 6,250 lb (2,835 kg), half its 12,500 lb (49 CFR 393.106(d)): 1,050 lb short.",
       "Stronger gear that is not free on 2026-12-03: 3/8 in chain, grade 70: two are in the kit for Mill Road culvert.",
     ]);
   });

@@ -8,7 +8,7 @@ const taggedOut = (message: string) => ({ ok: false, reasons: [{ code: "TAGGED_O
 
 export const excavatorWithBlade: Machine = {
   id: "m-kx",
-  name: "Marten 35 mini excavator",
+  name: "Unit 12 mini excavator",
   machineClass: "mini-excavator",
   weightLb: 8100,
   lengthMm: 4900,
@@ -53,7 +53,7 @@ export const splitTilt: Trailer = {
 /** A ratchet binder rated like the 3/8 in grade 70 chain it takes, so that the chain sets the tiedown's WLL. */
 const fullBinder = () => binder({ description: "Ratchet binder, for 3/8–1/2 in chain", markedWllLb: 6600, wllLb: 6600, details: { mechanism: "ratchet", chainSizeRange: ["3/8", "1/2"] } });
 
-/** Marten 35 on Split tilt 20, front 600 mm back: four corners on 3/8 in grade 70 with binders, and the blade chained to C1. */
+/** Unit 12 on Split tilt 20, front 600 mm back: four corners on 3/8 in grade 70 with binders, and the blade chained to C1. */
 export function passingScene(): Kit {
   return {
     id: "k-pass",
@@ -84,7 +84,7 @@ export function failingScene(): Kit {
   return {
     ...passingScene(),
     id: "k-fail",
-    machine: { ...excavatorWithBlade, weightLb: 12500, name: "Marten 55 excavator" },
+    machine: { ...excavatorWithBlade, weightLb: 12500, name: "Unit 15 excavator" },
     trailer,
     machineFrontFromDeckFrontMm: 400,
     tiedowns: [

@@ -3,7 +3,7 @@ import { zodIssues } from "@/lib/http/errors";
 import { kitListQuerySchema, machineInputSchema, tiedownInputSchema, trailerInputSchema, transitionSchema } from "@/lib/kits/schemas";
 
 const machine = {
-  name: "Marten 35",
+  name: "Unit 12",
   class: "mini-excavator",
   weight: { value: 3674, unit: "kg" },
   length: { value: 4.9, unit: "m" },
@@ -27,7 +27,7 @@ const paths = (r: { success: boolean; error?: { issues: ReadonlyArray<{ path: Re
 describe("machineInputSchema", () => {
   it("stores whole pounds and millimetres", () => {
     expect(machineInputSchema.parse(machine)).toEqual({
-      name: "Marten 35",
+      name: "Unit 12",
       machineClass: "mini-excavator",
       weightLb: 8100,
       lengthMm: 4900,

@@ -53,7 +53,7 @@ describe("mail templates", () => {
     expect(lost.text).toContain("in the kit for Main St tomorrow (2026-12-10)");
     expect(lost.text).toContain("Note: bent link");
     expect(kitLostItemMail({ ...{ to: "p", job: "J", kitDate: "2026-12-09", today: "2026-12-09", itemDescription: "d", tagCode: "T", reporterName: "Y", note: null, link: "l" } }).subject).toContain("today");
-    const check = kitCheckMail({ to: "p@b.example", job: "Main St", kitDate: "2026-12-10", machine: "KX040", trailer: "Tilt 1", reasons: ["Needs 4 tiedowns."], link: "http://x/kits/k" });
+    const check = kitCheckMail({ to: "p@b.example", job: "Main St", kitDate: "2026-12-10", machine: "Unit 12 mini excavator", trailer: "Tilt 1", reasons: ["Needs 4 tiedowns."], link: "http://x/kits/k" });
     expect(check.text).toContain("- Needs 4 tiedowns.");
     expect(check.text).toContain("no substitute for the driver's own inspection");
   });
