@@ -1,6 +1,7 @@
 import type { Knex } from "knex";
 import type { KitState } from "@/lib/kits/model";
 import type { Attachment } from "@/lib/securement";
+import type { ItemStatus } from "@/lib/stock/labels";
 import { uniqueRefusal } from "./errors";
 import { db } from "./index";
 
@@ -48,7 +49,7 @@ export interface KitItemRecord {
   size: string | null;
   markedWllLb: number | null;
   wllLb: number | null;
-  status: string;
+  status: ItemStatus;
   /** YYYY-MM-DD, or null when no periodic inspection is scheduled. */
   nextInspectionDue: string | null;
   details: Record<string, unknown>;

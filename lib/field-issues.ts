@@ -44,3 +44,15 @@ export function zodIssues(error: { readonly issues: ReadonlyArray<ZodLikeIssue> 
     return [{ path, message: issue.message }];
   });
 }
+
+/**
+ * The first issue at a path or below it ("tiedowns.0.components.1.wll" also finds
+ * "tiedowns.0.components.1.wll.value").
+ *
+ * @example
+ * issueAt([{ path: "cargo.weight.value", message: "The value must be a number" }], "cargo.weight");
+ * // "The value must be a number"
+ */
+export function issueAt(issues: readonly FieldIssue[] | undefined, path: string): string | undefined {
+  return issues?.find((i) => i.path === path || i.path.startsWith(`${path}.`))?.message;
+}

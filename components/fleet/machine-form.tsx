@@ -1,14 +1,14 @@
 "use client";
-import { useRouter } from "next/navigation";
 import { useState } from "react";
+import { SaveAlert, useApiSave } from "@/components/ui/api-save";
 import { buttonClass } from "@/components/ui/button";
 import { Toggle } from "@/components/ui/choice-group";
 import { Field, SelectField } from "@/components/ui/field";
-import { ApiError, apiJson } from "@/lib/http/client";
+import { issueAt } from "@/lib/field-issues";
 import type { MachineJson } from "@/lib/kits/answers";
 import type { UnitSystem } from "@/lib/kits/display";
 import { SIDE_LABELS, SIDES, type Side } from "@/lib/kits/model";
-import { draftOf, FleetQuantity, issueAt, quantityBody, type QuantityDraft } from "./quantity-field";
+import { draftOf, FleetQuantity, quantityBody, type QuantityDraft } from "./quantity-field";
 
 const COMMON_ACCESSORIES = ["bucket", "blade", "boom and arm", "breaker"];
 
@@ -28,7 +28,6 @@ let nextKey = 0;
  * would (more than 10 accessories, an accessory called "machine", a name twice).
  */
 export function MachineForm({ machine, classes, units }: { machine?: MachineJson; classes: { value: string; label: string }[]; units: UnitSystem }) {
-  const router = useRouter();
   const [name, setName] = useState(machine?.name ?? "");
   const [machineClass, setClass] = useState(machine?.class ?? classes[0]?.value ?? "other");
   const [weight, setWeight] = useState(draftOf(machine?.weight ?? null, "weight", units));
@@ -41,9 +40,7 @@ export function MachineForm({ machine, classes, units }: { machine?: MachineJson
     (machine?.tiedownPoints ?? []).map((p) => ({ key: nextKey++, label: p.label, side: p.side, position: draftOf(p.position, "length", units) })),
   );
   const [cg, setCg] = useState(draftOf(machine?.cgFromFront ?? null, "length", units));
-  const [problem, setProblem] = useState<{ message: string; issues: { path: string; message: string }[] } | null>(null);
-  const [busy, setBusy] = useState(false);
-  const issues = problem?.issues ?? [];
+  const { problem, issues, busy, save } = useApiSave("Not saved. Try again.");
 
   function addCorners() {
     const shortUnit = units === "us" ? "in" : "m";
@@ -62,8 +59,6 @@ export function MachineForm({ machine, classes, units }: { machine?: MachineJson
 
   async function submit(event: React.FormEvent) {
     event.preventDefault();
-    setBusy(true);
-    setProblem(null);
     const body = {
       name,
       class: machineClass,
@@ -76,21 +71,12 @@ export function MachineForm({ machine, classes, units }: { machine?: MachineJson
       tiedownPoints: points.map((p) => ({ label: p.label, side: p.side, position: quantityBody(p.position) })),
       cgFromFront: quantityBody(cg),
     };
-    try {
-      const saved = await apiJson<MachineJson>(machine ? `/api/v1/machines/${machine.id}` : "/api/v1/machines", { method: machine ? "PUT" : "POST", body: JSON.stringify(body) });
-      router.push(`/machines/${saved.id}?saved=1`);
-      router.refresh();
-    } catch (error) {
-      setBusy(false);
-      setProblem({ message: error instanceof Error ? error.message : "Not saved. Try again.", issues: error instanceof ApiError ? error.issues : [] });
-    }
+    await save(machine ? `/api/v1/machines/${machine.id}` : "/api/v1/machines", machine ? "PUT" : "POST", body, { to: (id) => `/machines/${id}?saved=1`, refresh: true });
   }
 
   return (
     <form onSubmit={submit} noValidate className="flex flex-col gap-2">
-      <div role="alert" aria-live="polite">
-        {problem && <p className="rounded-lg border-2 border-stop bg-stop-bg p-3 text-lg font-bold text-stop">{problem.message}</p>}
-      </div>
+      <SaveAlert problem={problem} />
       <Field label="Name" name="name" value={name} onChange={(e) => setName(e.target.value)} error={issueAt(issues, "name")} maxLength={80} hint="As the crew says it, e.g. Unit 12 mini excavator" />
       <SelectField label="Class" name="class" value={machineClass} onChange={(e) => setClass(e.target.value)} error={issueAt(issues, "class")} options={classes} />
       <FleetQuantity label="Shipping weight" name="weight" kind="weight" value={weight} onChange={setWeight} error={issueAt(issues, "weight")} hint="With the bucket, blade and anything else that rides on it" />

@@ -64,8 +64,3 @@ export function quantityBody(q: QuantityDraft): { value: number | string; unit: 
   const n = Number(text);
   return { value: Number.isFinite(n) ? n : text, unit: q.unit };
 }
-
-/** The first message of the API's issues at or under a path ("weight" takes "weight.value"). */
-export function issueAt(issues: readonly { path: string; message: string }[], path: string): string | undefined {
-  return issues.find((i) => i.path === path || i.path.startsWith(`${path}.`))?.message;
-}

@@ -1,13 +1,13 @@
 "use client";
-import { useRouter } from "next/navigation";
 import { useState } from "react";
+import { SaveAlert, useApiSave } from "@/components/ui/api-save";
 import { buttonClass } from "@/components/ui/button";
 import { Field, SelectField } from "@/components/ui/field";
-import { ApiError, apiJson } from "@/lib/http/client";
+import { issueAt } from "@/lib/field-issues";
 import type { TrailerJson } from "@/lib/kits/answers";
 import type { UnitSystem } from "@/lib/kits/display";
 import { COUPLING_LABELS, COUPLINGS, DEFAULT_COUPLING, SIDE_LABELS, SIDES, TRAILER_TYPE_LABELS, TRAILER_TYPES, type Side, type TrailerType } from "@/lib/kits/model";
-import { draftOf, FleetQuantity, issueAt, quantityBody, type QuantityDraft } from "./quantity-field";
+import { draftOf, FleetQuantity, quantityBody, type QuantityDraft } from "./quantity-field";
 
 interface AnchorDraft {
   key: number;
@@ -28,7 +28,6 @@ let nextKey = 0;
  * is a new point. Taking a point out of use is done on the trailer's page, not here.
  */
 export function TrailerForm({ trailer, units }: { trailer?: TrailerJson; units: UnitSystem }) {
-  const router = useRouter();
   const [name, setName] = useState(trailer?.name ?? "");
   const [type, setType] = useState<TrailerType>(trailer?.type ?? "tilt-deck");
   const [coupling, setCoupling] = useState<string>(trailer?.coupling ?? "");
@@ -52,15 +51,11 @@ export function TrailerForm({ trailer, units }: { trailer?: TrailerJson; units: 
       nextInspectionDue: a.nextInspectionDue ?? "",
     })),
   );
-  const [problem, setProblem] = useState<{ message: string; issues: { path: string; message: string }[] } | null>(null);
-  const [busy, setBusy] = useState(false);
-  const issues = problem?.issues ?? [];
+  const { problem, issues, busy, save } = useApiSave("Not saved. Try again.");
   const update = (key: number, patch: Partial<AnchorDraft>) => setAnchors((list) => list.map((a) => (a.key === key ? { ...a, ...patch } : a)));
 
   async function submit(event: React.FormEvent) {
     event.preventDefault();
-    setBusy(true);
-    setProblem(null);
     const body = {
       name,
       type,
@@ -82,21 +77,12 @@ export function TrailerForm({ trailer, units }: { trailer?: TrailerJson; units: 
         nextInspectionDue: a.nextInspectionDue || null,
       })),
     };
-    try {
-      const saved = await apiJson<TrailerJson>(trailer ? `/api/v1/trailers/${trailer.id}` : "/api/v1/trailers", { method: trailer ? "PUT" : "POST", body: JSON.stringify(body) });
-      router.push(`/trailers/${saved.id}?saved=1`);
-      router.refresh();
-    } catch (error) {
-      setBusy(false);
-      setProblem({ message: error instanceof Error ? error.message : "Not saved. Try again.", issues: error instanceof ApiError ? error.issues : [] });
-    }
+    await save(trailer ? `/api/v1/trailers/${trailer.id}` : "/api/v1/trailers", trailer ? "PUT" : "POST", body, { to: (id) => `/trailers/${id}?saved=1`, refresh: true });
   }
 
   return (
     <form onSubmit={submit} noValidate className="flex flex-col gap-2">
-      <div role="alert" aria-live="polite">
-        {problem && <p className="rounded-lg border-2 border-stop bg-stop-bg p-3 text-lg font-bold text-stop">{problem.message}</p>}
-      </div>
+      <SaveAlert problem={problem} />
       <Field label="Name" name="name" value={name} onChange={(e) => setName(e.target.value)} error={issueAt(issues, "name")} maxLength={80} />
       <SelectField label="Type" name="type" value={type} onChange={(e) => setType(e.target.value as TrailerType)} options={TRAILER_TYPES.map((t) => ({ value: t, label: TRAILER_TYPE_LABELS[t] }))} error={issueAt(issues, "type")} />
       <SelectField

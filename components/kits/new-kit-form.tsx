@@ -1,11 +1,10 @@
 "use client";
-import { useRouter } from "next/navigation";
 import { useState } from "react";
+import { SaveAlert, useApiSave } from "@/components/ui/api-save";
 import { buttonClass } from "@/components/ui/button";
 import { Toggle } from "@/components/ui/choice-group";
 import { Field, SelectField } from "@/components/ui/field";
-import { ApiError, apiJson } from "@/lib/http/client";
-import type { KitJson } from "@/lib/kits/answers";
+import { issueAt } from "@/lib/field-issues";
 
 interface Choice {
   id: string;
@@ -15,41 +14,29 @@ interface Choice {
 
 /** A new kit: the date, the job and site, the machine and the trailer. Its tiedowns come next, in the builder. */
 export function NewKitForm({ date, machines, trailers }: { date: string; machines: Choice[]; trailers: Choice[] }) {
-  const router = useRouter();
   const [values, setValues] = useState({ date, job: "", site: "", machineId: machines[0]?.id ?? "", trailerId: trailers[0]?.id ?? "", articulationRestrained: false });
-  const [problem, setProblem] = useState<{ message: string; fields: Record<string, string> } | null>(null);
-  const [busy, setBusy] = useState(false);
+  const { problem, issues, busy, save } = useApiSave("The kit was not saved. Try again.");
   const set = (key: keyof typeof values) => (e: React.ChangeEvent<HTMLInputElement | HTMLSelectElement>) => setValues((v) => ({ ...v, [key]: e.target.value }));
   const machine = machines.find((m) => m.id === values.machineId);
 
   async function submit(event: React.FormEvent) {
     event.preventDefault();
-    setBusy(true);
-    setProblem(null);
-    try {
-      const kit = await apiJson<KitJson>("/api/v1/kits", { method: "POST", body: JSON.stringify({ ...values, site: values.site || null, articulationRestrained: machine?.articulated ? values.articulationRestrained : false }) });
-      router.push(`/kits/${kit.id}`);
-    } catch (error) {
-      setBusy(false);
-      const fields = Object.fromEntries((error instanceof ApiError ? error.issues : []).map((i) => [i.path, i.message]));
-      setProblem({ message: error instanceof Error ? error.message : "The kit was not saved. Try again.", fields });
-    }
+    const body = { ...values, site: values.site || null, articulationRestrained: machine?.articulated ? values.articulationRestrained : false };
+    await save("/api/v1/kits", "POST", body, { to: (id) => `/kits/${id}` });
   }
 
-  const e = problem?.fields ?? {};
+  const e = (path: string) => issueAt(issues, path);
   return (
     <form onSubmit={submit} noValidate className="flex flex-col gap-2">
-      <div role="alert" aria-live="polite">
-        {problem && <p className="rounded-lg border-2 border-stop bg-stop-bg p-3 text-lg font-bold text-stop">{problem.message}</p>}
-      </div>
-      <Field label="Date" name="date" type="date" value={values.date} onChange={set("date")} error={e.date} required />
-      <Field label="Job" name="job" value={values.job} onChange={set("job")} error={e.job} hint="What the crew calls it, e.g. Hollins driveway" maxLength={120} required />
-      <Field label="Site (optional)" name="site" value={values.site} onChange={set("site")} error={e.site} maxLength={200} />
-      <SelectField label="Machine" name="machineId" value={values.machineId} onChange={set("machineId")} error={e.machineId} options={machines.map((m) => ({ value: m.id, label: m.label }))} />
+      <SaveAlert problem={problem} />
+      <Field label="Date" name="date" type="date" value={values.date} onChange={set("date")} error={e("date")} required />
+      <Field label="Job" name="job" value={values.job} onChange={set("job")} error={e("job")} hint="What the crew calls it, e.g. Hollins driveway" maxLength={120} required />
+      <Field label="Site (optional)" name="site" value={values.site} onChange={set("site")} error={e("site")} maxLength={200} />
+      <SelectField label="Machine" name="machineId" value={values.machineId} onChange={set("machineId")} error={e("machineId")} options={machines.map((m) => ({ value: m.id, label: m.label }))} />
       {machine?.articulated && (
         <Toggle label="Articulation locked for the trip" hint="Lock bar or pin fitted (49 CFR 393.130(b)(2))" checked={values.articulationRestrained} onChange={(checked) => setValues((v) => ({ ...v, articulationRestrained: checked }))} />
       )}
-      <SelectField label="Trailer" name="trailerId" value={values.trailerId} onChange={set("trailerId")} error={e.trailerId} options={trailers.map((t) => ({ value: t.id, label: t.label }))} />
+      <SelectField label="Trailer" name="trailerId" value={values.trailerId} onChange={set("trailerId")} error={e("trailerId")} options={trailers.map((t) => ({ value: t.id, label: t.label }))} />
       <button type="submit" disabled={busy} className={buttonClass("primary", "mt-2 min-h-16 w-full text-xl")}>
         {busy ? "Saving…" : "Plan the tiedowns"}
       </button>

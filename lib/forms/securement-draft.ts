@@ -9,6 +9,7 @@
  * @module
  */
 import type { FieldIssue } from "@/lib/field-issues";
+export { issueAt } from "@/lib/field-issues";
 import type { Attachment, CargoKind, Finding, RopeFibre, SecurementCheckRequest } from "@/lib/securement";
 import {
   CHAIN_TABLE,
@@ -346,18 +347,6 @@ export function toRequest(draft: CheckDraft): RequestBody {
       components: t.components.map((c) => componentRequest(c, draft.wllUnit)),
     })),
   };
-}
-
-/**
- * The first issue at a path or below it ("tiedowns.0.components.1.wll" also finds
- * "tiedowns.0.components.1.wll.value").
- *
- * @example
- * issueAt([{ path: "cargo.weight.value", message: "The value must be a number" }], "cargo.weight");
- * // "The value must be a number"
- */
-export function issueAt(issues: readonly FieldIssue[] | undefined, path: string): string | undefined {
-  return issues?.find((i) => i.path === path || i.path.startsWith(`${path}.`))?.message;
 }
 
 const FIELD_WORDS: Record<string, string> = {

@@ -8,7 +8,6 @@
 import type { AnchorRecord, MachineRecord, TrailerRecord } from "@/db/fleet";
 import type { KitItemRecord, KitRecord, TiedownRecord } from "@/db/kits";
 import { describeItem } from "@/lib/stock/describe";
-import type { ItemStatus } from "@/lib/stock/labels";
 import { itemUsability } from "@/lib/stock/usability";
 import type { AnchorPoint, Kit, KitItem, KitTiedown, Machine, Side, Trailer } from "./model";
 
@@ -36,7 +35,8 @@ export function toAnchor(row: AnchorRecord, on: string): AnchorPoint {
     status: row.status,
     nextInspectionDue: row.nextInspectionDue,
     lastInspectedOn: row.lastInspectedOn,
-    usable: itemUsability({ status: row.status as ItemStatus, nextInspectionDue: row.nextInspectionDue, wllLb: row.wllLb }, on),
+    // An anchor point is rated hardware: the same verdict as an item of stock.
+    usable: itemUsability(row, on),
   };
 }
 
@@ -75,7 +75,7 @@ export function toKitItem(row: KitItemRecord, on: string): KitItem {
     markedWllLb: row.markedWllLb,
     wllLb: row.wllLb,
     details: row.details ?? {},
-    usable: itemUsability({ status: row.status as ItemStatus, nextInspectionDue: row.nextInspectionDue, wllLb: row.wllLb }, on),
+    usable: itemUsability(row, on),
   };
 }
 

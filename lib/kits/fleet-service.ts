@@ -31,6 +31,12 @@ export async function setUnitsPreference(actor: Principal, units: UnitSystem): P
 
 // Machine classes
 
+/** The built-in class a name stands for ("Mini excavator" → "mini-excavator"), or null. */
+function builtInClass(name: string): string | null {
+  const key = name.toLowerCase().replace(/\s+/g, "-");
+  return (MACHINE_CLASSES as readonly string[]).includes(key) ? key : null;
+}
+
 /** Built-in classes and the organisation's own, as choices for the machine form. */
 export async function machineClassChoices(organisationId: string): Promise<{ value: string; label: string; own: boolean }[]> {
   const own = await fleet.listMachineClasses(organisationId);
@@ -43,7 +49,7 @@ export async function machineClassChoices(organisationId: string): Promise<{ val
 
 export async function addMachineClass(actor: Principal, name: string): Promise<{ name: string; created: boolean }> {
   require(actor, "settings.manage");
-  if ((MACHINE_CLASSES as readonly string[]).includes(name.toLowerCase().replace(/\s+/g, "-"))) {
+  if (builtInClass(name)) {
     throw conflict(`"${name}" is already a built-in class.`, [{ path: "name", message: `"${name}" is already a built-in class.` }]);
   }
   return audited(actor, async (trx, audit) => {
@@ -56,8 +62,8 @@ export async function addMachineClass(actor: Principal, name: string): Promise<{
 
 /** The stored class of a machine: a built-in key, or the organisation's own name as first written. */
 async function resolveClass(organisationId: string, given: string, trx: Tx): Promise<string> {
-  const key = given.toLowerCase().replace(/\s+/g, "-");
-  if ((MACHINE_CLASSES as readonly string[]).includes(key)) return key;
+  const key = builtInClass(given);
+  if (key) return key;
   const own = await fleet.machineClassExists(organisationId, given, trx);
   if (own) return own;
   throw fieldError("class", `"${given}" is not a machine class here: choose one from the list, or ask an owner to add it.`);

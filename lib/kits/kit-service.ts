@@ -8,9 +8,8 @@ import * as kits from "@/db/kits";
 import { can, type Permission } from "@/lib/auth/roles";
 import type { Principal } from "@/lib/auth/session";
 import { AppError, badRequest, fieldError, forbidden, notFound } from "@/lib/http/errors";
-import type { ItemStatus } from "@/lib/stock/labels";
 import { nextStatus } from "@/lib/stock/status";
-import { itemUsability, type UsabilityReason } from "@/lib/stock/usability";
+import type { UsabilityReason } from "@/lib/stock/usability";
 import { queueTagOutMail } from "@/lib/reminders/tag-out";
 import { kitItemJson, kitJson, kitListEntry, type KitJson } from "./answers";
 import { toAnchor, toKit, toKitItem } from "./assemble";
@@ -470,7 +469,7 @@ export async function transitionKit(actor: Principal, kitId: string, input: Tran
     }
     for (const d of input.damaged) {
       const item = locked.find((i) => i.id === d.itemId)!;
-      const next = nextStatus(item.status as ItemStatus, "tag_out");
+      const next = nextStatus(item.status, "tag_out");
       if ("error" in next) continue; // already out of use: the kit entry and the note below say it
       const [eventId] = await items.insertEvents([{ organisationId: actor.organisationId, itemId: item.id, type: "tag_out", note: `Reported damaged on return (${row.job}, ${row.date}): ${d.note}`, actorId: actor.userId }], trx);
       await items.updateItem(actor.organisationId, item.id, { status: next.status }, trx);
@@ -479,7 +478,7 @@ export async function transitionKit(actor: Principal, kitId: string, input: Tran
     }
     for (const l of input.lost) {
       const item = locked.find((i) => i.id === l.itemId)!;
-      const next = nextStatus(item.status as ItemStatus, "lost");
+      const next = nextStatus(item.status, "lost");
       if ("error" in next) continue;
       await items.insertEvents([{ organisationId: actor.organisationId, itemId: item.id, type: "lost", note: `Not back from ${row.job} (${row.date}): ${l.note}`, actorId: actor.userId }], trx);
       await items.updateItem(actor.organisationId, item.id, { status: next.status }, trx);
@@ -527,7 +526,7 @@ export async function copyKit(actor: Principal, kitId: string, input: { date: st
         const keep: string[] = [];
         for (const item of t.items) {
           const stored = locked.find((i) => i.id === item.id)!;
-          const usable = itemUsability({ status: stored.status as ItemStatus, nextInspectionDue: stored.nextInspectionDue, wllLb: stored.wllLb }, input.date);
+          const usable = toKitItem(stored, input.date).usable;
           const holder = held.find((h) => h.itemId === item.id);
           if (!usable.ok) {
             leftOut.push({ itemId: item.id, tagCode: item.tagCode, description: item.description, tiedownLabel: t.label, code: "ITEM_NOT_USABLE", reasons: usable.reasons, kitId: null, message: usable.reasons.map((r) => r.message).join(" ") });

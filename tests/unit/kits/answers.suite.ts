@@ -66,7 +66,7 @@ describe("toKit", () => {
       { id: "a2", trailerId: "t", label: "A2", side: "right" as const, positionMm: 100, wllLb: 5000, status: "retired" as const, nextInspectionDue: null, lastInspectedOn: null },
       { id: "a3", trailerId: "t", label: "A3", side: "right" as const, positionMm: 900, wllLb: 5000, status: "retired" as const, nextInspectionDue: null, lastInspectedOn: null },
     ];
-    const item = { id: "i", tagCode: "AAAA-CCCC", kind: "chain", grade: 70, gradeMarked: true, size: "3/8", markedWllLb: null, wllLb: 6600, status: "in_service", nextInspectionDue: "2026-12-03", details: {} };
+    const item = { id: "i", tagCode: "AAAA-CCCC", kind: "chain", grade: 70, gradeMarked: true, size: "3/8", markedWllLb: null, wllLb: 6600, status: "in_service" as const, nextInspectionDue: "2026-12-03", details: {} };
     const tiedowns: TiedownRecord[] = [{ id: "td", kitId: "k", label: "x", anchorPointId: "a2", attachment: "direct", secures: "machine", machinePoint: null, items: [item] }];
     const { id: _m, ...machine } = { ...excavator, accessories: [...excavator.accessories], tiedownPoints: [...excavator.tiedownPoints] };
     const { id: _t, anchorPoints: _a, ...t } = trailer;

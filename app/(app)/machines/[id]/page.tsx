@@ -2,6 +2,7 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
 import { MachineForm } from "@/components/fleet/machine-form";
+import { Fact } from "@/components/ui/fact";
 import { getMachine, getUnits } from "@/db/fleet";
 import { can } from "@/lib/auth/roles";
 import { requirePage } from "@/lib/auth/session";
@@ -13,15 +14,6 @@ import { machineClassChoices } from "@/lib/kits/fleet-service";
 import { SIDE_LABELS } from "@/lib/kits/model";
 
 export const metadata: Metadata = { title: "Machine" };
-
-function Fact({ label, children }: { label: string; children: React.ReactNode }) {
-  return (
-    <div className="flex flex-col">
-      <dt className="text-base text-ink-soft">{label}</dt>
-      <dd className="text-lg font-bold">{children}</dd>
-    </div>
-  );
-}
 
 export default async function MachinePage({ params, searchParams }: { params: Promise<{ id: string }>; searchParams: Promise<{ saved?: string }> }) {
   const principal = await requirePage("fleet.view");

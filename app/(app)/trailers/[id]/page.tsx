@@ -4,6 +4,7 @@ import { notFound } from "next/navigation";
 import { AnchorActions } from "@/components/fleet/anchor-actions";
 import { TrailerForm } from "@/components/fleet/trailer-form";
 import { UsableBadge } from "@/components/kits/state-badge";
+import { Fact } from "@/components/ui/fact";
 import { getUnits, latestAnchorEvents } from "@/db/fleet";
 import { kitsUsingAnchor } from "@/db/kits";
 import { can } from "@/lib/auth/roles";
@@ -17,15 +18,6 @@ import { organisationClock } from "@/lib/organisations/service";
 import { formatDay } from "@/lib/time";
 
 export const metadata: Metadata = { title: "Trailer" };
-
-function Fact({ label, children }: { label: string; children: React.ReactNode }) {
-  return (
-    <div className="flex flex-col">
-      <dt className="text-base text-ink-soft">{label}</dt>
-      <dd className="text-lg font-bold">{children}</dd>
-    </div>
-  );
-}
 
 const EVENT_WORDS: Record<string, string> = {
   created: "Added",
