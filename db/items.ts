@@ -35,6 +35,8 @@ export interface ItemRecord extends ItemFields {
   /** YYYY-MM-DD, or null when no periodic inspection is scheduled. */
   nextInspectionDue: string | null;
   lastCheckedAt: Date | null;
+  /** Whether the last pre-use check passed; null when none is recorded. */
+  lastCheckPassed: boolean | null;
   /** YYYY-MM-DD */
   lastInspectedOn: string | null;
 }
@@ -45,6 +47,7 @@ const ITEM_COLUMNS = [
   "i.serial", "i.status", "i.yard_id as yardId", "y.name as yardName",
   db.raw("to_char(i.next_inspection_due, 'YYYY-MM-DD') as \"nextInspectionDue\""),
   "i.last_checked_at as lastCheckedAt",
+  "i.last_check_passed as lastCheckPassed",
   db.raw("to_char(i.last_inspected_on, 'YYYY-MM-DD') as \"lastInspectedOn\""),
   "i.details",
   db.raw("to_char(i.in_service_on, 'YYYY-MM-DD') as \"inServiceOn\""),
@@ -84,10 +87,15 @@ function base(trx: Knex = db) {
 
 export interface ItemFilters {
   kind?: string;
-  status?: string;
+  /** Any of these statuses. */
+  status?: readonly string[];
   yardId?: string;
+  /** Only items without a WLL. */
+  unrated?: boolean;
   /** Inspection due before this date (YYYY-MM-DD): overdue, when it is the organisation's today. */
   dueBefore?: string;
+  /** Inspection due on or after this date (YYYY-MM-DD). */
+  dueFrom?: string;
   /** Inspection due on or before this date (YYYY-MM-DD). */
   dueBy?: string;
   q?: string;
@@ -109,9 +117,11 @@ export type SortKey = keyof typeof SORTABLE;
 function applyFilters(query: Knex.QueryBuilder, organisationId: string, f: ItemFilters) {
   query.where("i.organisation_id", organisationId);
   if (f.kind) query.where("i.kind", f.kind);
-  if (f.status) query.where("i.status", f.status);
+  if (f.status?.length) query.whereIn("i.status", f.status);
   if (f.yardId) query.where("i.yard_id", f.yardId);
+  if (f.unrated) query.whereNull("i.wll_lb");
   if (f.dueBefore) query.where("i.next_inspection_due", "<", f.dueBefore);
+  if (f.dueFrom) query.where("i.next_inspection_due", ">=", f.dueFrom);
   if (f.dueBy) query.where("i.next_inspection_due", "<=", f.dueBy);
   if (f.q) {
     const q = f.q.trim().toUpperCase();
@@ -224,12 +234,15 @@ export async function insertItems(items: NewItem[], trx: Knex): Promise<string[]
   return out.map((r: { id: string }) => r.id);
 }
 
-/** What a change of an item may set besides its fields. `checked` stamps the check's time with the database's clock. */
+/**
+ * What a change of an item may set besides its fields. `checked` records a pre-use check:
+ * its outcome, and its time from the database's clock.
+ */
 export interface ItemUpdate extends Partial<ItemFields> {
   status?: ItemStatus;
   lastInspectedOn?: string;
   nextInspectionDue?: string | null;
-  checked?: true;
+  checked?: "pass" | "fail";
 }
 
 export async function updateItem(organisationId: string, id: string, update: ItemUpdate, trx: Knex): Promise<void> {
@@ -241,7 +254,7 @@ export async function updateItem(organisationId: string, id: string, update: Ite
       ...(status !== undefined && { status }),
       ...(lastInspectedOn !== undefined && { last_inspected_on: lastInspectedOn }),
       ...(nextInspectionDue !== undefined && { next_inspection_due: nextInspectionDue }),
-      ...(checked && { last_checked_at: trx.fn.now() }),
+      ...(checked && { last_checked_at: trx.fn.now(), last_check_passed: checked === "pass" }),
       updated_at: trx.fn.now(),
     });
 }
@@ -356,23 +369,32 @@ export async function getYard(organisationId: string, yardId: string, trx: Knex 
 
 // Dashboard counts
 
-export async function countItemsByStatus(organisationId: string) {
-  const rows = await db("items")
-    .where({ organisation_id: organisationId })
-    .groupBy("status")
-    .select("status")
-    .count<{ status: string; count: string }[]>("id as count");
-  return Object.fromEntries(rows.map((r) => [r.status, Number(r.count)])) as Record<string, number>;
+/** Items counted by what decides their verdict: status, rated or not, inspection overdue / due soon / later. */
+export interface StockBucket {
+  status: ItemStatus;
+  rated: boolean;
+  due: "overdue" | "soon" | "later" | "none";
+  /** The earliest inspection date in the bucket (YYYY-MM-DD), or null. */
+  firstDue: string | null;
+  count: number;
 }
 
-/** In-service items whose inspection falls due on or before a date (YYYY-MM-DD), overdue ones included. */
-export async function countInspectionsDue(organisationId: string, dueBy: string) {
-  const row = await db("items")
-    .where({ organisation_id: organisationId, status: "in_service" })
-    .where("next_inspection_due", "<=", dueBy)
-    .count<{ count: string }>("id as count")
-    .first();
-  return Number(row?.count ?? 0);
+/**
+ * The organisation's stock in buckets of items that share a verdict on a day: by status,
+ * rated or not, and inspection due before `today`, from `today` to `soonBy`, later, or never.
+ */
+export async function stockBuckets(organisationId: string, today: string, soonBy: string): Promise<StockBucket[]> {
+  const rows = (await db("items")
+    .where({ organisation_id: organisationId })
+    .groupByRaw("1, 2, 3")
+    .select(
+      "status",
+      db.raw("(wll_lb is not null and wll_lb > 0) as rated"),
+      db.raw("case when next_inspection_due is null then 'none' when next_inspection_due < ? then 'overdue' when next_inspection_due <= ? then 'soon' else 'later' end as due", [today, soonBy]),
+      db.raw("to_char(min(next_inspection_due), 'YYYY-MM-DD') as \"firstDue\""),
+    )
+    .count("id as count")) as unknown as { status: string; rated: boolean; due: string; firstDue: string | null; count: string }[];
+  return rows.map((r) => ({ status: r.status as ItemStatus, rated: Boolean(r.rated), due: r.due as StockBucket["due"], firstDue: (r.firstDue as string | null) ?? null, count: Number(r.count) }));
 }
 
 // Public tag view rate limiting

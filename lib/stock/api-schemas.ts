@@ -14,7 +14,13 @@ export const itemListQuerySchema = z.object({
   sort: z.preprocess(blank, z.enum(SORT_KEYS).default("tagCode")),
   order: z.preprocess(blank, z.enum(["asc", "desc"]).default("asc")),
   kind: z.preprocess(blank, z.enum(ITEM_KINDS).optional()),
-  status: z.preprocess(blank, z.enum(ITEM_STATUSES).optional()),
+  /** One status, or several with commas ("retired,lost"). */
+  status: z.preprocess(
+    (v) => (typeof v === "string" && v !== "" ? v.split(",").map((s) => s.trim()) : blank(v)),
+    z.array(z.enum(ITEM_STATUSES, { error: `status is one of ${ITEM_STATUSES.join(", ")} (several with commas)` })).min(1).optional(),
+  ),
+  /** "no": only items without a WLL (they may not be counted in a tiedown). */
+  rated: z.preprocess(blank, z.enum(["no"], { error: 'rated is "no" (items without a WLL)' }).optional()),
   yardId: z.preprocess(blank, z.uuid("yardId is not a yard id").optional()),
   due: z.preprocess(blank, z.enum(["overdue", "7d", "30d"]).optional()),
   q: z.preprocess(blank, z.string().trim().max(60).optional()),
@@ -28,15 +34,19 @@ export const DUE_SOON_DAYS = 30;
 export const DUE_THIS_WEEK_DAYS = 6;
 
 /**
- * The list query with its inspection filter as dates, counted from the organisation's today.
+ * The list query with its inspection filter as dates, counted from the organisation's today:
+ * "overdue" is due before today; "7d" and "30d" are due from today to 6 or 30 days on, so
+ * that the overdue ones are never counted as merely "due soon".
  * @example listFilters({ due: "overdue", page: 1, perPage: 25, sort: "tagCode", order: "asc" }, "2026-12-01").dueBefore // "2026-12-01"
+ * @example listFilters({ due: "30d", page: 1, perPage: 25, sort: "tagCode", order: "asc" }, "2026-12-01") // { …, dueFrom: "2026-12-01", dueBy: "2026-12-31" }
  */
-export function listFilters<Q extends { due?: "overdue" | "7d" | "30d" }>({ due, ...query }: Q, today: string) {
+export function listFilters<Q extends { due?: "overdue" | "7d" | "30d"; rated?: "no" }>({ due, rated, ...query }: Q, today: string) {
   return {
     ...query,
+    ...(rated === "no" && { unrated: true }),
     ...(due === "overdue" && { dueBefore: today }),
-    ...(due === "7d" && { dueBy: addDays(today, DUE_THIS_WEEK_DAYS) }),
-    ...(due === "30d" && { dueBy: addDays(today, DUE_SOON_DAYS) }),
+    ...(due === "7d" && { dueFrom: today, dueBy: addDays(today, DUE_THIS_WEEK_DAYS) }),
+    ...(due === "30d" && { dueFrom: today, dueBy: addDays(today, DUE_SOON_DAYS) }),
   };
 }
 

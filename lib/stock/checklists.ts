@@ -69,18 +69,20 @@ export interface CheckAnswer {
 
 /**
  * The outcome of a pre-use check: every point of the kind's list must be answered, and
- * any defect fails it.
+ * any defect fails it. A refusal names the point at fault (`point`), so that a form can mark
+ * that question.
  * @example preUseOutcome("hook", [{ id: "throat", defect: true }, ...]) // { outcome: "fail", defects: ["Throat opened …"] }
+ * @example preUseOutcome("hook", []) // { error: 'Answer every point: "Throat opened wider than when new" has no answer.', point: "throat" }
  */
 export function preUseOutcome(kind: ItemKind, answers: readonly CheckAnswer[]):
   | { outcome: "pass" | "fail"; defects: string[]; checklist: { id: string; label: string; defect: boolean }[] }
-  | { error: string } {
+  | { error: string; point: string } {
   const points = PRE_USE_CHECKLISTS[kind];
   const byId = new Map(answers.map((a) => [a.id, a.defect]));
   const unknown = answers.find((a) => !points.some((p) => p.id === a.id));
-  if (unknown) return { error: `"${unknown.id}" is not a point of the ${kind} checklist.` };
+  if (unknown) return { error: `"${unknown.id}" is not a point of the ${kind} checklist.`, point: unknown.id };
   const missing = points.find((p) => !byId.has(p.id));
-  if (missing) return { error: `Answer every point: "${missing.label}" has no answer.` };
+  if (missing) return { error: `Answer every point: "${missing.label}" has no answer.`, point: missing.id };
   const checklist = points.map((p) => ({ id: p.id, label: p.label, defect: byId.get(p.id)! }));
   const defects = checklist.filter((c) => c.defect).map((c) => c.label);
   return { outcome: defects.length ? "fail" : "pass", defects, checklist };

@@ -2,12 +2,15 @@ import type { ItemRecord } from "@/db/items";
 import { toKg } from "@/lib/securement/units";
 import { describeItem } from "./describe";
 import { STATUS_LABELS, type ItemStatus } from "./labels";
+import { itemVerdict, type Clock } from "./verdict";
 
 // An item as the API answers it (and the scan and stock screens read it), made from the
-// stored record: the description and status in words, the WLL in lb and kg, the page's URL.
+// stored record: the description and status in words, the WLL in lb and kg, the page's URL,
+// and the usability verdict on the organisation's today (`usable`), which every screen shows
+// instead of working out "overdue" for itself.
 
-/** The item as every API and scan screen answers it. */
-export function toItemJson(row: ItemRecord) {
+/** The item as every API and scan screen answers it, judged on the organisation's clock. */
+export function toItemJson(row: ItemRecord, clock: Clock) {
   return {
     id: row.id,
     tagCode: row.tagCode,
@@ -27,6 +30,7 @@ export function toItemJson(row: ItemRecord) {
     nextInspectionDue: row.nextInspectionDue,
     lastCheckedAt: row.lastCheckedAt ? new Date(row.lastCheckedAt).toISOString() : null,
     lastInspectedOn: row.lastInspectedOn,
+    usable: itemVerdict(row, clock),
     url: `/items/${row.id}`,
   };
 }

@@ -18,6 +18,8 @@ import { itemFields } from "./item-fields";
 import type { ItemInput } from "./schemas";
 import { nextStatus, type StatusChange } from "./status";
 import { freshTagCodes } from "./tag-codes";
+import { VERDICT_WORDS } from "./usability";
+import { itemVerdict } from "./verdict";
 
 // Everything that changes stock goes through here: permission, organisation, business rule,
 // then one transaction that writes the item, its history event and an audit row.
@@ -121,8 +123,22 @@ async function changeStatus(trx: Tx, actor: Principal, id: string, change: Statu
 async function checklistOf(actor: Principal, id: string, answers: CheckAnswer[]) {
   const current = await itemOf(actor, id);
   const outcome = preUseOutcome(current.kind, answers);
-  if ("error" in outcome) throw badRequest(outcome.error, [{ path: "answers", message: outcome.error }]);
+  if ("error" in outcome) throw badRequest(outcome.error, [{ path: `answers.${outcome.point}`, message: outcome.error }]);
   return { current, outcome };
+}
+
+/**
+ * A pre-use check is for gear that may be used: an item whose verdict says no (tagged out,
+ * overdue for inspection, not rated…) is refused with 409 and the reasons, and the words
+ * say what to do instead. A pass must never read as leave to use it.
+ */
+async function mustBeUsable(actor: Principal, item: items.ItemRecord) {
+  const verdict = itemVerdict(item, await organisationClock(actor.organisationId));
+  if (verdict.ok) return;
+  throw new AppError(409, `Do not use this item, and do not check it: ${verdict.reasons.map((r) => r.message).join(" ")} ${VERDICT_WORDS.setAside}`, [], {
+    code: "NOT_USABLE",
+    reasons: verdict.reasons,
+  });
 }
 
 /** The item of the actor's organisation, or a 404. */
@@ -144,6 +160,7 @@ export interface PreUseCheckInput {
  */
 export async function recordPreUseCheck(actor: Principal, id: string, input: PreUseCheckInput) {
   mustBeAllowed(actor, "items.check");
+  await mustBeUsable(actor, await itemOf(actor, id));
   const { current, outcome } = await checklistOf(actor, id, input.answers);
   if (outcome.outcome === "fail" && !input.note?.trim() && !(input.photo && input.photo.size > 0)) {
     throw fieldError("note", "Say what is wrong, or add a photo, so the owner can judge the damage.");
@@ -155,7 +172,7 @@ export async function recordPreUseCheck(actor: Principal, id: string, input: Pre
       const tagOut = { organisationId: actor.organisationId, itemId: id, type: "tag_out", actorId: actor.userId, note: "Tagged out by a failed pre-use check" };
       const [eventId, tagOutId] = await items.insertEvents(outcome.outcome === "fail" ? [check, tagOut] : [check], trx);
       if (stored) await items.insertAttachment({ organisationId: actor.organisationId, itemId: id, eventId, purpose: "damage-photo", ...stored, createdBy: actor.userId }, trx);
-      await items.updateItem(actor.organisationId, id, { status, checked: true }, trx);
+      await items.updateItem(actor.organisationId, id, { status, checked: outcome.outcome }, trx);
       await audit({ action: outcome.outcome === "pass" ? "item.check_pass" : "item.check_fail", entity: "item", entityId: id, after: { status } });
       if (outcome.outcome === "fail") {
         await queueTagOutMail(trx, { organisationId: actor.organisationId, eventId: tagOutId!, reporterName: actor.name, item: current, defects: outcome.defects, note: input.note?.trim() || null });

@@ -44,15 +44,3 @@ export function nextStatus(current: ItemStatus, change: StatusChange): { status:
   if (!FROM[change].includes(current)) return { error: WHY_NOT[current] };
   return { status: TARGET[change] };
 }
-
-/**
- * "May I use this?" at a glance: usable only when in service and not past its inspection.
- * @example usability("in_service", "2026-01-01", "2026-02-01") // { usable: false, reason: "Periodic inspection overdue since 2026-01-01." }
- */
-export function usability(status: ItemStatus, nextInspectionDue: string | null, today: string): { usable: boolean; reason: string } {
-  if (status !== "in_service") return { usable: false, reason: WHY_NOT[status] };
-  if (nextInspectionDue && nextInspectionDue < today) {
-    return { usable: false, reason: `Periodic inspection overdue since ${nextInspectionDue}. Have it inspected before use.` };
-  }
-  return { usable: true, reason: "Do the pre-use check before every use." };
-}

@@ -168,7 +168,7 @@ describe("pre-use checks and tag-outs", () => {
     expect(noNote.json.issues[0].path).toBe("note");
     const half = await hand.post(`/api/v1/items/${item.id}/events`, { type: "check", answers: [{ id: "cracked", defect: false }] });
     expect(half.status).toBe(400);
-    expect(half.json.issues[0]).toEqual({ path: "answers", message: 'Answer every point: "Bent, twisted or stretched links, or links that do not hinge freely" has no answer.' });
+    expect(half.json.issues[0]).toEqual({ path: "answers.bent", message: 'Answer every point: "Bent, twisted or stretched links, or links that do not hinge freely" has no answer.' });
     expect((await hand.get(`/api/v1/items/${item.id}`)).json.status).toBe("in_service");
   });
 });

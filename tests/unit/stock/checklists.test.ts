@@ -30,7 +30,7 @@ describe("pre-use checklists", () => {
   });
 
   it("refuse a half-answered or foreign checklist", () => {
-    expect(preUseOutcome("chain", all("chain").slice(1))).toEqual({ error: 'Answer every point: "Cracked, cut or gouged links" has no answer.' });
-    expect(preUseOutcome("hook", [...all("hook"), { id: "stitching", defect: false }])).toEqual({ error: '"stitching" is not a point of the hook checklist.' });
+    expect(preUseOutcome("chain", all("chain").slice(1))).toEqual({ error: 'Answer every point: "Cracked, cut or gouged links" has no answer.', point: "cracked" });
+    expect(preUseOutcome("hook", [...all("hook"), { id: "stitching", defect: false }])).toEqual({ error: '"stitching" is not a point of the hook checklist.', point: "stitching" });
   });
 });

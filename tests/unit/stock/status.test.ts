@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { nextStatus, usability } from "@/lib/stock/status";
+import { nextStatus } from "@/lib/stock/status";
 import { intervalsWithDefaults, nextDue, DEFAULT_INTERVAL_DAYS } from "@/lib/stock/intervals";
 
 describe("status changes", () => {
@@ -18,14 +18,6 @@ describe("status changes", () => {
       expect(nextStatus("retired", c)).toHaveProperty("error");
     }
     expect(nextStatus("lost", "found")).toEqual({ status: "tagged_out" });
-  });
-});
-
-describe("usability", () => {
-  it("says no to anything not in service, and to an overdue inspection", () => {
-    expect(usability("in_service", "2026-12-31", "2026-12-01").usable).toBe(true);
-    expect(usability("in_service", "2026-11-30", "2026-12-01")).toEqual({ usable: false, reason: "Periodic inspection overdue since 2026-11-30. Have it inspected before use." });
-    expect(usability("tagged_out", null, "2026-12-01").usable).toBe(false);
   });
 });
 

@@ -35,4 +35,28 @@ describe("itemUsability", () => {
     expect(both.reasons.map((r) => r.code)).toEqual(["TAGGED_OUT", "INSPECTION_OVERDUE", "NOT_RATED"]);
     expect(itemUsability({ status: "retired", nextInspectionDue: "2026-01-01", wllLb: 5400 }, "2026-12-01").reasons.map((r) => r.code)).toEqual(["RETIRED"]);
   });
+
+  it("adds the day's pre-use check to a yes, and only when the caller gave the last check", () => {
+    expect(itemUsability(fit, "2026-12-01")).not.toHaveProperty("check");
+    expect(itemUsability({ ...fit, lastCheck: { on: "2026-12-01", passed: true } }, "2026-12-01").check).toEqual({
+      done: true,
+      message: "Pre-use check passed today: no defects found.",
+    });
+    const yesterday = itemUsability({ ...fit, lastCheck: { on: "2026-11-30", passed: true } }, "2026-12-01");
+    expect(yesterday).toMatchObject({ ok: true, check: { done: false } });
+    expect(yesterday.check!.message).toContain("2026-11-30");
+    expect(itemUsability({ ...fit, lastCheck: null }, "2026-12-01").check).toEqual({ done: false, message: "No pre-use check on record: do one before you use it." });
+  });
+
+  it("never counts a failed check as done, even when the item was returned to service the same day", () => {
+    const returned = itemUsability({ ...fit, lastCheck: { on: "2026-12-01", passed: false } }, "2026-12-01");
+    expect(returned.ok).toBe(true);
+    expect(returned.check!.done).toBe(false);
+    expect(returned.check!.message).toMatch(/found defects.*returned to service/);
+  });
+
+  it("gives no check step to gear that may not be used: the reasons are the whole answer", () => {
+    const out = itemUsability({ ...fit, status: "tagged_out", lastCheck: { on: "2026-12-01", passed: false } }, "2026-12-01");
+    expect(out).toEqual({ ok: false, reasons: [expect.objectContaining({ code: "TAGGED_OUT" })] });
+  });
 });

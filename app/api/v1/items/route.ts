@@ -8,12 +8,12 @@ import { toItemJson } from "@/lib/stock/item-json";
 
 /** A page of stock: filters kind, status, yardId, due (overdue | 30d), q (tag code or serial). */
 export const GET = route("stock.view", { query: itemListQuerySchema }, async ({ principal, query }) => {
-  const { today } = await organisationClock(principal.organisationId);
-  const page = await listItems(principal.organisationId, listFilters(query, today));
-  return { data: page.data.map(toItemJson), pageCount: page.pageCount, total: page.total };
+  const clock = await organisationClock(principal.organisationId);
+  const page = await listItems(principal.organisationId, listFilters(query, clock.today));
+  return { data: page.data.map((row) => toItemJson(row, clock)), pageCount: page.pageCount, total: page.total };
 });
 
 export const POST = route("stock.edit", { body: itemInputSchema }, async ({ principal, body }) => {
   const id = await createItem(principal, body);
-  return Response.json(toItemJson((await getItem(principal.organisationId, id))!), { status: 201 });
+  return Response.json(toItemJson((await getItem(principal.organisationId, id))!, await organisationClock(principal.organisationId)), { status: 201 });
 });
