@@ -11,8 +11,11 @@ export function ManualEntry({
   submitLabel = "Open item",
   busyLabel = "Looking up…",
   clearAfter = false,
+  onTyping,
 }: {
   onCode: (code: string) => void;
+  /** Called as the code is typed: the screen drops the answer about the previous code. */
+  onTyping?: () => void;
   busy: boolean;
   children?: React.ReactNode;
   submitLabel?: string;
@@ -47,6 +50,7 @@ export function ManualEntry({
         onChange={(e) => {
           setValue(e.target.value);
           if (error) setError(null);
+          onTyping?.();
         }}
         autoCapitalize="characters"
         autoComplete="off"

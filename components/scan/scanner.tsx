@@ -1,8 +1,7 @@
 "use client";
 import Link from "next/link";
 import { useCallback, useEffect, useRef } from "react";
-import { StatusBadge } from "@/components/ui/status-badge";
-import type { ItemStatus } from "@/lib/stock/labels";
+import { VerdictBadge } from "@/components/items/verdict";
 import { codeFromScan } from "@/lib/tags/entry";
 import { CameraScanner } from "./camera-scanner";
 import { ManualEntry } from "./manual-entry";
@@ -17,7 +16,7 @@ export function Scanner() {
   const before = useCallback(async () => {
     await stopCamera.current?.();
   }, []);
-  const { state, lookUp, fail } = useTagLookup(before);
+  const { state, lookUp, fail, clear } = useTagLookup(before);
   const last = useRef<{ text: string; at: number } | null>(null);
 
   const onText = useCallback(
@@ -36,7 +35,7 @@ export function Scanner() {
     <div className="flex flex-col gap-6">
       <CameraScanner onText={onText} stopRef={stopCamera} />
       {state.step !== "idle" && state.source === "camera" && <LookupResult state={state} />}
-      <ManualEntry onCode={(code) => void lookUp(code, "typed")} busy={state.step === "looking" || state.step === "found"}>
+      <ManualEntry onCode={(code) => void lookUp(code, "typed")} onTyping={clear} busy={state.step === "looking" || state.step === "found"}>
         {state.step !== "idle" && state.source === "typed" && <LookupResult state={state} />}
       </ManualEntry>
     </div>
@@ -54,18 +53,18 @@ function LookupResult({ state }: { state: LookupState }) {
         <p className="rounded-lg border-2 border-ink p-3 text-xl font-bold">Looking up {state.code}…</p>
       )}
       {state.step === "found" && (
-        <div className="flex flex-col gap-2 rounded-lg border-2 border-ok bg-ok-bg p-3 text-xl text-ink">
+        <div className="flex flex-col gap-2 rounded-lg border-2 border-ink p-3 text-xl text-ink">
           <p className="font-bold">
-            Found <span className="font-mono">{state.item.tagCode}</span>: {state.item.description}. Opening…
+            Found <span className="whitespace-nowrap font-mono">{state.item.tagCode}</span>: {state.item.description}. Opening…
           </p>
-          <StatusBadge status={state.item.status as ItemStatus} />
+          <span><VerdictBadge usable={state.item.usable} /></span>
         </div>
       )}
       {state.step === "failed" && (
         <div className="flex flex-col gap-1 rounded-lg border-2 border-stop bg-stop-bg p-3 text-xl font-bold text-stop">
           <p>{state.message}</p>
           {state.unknown && (
-            <Link href={`/t/${state.code}`} className="text-lg underline">
+            <Link href={`/t/${state.code}`} className="inline-flex min-h-tap items-center text-lg underline">
               Check the tag&apos;s public page
             </Link>
           )}

@@ -52,10 +52,15 @@ export function useTagLookup(before?: () => Promise<void> | void) {
     [before, router],
   );
 
+  /** Forgets a failed lookup (a new code is being typed): the old error no longer applies. */
+  const clear = useCallback(() => {
+    if (!busy.current) setState((s) => (s.step === "failed" ? { step: "idle" } : s));
+  }, []);
+
   /** Shows a problem found before asking the server (a QR code that is not a tag). */
   const fail = useCallback((message: string) => {
     if (!busy.current) setState({ step: "failed", code: null, source: "camera", message, unknown: false });
   }, []);
 
-  return { state, lookUp, fail };
+  return { state, lookUp, fail, clear };
 }

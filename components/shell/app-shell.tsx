@@ -46,7 +46,7 @@ export function AppShell({
           <strong><bdi>{organisationName}</bdi></strong>
           <br />
           <bdi>{principal.name}</bdi> · <span className="text-signal">{ROLE_LABELS[principal.role]}</span>
-          {principal.designated && <><br /><span className="text-sm">Designated inspector</span></>}
+          {principal.designated && <><br /><span className="text-sm">Designated person</span></>}
         </p>
         <nav aria-label="Main">
           <NavLinks entries={entries} variant="side" />

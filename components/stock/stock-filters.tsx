@@ -3,7 +3,7 @@ import { buttonClass } from "@/components/ui/button-class";
 import { ITEM_KINDS, ITEM_STATUSES, KIND_LABELS, STATUS_LABELS } from "@/lib/stock/labels";
 
 /** The list's filters as they travel in the page's address (and on to the CSV export). */
-export const FILTER_KEYS = ["kind", "status", "yardId", "due", "q"] as const;
+export const FILTER_KEYS = ["kind", "status", "yardId", "due", "rated", "q"] as const;
 
 /** The search box and the four filters above the stock table; each change goes to the address. */
 export function StockFilters({
@@ -33,9 +33,9 @@ export function StockFilters({
       </form>
       <div className="grid grid-cols-2 gap-2 md:grid-cols-4">
         <Filter label="Kind" value={params.get("kind")} onChange={(v) => setParams({ kind: v })} options={ITEM_KINDS.map((k) => [k, KIND_LABELS[k]])} />
-        <Filter label="Status" value={params.get("status")} onChange={(v) => setParams({ status: v })} options={ITEM_STATUSES.map((s) => [s, STATUS_LABELS[s].label])} />
+        <Filter label="Status" value={params.get("status")} onChange={(v) => setParams({ status: v })} options={[...ITEM_STATUSES.map((s) => [s, STATUS_LABELS[s].label]), ["retired,lost", "Retired or lost"]]} />
         <Filter label="Lives at" value={params.get("yardId")} onChange={(v) => setParams({ yardId: v })} options={yards.map((y) => [y.id, y.name])} />
-        <Filter label="Inspection" value={params.get("due")} onChange={(v) => setParams({ due: v })} options={[["overdue", "Overdue"], ["7d", "Due in 7 days"], ["30d", "Due in 30 days"]]} />
+        <Filter label="Inspection" value={params.get("due")} onChange={(v) => setParams({ due: v })} options={[["overdue", "Overdue"], ["7d", "Due in the next 7 days (not overdue)"], ["30d", "Due in the next 30 days (not overdue)"]]} />
       </div>
     </>
   );

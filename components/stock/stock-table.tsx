@@ -5,12 +5,11 @@ import Link from "next/link";
 import { usePathname, useRouter, useSearchParams } from "next/navigation";
 import { useMemo, useState } from "react";
 import { buttonClass } from "@/components/ui/button-class";
-import { StatusBadge } from "@/components/ui/status-badge";
+import { VerdictBadge } from "@/components/items/verdict";
 import { apiJson } from "@/lib/http/client";
 import type { ItemJson } from "@/lib/stock/item-json";
-import type { ItemStatus } from "@/lib/stock/labels";
 import { BulkActions } from "./bulk-actions";
-import { columns, DueDate, lb, type TableMeta } from "./stock-columns";
+import { columns, DueDate, lb } from "./stock-columns";
 import { FILTER_KEYS, StockFilters } from "./stock-filters";
 
 interface Page {
@@ -19,10 +18,8 @@ interface Page {
   total: number;
 }
 
-
-
-/** The stock list: paged, sorted and filtered on the server, with bulk actions. `today` is the organisation's date. */
-export function StockTable({ yards, canEdit, canExport = false, today }: { yards: { id: string; name: string }[]; canEdit: boolean; canExport?: boolean; today: string }) {
+/** The stock list: paged, sorted and filtered on the server, with bulk actions; each item with its verdict for today. */
+export function StockTable({ yards, canEdit, canExport = false }: { yards: { id: string; name: string }[]; canEdit: boolean; canExport?: boolean }) {
   const params = useSearchParams();
   const router = useRouter();
   const pathname = usePathname();
@@ -71,7 +68,6 @@ export function StockTable({ yards, canEdit, canExport = false, today }: { yards
       setParams({ sort: next[0]?.id ?? null, order: next[0]?.desc ? "desc" : null });
     },
     getCoreRowModel: getCoreRowModel(),
-    meta: { today } satisfies TableMeta,
   });
 
   const selected = Object.keys(rowSelection);
@@ -110,15 +106,15 @@ export function StockTable({ yards, canEdit, canExport = false, today }: { yards
       {/* Phones: one card per item. */}
       <ul className="flex flex-col gap-2 md:hidden">
         {table.getRowModel().rows.map((row) => (
-          <li key={row.id} className="flex items-start gap-3 rounded-xl border-2 border-ink-soft p-3">
-            <div className="pt-1">{flexRender(row.getVisibleCells()[0].column.columnDef.cell, row.getVisibleCells()[0].getContext())}</div>
-            <div className="flex flex-1 flex-col gap-1">
-              <Link href={row.original.url} className="font-mono text-xl font-bold tracking-wider underline">{row.original.tagCode}</Link>
+          <li key={row.id} className="flex items-start gap-2 rounded-xl border-2 border-ink-soft p-2">
+            <div>{flexRender(row.getVisibleCells()[0].column.columnDef.cell, row.getVisibleCells()[0].getContext())}</div>
+            <div className="flex min-w-0 flex-1 flex-col gap-1">
+              <Link href={row.original.url} className="inline-flex min-h-tap items-center self-start whitespace-nowrap font-mono text-xl font-bold tracking-wider underline">{row.original.tagCode}</Link>
               <span className="text-lg">{row.original.description}</span>
               <span className="text-lg font-bold">WLL {lb(row.original.wllLb)}</span>
-              <StatusBadge status={row.original.status as ItemStatus} />
+              <span><VerdictBadge usable={row.original.usable} /></span>
               <span className="text-base text-ink-soft">
-                {row.original.yard?.name ?? "no yard"} · inspection due <DueDate date={row.original.nextInspectionDue} today={today} />
+                {row.original.yard?.name ?? "no yard"} · inspection due <DueDate item={row.original} />
               </span>
             </div>
           </li>
@@ -133,7 +129,7 @@ export function StockTable({ yards, canEdit, canExport = false, today }: { yards
               {hg.headers.map((h) => (
                 <th key={h.id} scope="col" className="py-2 pr-3" aria-sort={h.column.getIsSorted() ? (h.column.getIsSorted() === "desc" ? "descending" : "ascending") : undefined}>
                   {h.column.getCanSort() ? (
-                    <button type="button" onClick={h.column.getToggleSortingHandler()} className="min-h-10 font-bold underline decoration-dotted">
+                    <button type="button" onClick={h.column.getToggleSortingHandler()} className="min-h-tap whitespace-nowrap font-bold underline decoration-dotted">
                       {flexRender(h.column.columnDef.header, h.getContext())}
                       {h.column.getIsSorted() === "asc" ? " ▲" : h.column.getIsSorted() === "desc" ? " ▼" : ""}
                     </button>
@@ -149,7 +145,7 @@ export function StockTable({ yards, canEdit, canExport = false, today }: { yards
           {table.getRowModel().rows.map((row) => (
             <tr key={row.id} className="border-b border-idle">
               {row.getVisibleCells().map((cell) => (
-                <td key={cell.id} className="py-2 pr-3">{flexRender(cell.column.columnDef.cell, cell.getContext())}</td>
+                <td key={cell.id} className="py-1 pr-3">{flexRender(cell.column.columnDef.cell, cell.getContext())}</td>
               ))}
             </tr>
           ))}

@@ -6,7 +6,7 @@ import { cva, type VariantProps } from "class-variance-authority";
 export const buttonVariants = cva("inline-flex items-center justify-center gap-2 border-2 font-bold disabled:opacity-60", {
   variants: {
     variant: {
-      primary: "border-ink bg-signal text-ink hover:bg-signal-dark",
+      primary: "border-deck bg-deck text-white hover:bg-deck-light",
       secondary: "border-ink bg-white text-ink hover:bg-idle-bg",
       danger: "border-stop bg-stop text-white hover:opacity-90",
       /** A harmful action offered beside others (tag out): red words on white. */

@@ -17,6 +17,13 @@ function echo(formData: FormData): Record<string, string> {
   return values;
 }
 
+/** The form-wide line of a refused form: the first problem itself, never a bare "fix the fields". */
+function fixThis(issues: { message: string }[]): string {
+  if (!issues.length) return "Check your answers and send them again.";
+  const more = issues.length - 1;
+  return more ? `${issues[0].message} (${more} more ${more === 1 ? "answer needs" : "answers need"} fixing: each is marked.)` : issues[0].message;
+}
+
 function toState(error: AppError, values: Record<string, string>): FormState {
   const fieldErrors: Record<string, string> = {};
   for (const issue of error.issues) fieldErrors[issue.path] ??= issue.message;
@@ -58,7 +65,8 @@ function run<T>(
       }
       const parsed = schema.safeParse(Object.fromEntries(formData.entries()));
       if (!parsed.success) {
-        return toState(new AppError(400, "Some fields need fixing.", zodIssues(parsed.error)), values);
+        const issues = zodIssues(parsed.error);
+        return toState(new AppError(400, fixThis(issues), issues), values);
       }
       return (await body(parsed.data, principal)) ?? { ok: true };
     } catch (error) {

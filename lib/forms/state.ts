@@ -2,6 +2,11 @@
 export interface FormState {
   ok?: boolean;
   message?: string;
+  /**
+   * How the message reads when it is not the plain outcome: "stop" for a change that was
+   * recorded but means the item may not be used (a failed pre-use check), shown in red.
+   */
+  tone?: "stop";
   fieldErrors?: Record<string, string>;
   values?: Record<string, string>;
 }

@@ -57,6 +57,16 @@ export function passwordResetMail(p: { to: string; link: string; expiresAt: Date
   };
 }
 
+/** How an item came to be tagged out: a pre-use check that found defects, or damage reported directly. */
+export type TagOutCause = "check" | "report";
+
+/**
+ * The owners' e-mail when an item is tagged out, saying what happened: a failed pre-use check
+ * (with its defects) or a damage report (with the reporter's note). `cause` defaults to
+ * "check" when defects are listed, else "report".
+ * @example damageReportMail({ to, reporterName: "Ann", itemDescription: "Chain, grade 70, 3/8 in", tagCode: "K7XM-3HQA", defects: [], note: "Link gouged", link, cause: "report" }).text
+ * // "Ann reported damage on Chain, grade 70, 3/8 in, tag K7XM-3HQA, and tagged it out.\n…"
+ */
 export function damageReportMail(p: {
   to: string;
   reporterName: string;
@@ -65,15 +75,21 @@ export function damageReportMail(p: {
   defects: string[];
   note: string | null;
   link: string;
+  cause?: TagOutCause;
 }): MailMessage {
+  const cause = p.cause ?? (p.defects.length ? "check" : "report");
+  const what =
+    cause === "check"
+      ? `${p.reporterName}'s pre-use check of ${p.itemDescription}, tag ${p.tagCode}, found defects, and the item was tagged out.`
+      : `${p.reporterName} reported damage on ${p.itemDescription}, tag ${p.tagCode}, and tagged it out.`;
   return {
     to: p.to,
     subject: `Tagged out: ${p.itemDescription} (${p.tagCode})`,
     text: [
-      `${p.reporterName} tagged out ${p.itemDescription}, tag ${p.tagCode}, after a pre-use check.`,
+      what,
       "",
       ...(p.defects.length ? ["Defects found:", ...p.defects.map((d) => `- ${d}`), ""] : []),
-      ...(p.note ? [`Note: ${p.note}`, ""] : []),
+      ...(p.note ? [`${cause === "check" ? "Note" : "What is wrong"}: ${p.note}`, ""] : []),
       "It stays out of use until an owner or designated person inspects it and returns it to service or retires it:",
       p.link,
     ].join("\n"),

@@ -35,6 +35,15 @@ export function navFor(actor: Actor): NavEntry[] {
   return ENTRIES.filter((e) => !e.permission || can(actor, e.permission));
 }
 
+/**
+ * What the phone's "More" page lists: the entries the bottom bar has no room for (never one
+ * the bar already shows).
+ * @example moreFor({ role: "yard_hand", designated: false }).map((e) => e.href) // ["/check", "/machines", "/trailers", "/ratings"]
+ */
+export function moreFor(actor: Actor): NavEntry[] {
+  return navFor(actor).filter((e) => !e.primary);
+}
+
 /** The phone's bottom bar: the primary entries and a "More" page for the rest. */
 export function barFor(actor: Actor): NavEntry[] {
   const all = navFor(actor);

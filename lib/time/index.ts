@@ -141,3 +141,15 @@ export function weekday(day: string): string {
 export function clockTimeIn(zone: string, now: Date = new Date()): string {
   return format(new TZDate(now.getTime(), zone), "HH:mm");
 }
+
+/**
+ * A zone as a sentence reads it: "Chicago time" for America/Chicago; UTC as "Coordinated
+ * Universal Time (UTC), until an owner sets the company's time zone in Settings".
+ * @example zoneWords("America/Chicago") // "Chicago time"
+ * @example zoneWords("America/Argentina/Buenos_Aires") // "Buenos Aires time"
+ */
+export function zoneWords(zone: string): string {
+  if (zone === DEFAULT_TIME_ZONE) return "Coordinated Universal Time (UTC), until an owner sets the company's time zone in Settings";
+  const place = zone.split("/").pop()!.replaceAll("_", " ");
+  return `${place} time`;
+}

@@ -1,7 +1,7 @@
 // The one zod-issue mapper: dotted paths, unknown keys at their own path.
 import { describe, expect, it } from "vitest";
 import { z } from "zod";
-import { zodIssues } from "@/lib/field-issues";
+import { plainWords, zodIssues } from "@/lib/field-issues";
 import { securementCheckRequestSchema } from "@/lib/securement";
 
 describe("zodIssues", () => {
@@ -31,5 +31,39 @@ describe("zodIssues", () => {
       { path: "cargo.weight.value", message: "The value must be greater than 0" },
       { path: "extra", message: 'Unknown field "extra"' },
     ]);
+  });
+
+  it("never passes zod's developer English on: each default message gets plain words", () => {
+    const schema = z.object({
+      cost: z.coerce.number().int(),
+      count: z.number().min(1),
+      size: z.number().positive(),
+      name: z.string().min(1).max(5),
+      email: z.email(),
+      yardId: z.uuid(),
+      kind: z.enum(["chain", "binder"]),
+      missing: z.string(),
+      flag: z.boolean(),
+    });
+    const r = schema.safeParse({ cost: "abc", count: 0, size: 0, name: "toolong", email: "x", yardId: "y", kind: "rope", flag: "maybe" });
+    const byPath = Object.fromEntries(zodIssues(r.error!).map((i) => [i.path, i.message]));
+    expect(byPath).toEqual({
+      cost: "Enter a number, in figures.",
+      count: "Enter a number of at least 1.",
+      size: "Enter a number greater than 0.",
+      name: "Keep this to 5 characters or fewer.",
+      email: "Enter an e-mail address, like name@example.com.",
+      yardId: "Choose from the list.",
+      kind: "Choose one of: chain, binder.",
+      missing: "Fill this in.",
+      flag: "Answer yes or no.",
+    });
+    for (const message of Object.values(byPath)) expect(message).not.toMatch(/Invalid|expected|received|NaN/);
+  });
+
+  it("keeps a schema's own words as they are", () => {
+    const r = z.object({ wll: z.number({ error: "Enter the WLL as a number." }) }).safeParse({ wll: "x" });
+    expect(zodIssues(r.error!)).toEqual([{ path: "wll", message: "Enter the WLL as a number." }]);
+    expect(plainWords({ path: [], message: "Say what is wrong." })).toBe("Say what is wrong.");
   });
 });

@@ -6,13 +6,12 @@ import { buttonClass } from "@/components/ui/button-class";
 import { listYards } from "@/db/items";
 import { can } from "@/lib/auth/roles";
 import { requirePage } from "@/lib/auth/session";
-import { organisationClock } from "@/lib/organisations/service";
 
 export const metadata: Metadata = { title: "Stock" };
 
 export default async function StockPage() {
   const principal = await requirePage("stock.view");
-  const [yards, { today }] = await Promise.all([listYards(principal.organisationId), organisationClock(principal.organisationId)]);
+  const yards = await listYards(principal.organisationId);
   return (
     <div className="flex max-w-6xl flex-col gap-4">
       <div className="flex flex-wrap items-center justify-between gap-2">
@@ -27,7 +26,7 @@ export default async function StockPage() {
         </div>
       </div>
       <Suspense>
-        <StockTable yards={yards} canEdit={can(principal, "stock.edit")} canExport={can(principal, "stock.edit")} today={today} />
+        <StockTable yards={yards} canEdit={can(principal, "stock.edit")} canExport={can(principal, "stock.edit")} />
       </Suspense>
     </div>
   );

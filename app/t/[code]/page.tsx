@@ -8,6 +8,8 @@ import { getPrincipal } from "@/lib/auth/session";
 import { tagCodeFromPath } from "@/lib/tags/entry";
 import { clientIp } from "@/lib/http/client-ip";
 import { recordLookup } from "@/lib/tags/lookups";
+import { itemVerdict } from "@/lib/stock/verdict";
+import { todayIn } from "@/lib/time";
 
 export const metadata: Metadata = { title: "Tag", robots: { index: false, follow: false } };
 
@@ -36,7 +38,8 @@ export default async function TagPage({ params }: { params: Promise<{ code: stri
   const organisation = item ? await getOrganisation(item.organisationId) : undefined;
   if (item && organisation?.publicTagView) {
     await recordLookup(ip, true);
-    return <PublicTagView item={item} />;
+    const { timeZone } = organisation;
+    return <PublicTagView item={item} usable={itemVerdict(item, { timeZone, today: todayIn(timeZone) })} />;
   }
 
   // Unknown, or another organisation's private tag: one answer for both. A real code is

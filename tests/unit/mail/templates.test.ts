@@ -2,6 +2,7 @@ import { describe, expect, it } from "vitest";
 import {
   accountExistsInviteMail,
   accountExistsSignUpMail,
+  damageReportMail,
   inviteMail,
   kitCheckMail,
   kitLostItemMail,
@@ -61,5 +62,21 @@ describe("mail templates", () => {
     const m = withUnsubscribe({ to: "a@b.example", subject: "S", text: "Body" }, { what: "the daily digest", why: "you are an owner at Acme", pageLink: "http://x/unsubscribe/t", oneClickLink: "http://x/api/v1/unsubscribe/t", preferencesLink: "http://x/preferences" });
     expect(m.text).toBe("Body\n\n--\nYou get the daily digest because you are an owner at Acme.\nStop the daily digest: http://x/unsubscribe/t\nChoose what Linkyard e-mails you: http://x/preferences");
     expect(m.headers).toEqual({ "List-Unsubscribe": "<http://x/api/v1/unsubscribe/t>", "List-Unsubscribe-Post": "List-Unsubscribe=One-Click" });
+  describe("tag-out mail", () => {
+    const base = { to: "o@b.example", reporterName: "Dell", itemDescription: "Chain, grade 70, 3/8 in", tagCode: "K7XM-3HQA", link: "http://x/items/1" };
+    it("says a direct tag-out was a damage report, not a pre-use check", () => {
+      const m = damageReportMail({ ...base, defects: [], note: "Link gouged near the hook", cause: "report" });
+      expect(m.text).toContain("Dell reported damage on Chain, grade 70, 3/8 in, tag K7XM-3HQA, and tagged it out.");
+      expect(m.text).toContain("What is wrong: Link gouged near the hook");
+      expect(m.text).not.toMatch(/pre-use check/);
+    });
+    it("says a failed pre-use check found defects, and lists them", () => {
+      const m = damageReportMail({ ...base, defects: ["End hooks opened, bent or twisted"], note: null });
+      expect(m.text).toContain("Dell's pre-use check of Chain, grade 70, 3/8 in, tag K7XM-3HQA, found defects, and the item was tagged out.");
+      expect(m.text).toContain("- End hooks opened, bent or twisted");
+    });
+    it("takes a report without defects as a damage report when the cause is not given", () => {
+      expect(damageReportMail({ ...base, defects: [], note: "Bent" }).text).toMatch(/^Dell reported damage/);
+    });
   });
 });

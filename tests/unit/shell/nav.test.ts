@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { barFor, navFor } from "@/lib/shell/nav";
+import { barFor, moreFor, navFor } from "@/lib/shell/nav";
 
 describe("navFor", () => {
   it("shows a yard hand only what a yard hand may open", () => {
@@ -30,5 +30,18 @@ describe("barFor", () => {
       expect(bar.length).toBeLessThanOrEqual(5);
       expect(bar.at(-1)!.href).toBe("/more");
     }
+  });
+});
+
+describe("moreFor", () => {
+  it("lists on the More page only what the bottom bar does not show", () => {
+    for (const role of ["owner", "planner", "yard_hand"] as const) {
+      const actor = { role, designated: false };
+      const bar = new Set(barFor(actor).map((e) => e.href));
+      const more = moreFor(actor).map((e) => e.href);
+      expect(more.filter((h) => bar.has(h))).toEqual([]);
+      expect(new Set([...bar, ...more])).toEqual(new Set([...navFor(actor).map((e) => e.href), "/more"]));
+    }
+    expect(moreFor({ role: "yard_hand", designated: false }).map((e) => e.href)).toEqual(["/check", "/machines", "/trailers", "/ratings"]);
   });
 });

@@ -28,26 +28,24 @@ function measurementsFrom(form: Record<string, unknown>) {
 
 const file = z.instanceof(File).optional();
 
+// One flat object (the event's fields beside the item id and the files), so that a refusal's
+// path is the form's own field name ("note", "reason", "verdict"), marked on the form.
 const eventForm = z.preprocess(
   (raw) => {
     const form = raw as Record<string, unknown>;
     const type = form.type;
-    const base = { type, note: form.note || undefined, reason: form.reason, eventId: form.eventId ? Number(form.eventId) : undefined };
-    if (type === "check") return { body: { ...base, answers: answersFrom(form) }, itemId: form.itemId, photo: form.photo };
+    const base = { type, note: form.note || undefined, reason: form.reason, eventId: form.eventId ? Number(form.eventId) : undefined, itemId: form.itemId };
+    if (type === "check") return { ...base, answers: answersFrom(form), photo: form.photo };
     if (type === "inspection") {
-      return {
-        body: { ...base, answers: answersFrom(form), measurements: measurementsFrom(form), verdict: form.verdict },
-        itemId: form.itemId,
-        certificate: form.certificate,
-      };
+      return { ...base, answers: answersFrom(form), measurements: measurementsFrom(form), verdict: form.verdict, certificate: form.certificate };
     }
-    return { body: base, itemId: form.itemId, photo: form.photo };
+    return { ...base, photo: form.photo };
   },
-  z.object({ body: itemEventSchema, itemId: z.string(), photo: file, certificate: file }),
+  z.intersection(z.object({ itemId: z.string(), photo: file, certificate: file }), itemEventSchema),
 );
 
 const DONE: Record<string, string> = {
-  tag_out: "Tagged out. The owners have been e-mailed.",
+  tag_out: "Tagged out: do not use. Set it aside and hang a red tag on it. The owners have been e-mailed.",
   inspection: "Inspection recorded.",
   return_to_service: "Returned to service.",
   retired: "Retired. It stays in the records.",
@@ -56,14 +54,14 @@ const DONE: Record<string, string> = {
   correction: "Correction recorded. The original entry stays in the history.",
 };
 
-export const itemEventAction = formAction("items.check", eventForm, async ({ body, itemId, photo, certificate }, principal) => {
+export const itemEventAction = formAction("items.check", eventForm, async ({ itemId, photo, certificate, ...body }, principal) => {
   const id = uuidParam(itemId);
   const result = await recordItemEvent(principal, id, body, { photo, certificate });
   revalidatePath(`/items/${id}`);
   if (body.type === "check" && result && "outcome" in result) {
     return result.outcome === "pass"
-      ? { ok: true, message: "Check recorded: no defects found. Keep an eye on it during the trip." }
-      : { ok: true, message: "Check failed: the item is tagged out and the owners have been e-mailed. Do not use it." };
+      ? { ok: true, message: "Check passed: no defects found. It may be used today; if you see damage later, stop and tag it out." }
+      : { ok: true, tone: "stop", message: "Tagged out: do not use. Set it aside and hang a red tag on it. The owners have been e-mailed." };
   }
   return { ok: true, message: DONE[body.type] ?? "Recorded." };
 });

@@ -2,8 +2,7 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { EventList } from "@/components/items/event-list";
 import { CertificateForm, ReasonForm, TagOutForm } from "@/components/items/item-event-forms";
-import { UsabilityBanner } from "@/components/items/usability-banner";
-import { StatusBadge } from "@/components/ui/status-badge";
+import { VerdictBlock } from "@/components/items/verdict";
 import { buttonClass } from "@/components/ui/button-class";
 import { listEvents } from "@/db/items";
 import { can } from "@/lib/auth/roles";
@@ -12,8 +11,9 @@ import { requireItemPage } from "@/lib/stock/page-item";
 import type { ItemKind, ItemStatus } from "@/lib/stock/labels";
 import { itemRating } from "@/lib/stock/rating";
 import { describeItem, sizeLabel } from "@/lib/stock/describe";
+import { itemVerdict } from "@/lib/stock/verdict";
 import { unmarkedChainWords } from "@/lib/stock/wll-words";
-import { formatDay } from "@/lib/time";
+import { formatDateTime, zoneWords } from "@/lib/time";
 import { certificateAction, itemEventAction } from "./actions";
 
 export const metadata: Metadata = { title: "Item" };
@@ -30,24 +30,69 @@ function Fact({ label, children }: { label: string; children: React.ReactNode })
   );
 }
 
+/** A less frequent action, folded until asked for. */
+function Folded({ summary, tone = "idle", children }: { summary: string; tone?: "idle" | "ink"; children: React.ReactNode }) {
+  return (
+    <details className={`rounded-xl border-2 px-4 ${tone === "ink" ? "border-ink" : "border-idle"}`}>
+      <summary className="flex min-h-tap cursor-pointer items-center text-lg font-bold">{summary}</summary>
+      <div className="pb-4">{children}</div>
+    </details>
+  );
+}
+
+/**
+ * An item's page, in the order a yard hand needs it: the tag code (to compare with the tag in
+ * hand), the verdict (may I use it?), the one thing to do now (check it, or tag it out), then
+ * the rating, the details and the history.
+ */
 export default async function ItemPage({ params }: { params: Promise<{ id: string }> }) {
   const { principal, id, item, clock } = await requireItemPage("stock.view", params);
   const events = await listEvents(principal.organisationId, id);
   const status = item.status as ItemStatus;
+  const usable = itemVerdict(item, clock);
   const rating = itemRating({ kind: item.kind as ItemKind, grade: item.grade, gradeMarked: item.gradeMarked, size: item.size, markedWllLb: item.markedWllLb, details: item.details });
-  const lastCheck = events.find((e) => e.type === "check");
   const details = item.details as { mechanism?: string; chainSizeRange?: [string, string]; ends?: string };
-  const overdue = item.nextInspectionDue !== null && item.nextInspectionDue < clock.today;
+  const overdue = usable.reasons.some((r) => r.code === "INSPECTION_OVERDUE");
+  const mayCheck = can(principal, "items.check");
+  const mayInspect = can(principal, "items.inspect");
 
   return (
     <div className="flex max-w-3xl flex-col gap-5">
       <header className="flex flex-col gap-1">
-        <p className="font-mono text-2xl font-bold tracking-widest">{item.tagCode}</p>
-        <h1 className="text-3xl font-bold">{describeItem(item)}</h1>
-        <div><StatusBadge status={status} /></div>
+        <p className="text-base font-bold text-ink-soft">
+          Tag <span className="whitespace-nowrap font-mono text-3xl tracking-wider text-ink" data-testid="item-tag-code">{item.tagCode}</span>
+        </p>
+        <h1 className="text-3xl font-bold leading-tight">{describeItem(item)}</h1>
       </header>
 
-      <UsabilityBanner status={status} nextInspectionDue={item.nextInspectionDue} today={clock.today} />
+      <VerdictBlock usable={usable} />
+
+      <section aria-labelledby="actions-heading" className="flex flex-col gap-3">
+        <h2 id="actions-heading" className="sr-only">What you can do now</h2>
+        {usable.ok && mayCheck && (
+          <Link href={`/items/${id}/check`} className={buttonClass("primary", "", "large")}>
+            {usable.check?.done ? "Check it again" : "Pre-use check"}
+          </Link>
+        )}
+        {status === "in_service" && mayCheck && (
+          <details className="rounded-xl border-2 border-stop px-4" data-testid="tag-out">
+            <summary className="flex min-h-tap cursor-pointer items-center gap-2 text-lg font-bold text-stop">Report damage and tag out</summary>
+            <div className="pb-4">
+              <TagOutForm itemId={id} action={itemEventAction} />
+            </div>
+          </details>
+        )}
+        {status === "tagged_out" && mayInspect && (
+          <Folded summary="Return to service" tone="ink">
+            <ReasonForm itemId={id} action={itemEventAction} type="return_to_service" label="Why may it be used again? (repair done, inspected by…)" button="Return to service" />
+          </Folded>
+        )}
+        {mayInspect && (status === "in_service" || status === "tagged_out") && (
+          <Link href={`/items/${id}/inspect`} className={buttonClass("secondary")}>
+            Periodic inspection
+          </Link>
+        )}
+      </section>
 
       <section aria-labelledby="wll-heading" className="rounded-xl border-2 border-ink p-4">
         <h2 id="wll-heading" className="text-base font-bold text-ink-soft">Working load limit</h2>
@@ -61,30 +106,10 @@ export default async function ItemPage({ params }: { params: Promise<{ id: strin
         ) : (
           <p className="text-2xl font-bold text-stop">Cannot be rated: do not use it in a tiedown</p>
         )}
-        <p className="text-base">Source: {item.wllSource ?? "none"}</p>
         {rating.warnings.map((w) => (
           <p key={w} className="mt-2 rounded-lg border-2 border-caution bg-caution-bg p-2 text-base font-bold text-caution">⚠ {w}</p>
         ))}
-      </section>
-
-      <section aria-labelledby="actions-heading" className="flex flex-col gap-3">
-        <h2 id="actions-heading" className="sr-only">What you can do</h2>
-        {status === "in_service" && can(principal, "items.check") && (
-          <Link href={`/items/${id}/check`} className={buttonClass("primary", "", "large")}>
-            Pre-use check
-          </Link>
-        )}
-        {can(principal, "items.inspect") && (status === "in_service" || status === "tagged_out") && (
-          <Link href={`/items/${id}/inspect`} className={buttonClass("secondary")}>
-            Periodic inspection
-          </Link>
-        )}
-        <div className="flex flex-wrap gap-3">
-          {can(principal, "stock.edit") && status !== "retired" && (
-            <Link href={`/items/${id}/edit`} className={buttonClass("secondary")}>Edit details</Link>
-          )}
-          <Link href={`/tags/sheet?ids=${id}`} className={buttonClass("secondary")}>Print its tag</Link>
-        </div>
+        <p className="mt-2 text-base text-ink-soft">Source: {item.wllSource ?? "none"}</p>
       </section>
 
       <section aria-labelledby="facts-heading" className="flex flex-col gap-2">
@@ -101,7 +126,7 @@ export default async function ItemPage({ params }: { params: Promise<{ id: strin
           <Fact label="Serial or lot">{item.serial ?? "none"}</Fact>
           <Fact label="Lives at">{item.yardName ?? "no yard set"}</Fact>
           <Fact label="Last pre-use check">
-            {lastCheck ? `${formatDay(lastCheck.at, clock.timeZone)}, ${lastCheck.outcome === "pass" ? "no defects" : "defects found"}` : "none recorded"}
+            {item.lastCheckedAt ? `${formatDateTime(item.lastCheckedAt, clock.timeZone)}, ${item.lastCheckPassed === false ? "defects found" : "no defects"}` : "none recorded"}
           </Fact>
           <Fact label="Last periodic inspection">{item.lastInspectedOn ?? "none recorded"}</Fact>
           <Fact label="Next inspection due">
@@ -110,47 +135,40 @@ export default async function ItemPage({ params }: { params: Promise<{ id: strin
         </dl>
       </section>
 
-      {status === "in_service" && can(principal, "items.check") && (
-        <details className="rounded-xl border-2 border-stop p-4">
-          <summary className="min-h-tap cursor-pointer text-lg font-bold text-stop">Report damage and tag out</summary>
-          <TagOutForm itemId={id} action={itemEventAction} />
-        </details>
-      )}
-      {status === "tagged_out" && can(principal, "items.inspect") && (
-        <details className="rounded-xl border-2 border-ink p-4">
-          <summary className="min-h-tap cursor-pointer text-lg font-bold">Return to service</summary>
-          <ReasonForm itemId={id} action={itemEventAction} type="return_to_service" label="Why may it be used again? (repair done, inspected by…)" button="Return to service" />
-        </details>
-      )}
-      {can(principal, "stock.edit") && (status === "in_service" || status === "tagged_out") && (
-        <details className="rounded-xl border-2 border-idle p-4">
-          <summary className="min-h-tap cursor-pointer text-lg font-bold">Mark lost</summary>
-          <ReasonForm itemId={id} action={itemEventAction} type="lost" label="Where was it last seen?" button="Mark lost" />
-        </details>
-      )}
-      {can(principal, "stock.edit") && status === "lost" && (
-        <details className="rounded-xl border-2 border-idle p-4">
-          <summary className="min-h-tap cursor-pointer text-lg font-bold">Mark found</summary>
-          <ReasonForm itemId={id} action={itemEventAction} type="found" label="Where was it found?" button="Mark found" />
-        </details>
-      )}
-      {can(principal, "stock.retire") && status !== "retired" && (
-        <details className="rounded-xl border-2 border-idle p-4">
-          <summary className="min-h-tap cursor-pointer text-lg font-bold">Retire</summary>
-          <ReasonForm itemId={id} action={itemEventAction} type="retired" label="Why is it retired?" button="Retire for good" variant="danger" />
-        </details>
-      )}
-      {can(principal, "stock.edit") && (
-        <details className="rounded-xl border-2 border-idle p-4">
-          <summary className="min-h-tap cursor-pointer text-lg font-bold">Add a certificate or document</summary>
-          <CertificateForm itemId={id} action={certificateAction} />
-        </details>
-      )}
+      <section aria-labelledby="more-heading" className="flex flex-col gap-3">
+        <h2 id="more-heading" className="text-xl font-bold">More</h2>
+        <div className="flex flex-wrap gap-3">
+          {can(principal, "stock.edit") && status !== "retired" && (
+            <Link href={`/items/${id}/edit`} className={buttonClass("secondary")}>Edit details</Link>
+          )}
+          <Link href={`/tags/sheet?ids=${id}`} className={buttonClass("secondary")}>Print its tag</Link>
+        </div>
+        {can(principal, "stock.edit") && (status === "in_service" || status === "tagged_out") && (
+          <Folded summary="Mark lost">
+            <ReasonForm itemId={id} action={itemEventAction} type="lost" label="Where was it last seen?" button="Mark lost" />
+          </Folded>
+        )}
+        {can(principal, "stock.edit") && status === "lost" && (
+          <Folded summary="Mark found">
+            <ReasonForm itemId={id} action={itemEventAction} type="found" label="Where was it found?" button="Mark found" />
+          </Folded>
+        )}
+        {can(principal, "stock.retire") && status !== "retired" && (
+          <Folded summary="Retire">
+            <ReasonForm itemId={id} action={itemEventAction} type="retired" label="Why is it retired?" button="Retire for good" variant="danger" />
+          </Folded>
+        )}
+        {can(principal, "stock.edit") && (
+          <Folded summary="Add a certificate or document">
+            <CertificateForm itemId={id} action={certificateAction} />
+          </Folded>
+        )}
+      </section>
 
       <section aria-labelledby="history-heading" className="flex flex-col gap-2">
         <h2 id="history-heading" className="text-xl font-bold">Service history</h2>
-        <p className="text-base text-ink-soft">Entries are never changed or deleted. A mistake is answered by a correction. Times are in {clock.timeZone.replaceAll("_", " ")}.</p>
-        <EventList itemId={id} events={events} correct={can(principal, "items.check") ? itemEventAction : null} timeZone={clock.timeZone} />
+        <p className="text-base text-ink-soft">Entries are never changed or deleted: a mistake is answered by a correction. Times are {zoneWords(clock.timeZone)}.</p>
+        <EventList itemId={id} events={events} correct={mayCheck ? itemEventAction : null} timeZone={clock.timeZone} />
       </section>
     </div>
   );
