@@ -1,5 +1,6 @@
 import type { Knex } from "knex";
 import { db } from "./index";
+import type { ItemKind } from "@/lib/stock/labels";
 import { fieldColumns, fieldsFromColumns, type ItemFields } from "./items";
 
 // CSV import batches, the values an import replaced, saved column mappings, and the bulk
@@ -113,6 +114,17 @@ export async function lockBatch(organisationId: string, id: string, trx: Knex) {
 export async function createdItemIds(organisationId: string, batchId: string, limit?: number): Promise<string[]> {
   const q = db("items").where({ organisation_id: organisationId, import_batch_id: batchId }).orderBy("tag_code").pluck("id");
   return limit ? q.limit(limit) : q;
+}
+
+/** The items an import added, by tag code: what the done page lists beside "Print N tags". */
+export async function createdItems(organisationId: string, batchId: string, limit: number) {
+  return db("items")
+    .where({ organisation_id: organisationId, import_batch_id: batchId })
+    .orderBy("tag_code")
+    .limit(limit)
+    .select<{ id: string; tagCode: string; kind: ItemKind; grade: number | null; size: string | null; details: Record<string, unknown>; serial: string | null }[]>(
+      "id", "tag_code as tagCode", "kind", "grade", "size", "details", "serial",
+    );
 }
 
 /**

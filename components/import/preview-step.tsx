@@ -15,7 +15,8 @@ export function PreviewStep(props: {
   onCommit: (validOnly: boolean) => void;
 }) {
   const { check } = props;
-  const valid = check.created + check.updated + check.unchanged;
+  // Rows, not items: a row with a quantity makes several items.
+  const valid = check.rows - check.rejected;
   const fatal = check.fatal;
   return (
     <section aria-labelledby="preview-h" className="flex flex-col gap-4">

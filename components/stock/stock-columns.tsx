@@ -37,9 +37,9 @@ export const columns: ColumnDef<ItemJson>[] = [
   { id: "kind", header: "Item", cell: ({ row }) => row.original.description },
   { id: "wllLb", header: "WLL", cell: ({ row }) => <span className="whitespace-nowrap font-bold">{lb(row.original.wllLb)}</span> },
   { id: "status", header: "Usable today?", cell: ({ row }) => <VerdictBadge usable={row.original.usable} /> },
-  { id: "yardName", header: "Lives at", cell: ({ row }) => row.original.yard?.name ?? "" },
+  { id: "yardName", header: "Lives at", cell: ({ row }) => <span className="whitespace-nowrap">{row.original.yard?.name ?? ""}</span> },
   { id: "nextInspectionDue", header: "Inspection due", cell: ({ row }) => <DueDate item={row.original} /> },
-  { id: "serial", header: "Serial", cell: ({ row }) => row.original.serial ?? "" },
+  { id: "serial", header: "Serial", cell: ({ row }) => <span className="whitespace-nowrap">{row.original.serial ?? ""}</span> },
 ];
 
 /** The inspection date; "overdue" only when the verdict says so. */

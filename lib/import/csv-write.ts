@@ -3,6 +3,7 @@
 import { KIND_LABELS, STATUS_LABELS, type ItemKind, type ItemStatus } from "@/lib/stock/labels";
 import type { ItemRecord } from "@/db/items";
 import { toFeet } from "@/lib/securement/units";
+import { REASON_SHORT, type Usability } from "@/lib/stock/usability";
 
 /**
  * A cell a spreadsheet would run as a formula (it starts with =, +, -, @, a tab or a carriage
@@ -38,7 +39,7 @@ export function csvLine(values: readonly (string | number | null | undefined)[],
 /** The export's columns; each one maps to itself on import, or is one Linkyard sets and the import leaves alone. */
 export const EXPORT_HEADERS = [
   "Tag code", "Kind", "Marking", "Grade", "Size", "Marked WLL (lb)", "Binder", "Takes chain", "Length (ft)",
-  "End fittings", "Serial/Lot", "Yard", "In service", "Cost", "Status", "WLL used (lb)", "Inspection due",
+  "End fittings", "Serial/Lot", "Yard", "In service", "Cost", "Status", "WLL used (lb)", "Inspection due", "Usable today",
 ] as const;
 
 /** What the export reads of a stored item. */
@@ -51,10 +52,19 @@ export type ExportItem = Pick<
 const trimZeros = (n: number, decimals: number) => String(Number(n.toFixed(decimals)));
 
 /**
- * An item as a row of the export, in the order of {@link EXPORT_HEADERS}. Lengths go out in
- * feet to 3 decimals, which reads back to the same whole millimetre.
+ * The verdict as a cell: "yes", or "no" with its reasons in a few words.
+ * @example usableCell({ ok: false, reasons: [{ code: "INSPECTION_OVERDUE", message: "…" }] }) // "no: inspection overdue"
  */
-export function exportRow(item: ExportItem): (string | number | null)[] {
+export function usableCell(usable: Usability): string {
+  return usable.ok ? "yes" : `no: ${usable.reasons.map((r) => REASON_SHORT[r.code]).join(", ")}`;
+}
+
+/**
+ * An item as a row of the export, in the order of {@link EXPORT_HEADERS}, with its verdict on
+ * the day of the export. Lengths go out in feet to 3 decimals, which reads back to the same
+ * whole millimetre.
+ */
+export function exportRow(item: ExportItem, usable: Usability): (string | number | null)[] {
   const d = item.details ?? {};
   const range = Array.isArray(d.chainSizeRange) ? (d.chainSizeRange as string[]) : null;
   return [
@@ -75,23 +85,25 @@ export function exportRow(item: ExportItem): (string | number | null)[] {
     STATUS_LABELS[item.status as ItemStatus]?.label ?? item.status,
     item.wllLb,
     item.nextInspectionDue,
+    usableCell(usable),
   ];
 }
 
 /** The template's columns: what a supplier's list usually has, in words the import reads. */
-export const TEMPLATE_HEADERS = ["Kind", "Grade", "Size", "WLL (lb)", "Takes chain", "Length (ft)", "End fittings", "Serial/Lot", "Yard", "In service", "Cost"] as const;
+export const TEMPLATE_HEADERS = ["Kind", "Grade", "Size", "WLL (lb)", "Takes chain", "Length (ft)", "End fittings", "Serial/Lot", "Yard", "In service", "Cost", "Qty"] as const;
 
 /** The template: its header and example rows that import as they are. */
 export function templateCsv(yardName: string | null): string {
   const yard = yardName ?? "";
   const rows: (string | number)[][] = [
-    ["chain", "G70", "3/8", "", "", 20, "grab hook both ends", "SUP-CH-0001", yard, "2026-01-15", "119.00"],
-    ["chain", "80", "10 mm", "", "", 16, "clevis grab hook both ends", "SUP-CH-0002", yard, "2026-01-15", "245.00"],
-    ["ratchet binder", "", "", 5400, "5/16-3/8", "", "", "SUP-BR-0001", yard, "2026-01-15", "69.00"],
-    ["lever binder", "", "", 5400, "5/16-3/8", "", "", "SUP-BR-0002", yard, "2026-01-15", "42.00"],
-    ["web strap", "", "4", 5400, "", 30, "wire hooks", "SUP-WS-0001", yard, "2026-01-15", "49.00"],
-    ["hook", "70", "3/8", 6600, "", "", "clevis grab hook", "SUP-HK-0001", yard, "2026-01-15", "14.00"],
-    ["shackle", "", "5/8", 6500, "", "", "screw pin anchor shackle", "SUP-SH-0001", yard, "2026-01-15", "19.00"],
+    ["chain", "G70", "3/8", "", "", 20, "grab hook both ends", "SUP-CH-0001", yard, "2026-01-15", "119.00", 1],
+    ["chain", "80", "10 mm", "", "", 16, "clevis grab hook both ends", "SUP-CH-0002", yard, "2026-01-15", "245.00", 1],
+    ["ratchet binder", "", "", 5400, "5/16-3/8", "", "", "SUP-BR-0001", yard, "2026-01-15", "69.00", 1],
+    ["lever binder", "", "", 5400, "5/16-3/8", "", "", "SUP-BR-0002", yard, "2026-01-15", "42.00", 1],
+    // A quantity makes that many items from the row, the serial numbered for each (SUP-WS-0001-01 …).
+    ["web strap", "", "4", 5400, "", 30, "wire hooks", "SUP-WS-0001", yard, "2026-01-15", "49.00", 4],
+    ["hook", "70", "3/8", 6600, "", "", "clevis grab hook", "SUP-HK-0001", yard, "2026-01-15", "14.00", 1],
+    ["shackle", "", "5/8", 6500, "", "", "screw pin anchor shackle", "SUP-SH-0001", yard, "2026-01-15", "19.00", 1],
   ];
   return [csvLine([...TEMPLATE_HEADERS]), ...rows.map((r) => csvLine(r))].join("");
 }

@@ -4,7 +4,7 @@
 
 export const IMPORT_FIELDS = [
   "tagCode", "kind", "marking", "grade", "size", "sizeMm", "wll", "wllLb", "wllKg", "mechanism", "chainRange",
-  "length", "lengthFt", "lengthM", "ends", "serial", "yard", "inServiceOn", "cost",
+  "length", "lengthFt", "lengthM", "ends", "serial", "yard", "inServiceOn", "cost", "quantity",
 ] as const;
 export type ImportField = (typeof IMPORT_FIELDS)[number];
 
@@ -32,6 +32,7 @@ export const FIELD_LABELS: Record<ImportField, string> = {
   yard: "Yard",
   inServiceOn: "In service since (date)",
   cost: "Cost ($)",
+  quantity: "Quantity (that many new items from the row)",
 };
 
 /** The column name the template uses for a field, named in errors when the file lacks it. */
@@ -55,6 +56,7 @@ export const FIELD_COLUMN: Record<ImportField, string> = {
   yard: "Yard",
   inServiceOn: "In service",
   cost: "Cost",
+  quantity: "Quantity",
 };
 
 /** Fields that fill the same value: a file may have one column for each group. */
@@ -62,10 +64,10 @@ export const FIELD_GROUP: Record<ImportField, string> = {
   tagCode: "tagCode", kind: "kind", marking: "marking", grade: "grade", size: "size", sizeMm: "size",
   wll: "wll", wllLb: "wll", wllKg: "wll", mechanism: "mechanism", chainRange: "chainRange",
   length: "length", lengthFt: "length", lengthM: "length", ends: "ends", serial: "serial", yard: "yard",
-  inServiceOn: "inServiceOn", cost: "cost",
+  inServiceOn: "inServiceOn", cost: "cost", quantity: "quantity",
 };
 
-type Base = "tagCode" | "kind" | "marking" | "grade" | "size" | "wll" | "mechanism" | "chainRange" | "length" | "ends" | "serial" | "yard" | "inServiceOn" | "cost";
+type Base = "tagCode" | "kind" | "marking" | "grade" | "size" | "wll" | "mechanism" | "chainRange" | "length" | "ends" | "serial" | "yard" | "inServiceOn" | "cost" | "quantity";
 
 /** Header words (lower case, punctuation as spaces, units taken out) for each field. */
 const ALIASES: Record<Base, string[]> = {
@@ -83,10 +85,11 @@ const ALIASES: Record<Base, string[]> = {
   yard: ["yard", "location", "lives at", "stored at", "site", "yard name"],
   inServiceOn: ["in service", "in service on", "in service since", "in service date", "date", "date in service", "purchase date", "purchased", "date purchased", "bought"],
   cost: ["cost", "price", "unit price", "unit cost", "cost each", "price each"],
+  quantity: ["qty", "quantity", "qty ordered", "quantity ordered", "pcs", "pieces", "how many", "count", "no of items", "number of items"],
 };
 
 /** Columns that Linkyard writes in its export and sets itself: known, but not imported. */
-const EXPORT_ONLY = ["status", "wll used", "rated wll", "effective wll", "inspection due", "next inspection due", "next inspection", "description", "wll source", "last inspected"];
+const EXPORT_ONLY = ["status", "wll used", "rated wll", "effective wll", "inspection due", "next inspection due", "next inspection", "description", "wll source", "last inspected", "usable today", "usable"];
 
 const WEIGHT_UNITS: Record<string, "lb" | "kg"> = { lb: "lb", lbs: "lb", pound: "lb", pounds: "lb", "#": "lb", kg: "kg", kgs: "kg", kilo: "kg", kilos: "kg", kilogram: "kg", kilograms: "kg" };
 const LENGTH_UNITS: Record<string, "ft" | "m" | "in" | "mm"> = { ft: "ft", feet: "ft", foot: "ft", m: "m", metre: "m", metres: "m", meter: "m", meters: "m", in: "in", inch: "in", inches: "in", mm: "mm" };

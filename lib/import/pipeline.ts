@@ -8,6 +8,16 @@ import type { CsvFatal, CsvRecord } from "./csv";
 import { autoMap, resolveMapping, uniqueHeaders, type ColumnMapping } from "./fields";
 import type { ItemFields } from "@/db/items";
 import { RowReader, rowChanges, storedFields, type ExistingItem, type ReadRow, type RowError } from "./row-reader";
+import { quantitySerials } from "./values";
+
+/**
+ * The serials a row brings: its own, or, for a row with a quantity, one per item made
+ * ("BR-7-01", "BR-7-02", …), each checked for duplicates like any other serial.
+ */
+function rowSerials(r: Pick<ReadRow, "serial" | "quantity">): string[] {
+  if (r.quantity > 1) return quantitySerials(r.serial, r.quantity).filter((s): s is string => s !== undefined);
+  return r.serial ? [r.serial] : [];
+}
 
 export interface PreparedCreate {
   line: number;
@@ -63,6 +73,8 @@ export interface PreviewRow {
   inServiceOn: string | null;
   costCents: number | null;
   changes?: Record<string, [unknown, unknown]>;
+  /** How many new items the row makes, when more than one (a quantity column). */
+  quantity?: number;
 }
 
 export interface ImportSummary {
@@ -158,14 +170,24 @@ export async function runImport(records: AsyncIterable<CsvRecord | CsvFatal>, op
       return { ...rr, problems };
     });
 
-    const serials = [...new Set(read.flatMap((r) => (r.serial ? [r.serial] : [])))];
+    const serials = [...new Set(read.flatMap(rowSerials))];
     const tagCodes = [...new Set(read.flatMap((r) => (r.tagCode ? [r.tagCode] : [])))];
     const found = serials.length || tagCodes.length ? await store.findExisting({ serials, tagCodes }) : [];
     const bySerial = new Map(found.filter((f) => f.serial).map((f) => [f.serial!, f]));
     const byTag = new Map(found.map((f) => [f.tagCode, f]));
 
-    // Which stored item each row updates, if any.
+    // Which stored item each row updates, if any. A row with a quantity only makes new items.
     const matched = read.map((r) => {
+      if (r.quantity > 1) {
+        const serialsOfRow = rowSerials(r);
+        const taken = serialsOfRow.map((s) => bySerial.get(s)).find(Boolean);
+        if (taken) {
+          r.problems.push({ line: r.line, column: reader.column("serial"), message: `Serial ${taken.serial} is already item ${taken.tagCode} in your stock. A row with a quantity makes new items, numbering the serial for each (${serialsOfRow[0]} …): give this row a serial of its own.` });
+        } else if (serialsOfRow.some((s) => s.length > 80)) {
+          r.problems.push({ line: r.line, column: reader.column("serial"), message: "With its number added for each item, this serial is longer than 80 characters: shorten it." });
+        }
+        return undefined;
+      }
       if (r.tagCode) {
         const item = byTag.get(r.tagCode);
         if (!item) {
@@ -184,7 +206,9 @@ export async function runImport(records: AsyncIterable<CsvRecord | CsvFatal>, op
     // Each serial, tag code and stored item once per file.
     const keyed = read.map((r, i) => {
       const keys: { key: string; column: string; message: (line: number) => string }[] = [];
-      if (r.serial) keys.push({ key: `s:${r.serial}`, column: reader.column("serial"), message: (l) => `Serial ${r.serial} is already on line ${l}; each serial may appear once in the file.` });
+      for (const serial of rowSerials(r)) {
+        keys.push({ key: `s:${serial}`, column: reader.column("serial"), message: (l) => `Serial ${serial} is already on line ${l}; each serial may appear once in the file${r.quantity > 1 ? " (a row with a quantity numbers its serial for each item)" : ""}.` });
+      }
       if (r.tagCode) keys.push({ key: `t:${r.tagCode}`, column: reader.column("tagCode"), message: (l) => `Tag code ${r.tagCode} is already on line ${l}; each item may appear once in the file.` });
       const item = matched[i];
       if (item) keys.push({ key: `i:${item.id}`, column: r.tagCode ? reader.column("tagCode") : reader.column("serial"), message: (l) => `Line ${l} already updates item ${item.tagCode}; each item may appear once in the file.` });
@@ -241,23 +265,27 @@ export async function runImport(records: AsyncIterable<CsvRecord | CsvFatal>, op
           preview(r.line, "update", row, existing.tagCode, changes);
         }
       } else {
-        summary.created++;
-        creates.push({ line: r.line, input: checked.input, row });
-        preview(r.line, "create", row, null);
+        const serials = r.quantity > 1 ? quantitySerials(checked.input.serial, r.quantity) : [checked.input.serial];
+        for (const serial of serials) {
+          const input = { ...checked.input, serial };
+          creates.push({ line: r.line, input, row: serial === checked.input.serial ? row : storedFields(input) });
+        }
+        summary.created += serials.length;
+        preview(r.line, "create", r.quantity > 1 ? { ...row, serial: serials[0] ? `${serials[0]} … ${serials.at(-1)}` : null } : row, null, undefined, r.quantity);
       }
     }
     if (writing && store.write && (creates.length || updates.length)) await store.write(creates, updates);
     await store.progress?.(summary.rows);
   };
 
-  const preview = (line: number, action: PreviewRow["action"], row: ItemFields, tagCode: string | null, changes?: Record<string, [unknown, unknown]>) => {
+  const preview = (line: number, action: PreviewRow["action"], row: ItemFields, tagCode: string | null, changes?: Record<string, [unknown, unknown]>, quantity = 1) => {
     if (summary.preview.length >= previewRows) return;
     summary.preview.push({
       line, action, tagCode,
       description: describeItem({ kind: row.kind, grade: row.grade, size: row.size, details: row.details }),
       kind: row.kind, grade: row.grade, size: row.size, markedWllLb: row.markedWllLb, wllLb: row.wllLb, wllSource: row.wllSource,
       lengthMm: row.lengthMm, serial: row.serial, yardName: yardName(row.yardId),
-      inServiceOn: row.inServiceOn, costCents: row.costCents, ...(changes && { changes }),
+      inServiceOn: row.inServiceOn, costCents: row.costCents, ...(changes && { changes }), ...(quantity > 1 && { quantity }),
     });
   };
 

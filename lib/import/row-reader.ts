@@ -11,7 +11,7 @@ import { itemFields, MANAGED_DETAILS } from "@/lib/stock/item-fields";
 import { FIELD_COLUMN, headerWords, type ColumnMapping, type ImportField } from "./fields";
 import {
   readChainRange, readCost, readDate, readGrade, readKind, readLength, readMarking, readMechanism,
-  readSize, readTagCode, readWeight, readYard, unneutralise, type Read,
+  readQuantity, readSize, readTagCode, readWeight, readYard, unneutralise, type Read,
 } from "./values";
 
 export interface RowError {
@@ -27,7 +27,10 @@ export type ExistingItem = Pick<ItemRecord, "id" | "tagCode" | keyof ItemFields>
 
 export type InputKey = keyof ItemInput;
 
-const INPUT_OF: Record<Exclude<ImportField, "tagCode">, InputKey> = {
+/** The columns that are not item fields: the tag code (which item) and the quantity (how many). */
+type RowKey = "tagCode" | "quantity";
+
+const INPUT_OF: Record<Exclude<ImportField, RowKey>, InputKey> = {
   kind: "kind", marking: "marking", grade: "grade", size: "size", sizeMm: "size", wll: "markedWll", wllLb: "markedWll",
   wllKg: "markedWll", mechanism: "mechanism", chainRange: "chainSizeRange", length: "length", lengthFt: "length",
   lengthM: "length", ends: "ends", serial: "serial", yard: "yardId", inServiceOn: "inServiceOn", cost: "costCents",
@@ -44,7 +47,7 @@ const FALLBACK_COLUMN: Record<InputKey, string> = {
 /** How a file's columns feed an item: which column fills which input, with its unit. */
 export class RowReader {
   readonly columns: { index: number; header: string; field: ImportField; unit?: string }[];
-  private readonly columnOf = new Map<InputKey | "tagCode", string>();
+  private readonly columnOf = new Map<InputKey | RowKey, string>();
 
   constructor(
     readonly headers: readonly string[],
@@ -62,17 +65,17 @@ export class RowReader {
         : undefined;
       return [{ index, header, field, unit }];
     });
-    for (const c of this.columns) this.columnOf.set(c.field === "tagCode" ? "tagCode" : INPUT_OF[c.field], c.header);
+    for (const c of this.columns) this.columnOf.set(c.field === "tagCode" || c.field === "quantity" ? c.field : INPUT_OF[c.field], c.header);
   }
 
   /** Whether the file has a column for an input. */
-  has(key: InputKey | "tagCode"): boolean {
+  has(key: InputKey | RowKey): boolean {
     return this.columnOf.has(key);
   }
 
   /** The file's column for an input, or the template's name for it. */
-  column(key: InputKey | "tagCode"): string {
-    return this.columnOf.get(key) ?? (key === "tagCode" ? FIELD_COLUMN.tagCode : FALLBACK_COLUMN[key]);
+  column(key: InputKey | RowKey): string {
+    return this.columnOf.get(key) ?? (key === "tagCode" || key === "quantity" ? FIELD_COLUMN[key] : FALLBACK_COLUMN[key]);
   }
 
   /** Reads the mapped cells of a row: the values it sets (a blank cell sets "nothing") and the cells it cannot read. */
@@ -81,6 +84,7 @@ export class RowReader {
     const provided = new Set<InputKey>();
     const errors: RowError[] = [];
     let tagCode: string | undefined;
+    let quantity = 1;
     let kindMechanism: "ratchet" | "lever" | undefined;
     for (const c of this.columns) {
       const cell = unneutralise(fields[c.index] ?? "").trim();
@@ -89,6 +93,13 @@ export class RowReader {
         const r = readTagCode(cell);
         if ("error" in r) errors.push({ line, column: c.header, message: r.error });
         else tagCode = r.value;
+        continue;
+      }
+      if (c.field === "quantity") {
+        if (!cell) continue;
+        const r = readQuantity(cell);
+        if ("error" in r) errors.push({ line, column: c.header, message: r.error });
+        else quantity = r.value;
         continue;
       }
       const key = INPUT_OF[c.field];
@@ -113,10 +124,13 @@ export class RowReader {
       provided.add("mechanism");
     }
     const serial = typeof values.serial === "string" ? values.serial : undefined;
-    return { line, fields, values, provided, tagCode, serial, errors, mechanismFromKind: Boolean(kindMechanism) };
+    if (quantity > 1 && tagCode) {
+      errors.push({ line, column: this.column("quantity"), message: `A quantity makes new items, but this row names tag code ${tagCode}. Set the quantity to 1 to update that item, or leave the tag code empty.` });
+    }
+    return { line, fields, values, provided, tagCode, serial, quantity, errors, mechanismFromKind: Boolean(kindMechanism) };
   }
 
-  private readCell(field: Exclude<ImportField, "tagCode">, cell: string, unit: string | undefined): Read<unknown> {
+  private readCell(field: Exclude<ImportField, RowKey>, cell: string, unit: string | undefined): Read<unknown> {
     switch (field) {
       case "kind": return readKind(cell);
       case "marking": return readMarking(cell);
@@ -181,6 +195,8 @@ export interface ReadRow {
   provided: Set<InputKey>;
   tagCode?: string;
   serial?: string;
+  /** How many new items the row makes (1 when the file has no quantity). */
+  quantity: number;
   errors: RowError[];
   mechanismFromKind: boolean;
 }

@@ -187,6 +187,35 @@ export function readCost(cell: string): Read<number> {
   return { value: Math.round(n * 100) };
 }
 
+/** The most items one row may make (a typing slip of "2000" for "20" should not make 2,000 tags). */
+export const MAX_QUANTITY = 500;
+
+/**
+ * How many items a row makes: a whole number from 1 to {@link MAX_QUANTITY} ("12", "12 pcs", "x12").
+ * @example readQuantity("12 pcs") // { value: 12 }
+ * @example readQuantity("2.5") // { error: '"2.5" is not a number of items: …' }
+ */
+export function readQuantity(cell: string): Read<number> {
+  const m = /^\s*x?\s*(\d{1,6})\s*(x|pcs?|pieces?|ea|each|items?)?\.?\s*$/i.exec(cell);
+  const n = m ? Number(m[1]) : NaN;
+  if (!Number.isInteger(n) || n < 1 || n > MAX_QUANTITY) {
+    return { error: `"${cell}" is not a number of items: write a whole number from 1 to ${MAX_QUANTITY}; the row then makes that many items, each with its own tag.` };
+  }
+  return { value: n };
+}
+
+/**
+ * The serials of the items a row with a quantity makes: the row's serial with a suffix of
+ * two digits or more ("-01" … "-12"; "-001" from 100 items), so that each item keeps a serial
+ * of its own and the batch stays recognisable. No serial, no serials.
+ * @example quantitySerials("BR-2026", 3) // ["BR-2026-01", "BR-2026-02", "BR-2026-03"]
+ */
+export function quantitySerials(serial: string | undefined, quantity: number): (string | undefined)[] {
+  if (!serial) return Array.from({ length: quantity }, () => undefined);
+  const width = Math.max(2, String(quantity).length);
+  return Array.from({ length: quantity }, (_, i) => `${serial}-${String(i + 1).padStart(width, "0")}`);
+}
+
 /** @example readTagCode("k7xm 3hqa") // { value: "K7XM-3HQA" } */
 export function readTagCode(cell: string): Read<string> {
   const code = normaliseTagCode(cell);

@@ -298,7 +298,9 @@ describe("export", () => {
     const lines = res.text.split("\r\n");
     const raw = new Uint8Array(await (await fetch(BASE_URL + "/api/v1/items/export.csv", { headers: { cookie: owner.cookie } })).arrayBuffer());
     expect([...raw.subarray(0, 3)]).toEqual([0xef, 0xbb, 0xbf]); // a byte-order mark, so that spreadsheets read UTF-8
-    expect(lines[0]).toBe("Tag code,Kind,Marking,Grade,Size,Marked WLL (lb),Binder,Takes chain,Length (ft),End fittings,Serial/Lot,Yard,In service,Cost,Status,WLL used (lb),Inspection due");
+    expect(lines[0]).toBe("Tag code,Kind,Marking,Grade,Size,Marked WLL (lb),Binder,Takes chain,Length (ft),End fittings,Serial/Lot,Yard,In service,Cost,Status,WLL used (lb),Inspection due,Usable today");
+    // every row carries the day's verdict, as the stock list shows it
+    expect(lines.slice(1).filter(Boolean).every((l) => /,(yes|"?no: [a-z, ]+"?)$/.test(l))).toBe(true);
     expect(res.text).toContain(`"'=HYPERLINK(""http://x"")",'-FX-1,`);
     const total = await countRows("items", { organisation_id: org.organisationId });
     expect(lines.filter(Boolean)).toHaveLength(total + 1);
@@ -306,7 +308,7 @@ describe("export", () => {
     const before = await footprint();
     const back = await post(owner, "export.csv", res.text);
     expect(back.status).toBe(201);
-    expect(back.json).toMatchObject({ created: 0, rejected: 0, errors: [], unknownColumns: [], setByLinkyard: ["Status", "WLL used (lb)", "Inspection due"] });
+    expect(back.json).toMatchObject({ created: 0, rejected: 0, errors: [], unknownColumns: [], setByLinkyard: ["Status", "WLL used (lb)", "Inspection due", "Usable today"] });
     expect(back.json.updated + back.json.unchanged).toBe(total);
     expect(back.json.updated).toBe(0);
     const after = await footprint();

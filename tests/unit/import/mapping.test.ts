@@ -37,7 +37,7 @@ describe("header auto-mapping", () => {
       expect(auto.unknown).toEqual([]);
       expect(new Set(Object.values(auto.mapping).filter(Boolean)).size).toBe(Object.values(auto.mapping).filter(Boolean).length);
     }
-    expect(autoMap([...EXPORT_HEADERS]).setByLinkyard).toEqual(["Status", "WLL used (lb)", "Inspection due"]);
+    expect(autoMap([...EXPORT_HEADERS]).setByLinkyard).toEqual(["Status", "WLL used (lb)", "Inspection due", "Usable today"]);
   });
 
   it("makes headers unique", () => {

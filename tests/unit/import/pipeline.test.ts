@@ -128,6 +128,7 @@ describe("importing rows", () => {
     const store = new MemoryStore();
     const s = await run(templateCsv("Home yard"), store);
     expect(s.errors).toEqual([]);
-    expect(s.created).toBe(7);
+    expect(s).toMatchObject({ rows: 7, created: 10 }); // the web strap row makes 4 items
+    expect(store.creates.filter((c) => c.row.kind === "web-strap").map((c) => c.row.serial)).toEqual(["SUP-WS-0001-01", "SUP-WS-0001-02", "SUP-WS-0001-03", "SUP-WS-0001-04"]);
   });
 });

@@ -55,6 +55,7 @@ export default async function ItemPage({ params }: { params: Promise<{ id: strin
   const overdue = usable.reasons.some((r) => r.code === "INSPECTION_OVERDUE");
   const mayCheck = can(principal, "items.check");
   const mayInspect = can(principal, "items.inspect");
+  const hasActions = (usable.ok && mayCheck) || (status === "in_service" && mayCheck) || (mayInspect && (status === "in_service" || status === "tagged_out"));
 
   return (
     <div className="flex max-w-3xl flex-col gap-5">
@@ -67,39 +68,41 @@ export default async function ItemPage({ params }: { params: Promise<{ id: strin
 
       <VerdictBlock usable={usable} />
 
-      <section aria-labelledby="actions-heading" className="flex flex-col gap-3">
-        <h2 id="actions-heading" className="sr-only">What you can do now</h2>
-        {usable.ok && mayCheck && (
-          <Link href={`/items/${id}/check`} className={buttonClass("primary", "", "large")}>
-            {usable.check?.done ? "Check it again" : "Pre-use check"}
-          </Link>
-        )}
-        {status === "in_service" && mayCheck && (
-          <details className="rounded-xl border-2 border-stop px-4" data-testid="tag-out">
-            <summary className="flex min-h-tap cursor-pointer items-center gap-2 text-lg font-bold text-stop">Report damage and tag out</summary>
-            <div className="pb-4">
-              <TagOutForm itemId={id} action={itemEventAction} />
-            </div>
-          </details>
-        )}
-        {status === "tagged_out" && mayInspect && (
-          <Folded summary="Return to service" tone="ink">
-            <ReasonForm itemId={id} action={itemEventAction} type="return_to_service" label="Why may it be used again? (repair done, inspected by…)" button="Return to service" />
-          </Folded>
-        )}
-        {mayInspect && (status === "in_service" || status === "tagged_out") && (
-          <Link href={`/items/${id}/inspect`} className={buttonClass("secondary")}>
-            Periodic inspection
-          </Link>
-        )}
-      </section>
+      {hasActions && (
+        <section aria-labelledby="actions-heading" className="flex flex-col gap-3">
+          <h2 id="actions-heading" className="sr-only">What you can do now</h2>
+          {usable.ok && mayCheck && (
+            <Link href={`/items/${id}/check`} className={buttonClass("primary", "", "large")}>
+              {usable.check?.done ? "Check it again" : "Pre-use check"}
+            </Link>
+          )}
+          {status === "in_service" && mayCheck && (
+            <details className="rounded-xl border-2 border-stop px-4" data-testid="tag-out">
+              <summary className="flex min-h-tap cursor-pointer items-center gap-2 text-lg font-bold text-stop">Report damage and tag out</summary>
+              <div className="pb-4">
+                <TagOutForm itemId={id} action={itemEventAction} />
+              </div>
+            </details>
+          )}
+          {status === "tagged_out" && mayInspect && (
+            <Folded summary="Return to service" tone="ink">
+              <ReasonForm itemId={id} action={itemEventAction} type="return_to_service" label="Why may it be used again? (repair done, inspected by…)" button="Return to service" />
+            </Folded>
+          )}
+          {mayInspect && (status === "in_service" || status === "tagged_out") && (
+            <Link href={`/items/${id}/inspect`} className={buttonClass("secondary")}>
+              Periodic inspection
+            </Link>
+          )}
+        </section>
+      )}
 
       <section aria-labelledby="wll-heading" className="rounded-xl border-2 border-ink p-4">
         <h2 id="wll-heading" className="text-base font-bold text-ink-soft">Working load limit</h2>
         {item.wllLb ? (
           <>
             <p className="text-5xl font-bold">
-              {lb(item.wllLb)} <span className="text-2xl">({kg(item.wllLb)})</span>
+              <span className="whitespace-nowrap">{lb(item.wllLb)}</span> <span className="whitespace-nowrap text-2xl">({kg(item.wllLb)})</span>
             </p>
             {unmarkedChainWords(item) && <p className="text-xl font-bold">{unmarkedChainWords(item)}</p>}
           </>

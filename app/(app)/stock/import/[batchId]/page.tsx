@@ -3,7 +3,8 @@ import Link from "next/link";
 import { notFound } from "next/navigation";
 import { UndoImportButton } from "@/components/import/undo-import";
 import { buttonClass } from "@/components/ui/button-class";
-import { createdItemIds, getBatch } from "@/db/imports";
+import { createdItems, getBatch } from "@/db/imports";
+import { describeItem } from "@/lib/stock/describe";
 import { requirePage } from "@/lib/auth/session";
 import { organisationClock } from "@/lib/organisations/service";
 import { formatDateTime } from "@/lib/time";
@@ -22,11 +23,12 @@ export default async function ImportResultPage({ params }: { params: Promise<{ b
   if (!isUuid(batchId)) notFound();
   const batch = await getBatch(principal.organisationId, batchId);
   if (!batch) notFound();
-  const [ids, undo, { timeZone }] = await Promise.all([
-    batch.status === "committed" ? createdItemIds(principal.organisationId, batchId, SHEET * MAX_SHEETS) : Promise.resolve([]),
+  const [created, undo, { timeZone }] = await Promise.all([
+    batch.status === "committed" ? createdItems(principal.organisationId, batchId, SHEET * MAX_SHEETS) : Promise.resolve([]),
     undoState(principal.organisationId, batch),
     organisationClock(principal.organisationId),
   ]);
+  const ids = created.map((i) => i.id);
   const sheets: string[][] = [];
   for (let i = 0; i < ids.length; i += SHEET) sheets.push(ids.slice(i, i + SHEET));
 
@@ -69,6 +71,19 @@ export default async function ImportResultPage({ params }: { params: Promise<{ b
             )}
           </div>
           {batch.created > ids.length && <p className="text-base text-ink-soft">The first {n(ids.length)} of {n(batch.created)} are linked here; select the rest on the stock page to print them.</p>}
+          <details className="rounded-lg border-2 border-ink-soft px-3" open={created.length <= 30}>
+            <summary className="flex min-h-tap cursor-pointer items-center text-lg font-bold">The new tag codes ({n(created.length)})</summary>
+            <ul className="grid grid-cols-1 gap-1 pb-3 sm:grid-cols-2" data-testid="new-tag-codes">
+              {created.map((i) => (
+                <li key={i.id}>
+                  <Link href={`/items/${i.id}`} className="flex min-h-tap flex-wrap items-center gap-x-3 rounded-md px-1 text-base hover:bg-signal/40">
+                    <span className="whitespace-nowrap font-mono text-lg font-bold underline">{i.tagCode}</span>
+                    <span>{describeItem(i)}{i.serial && <span className="text-ink-soft"> · {i.serial}</span>}</span>
+                  </Link>
+                </li>
+              ))}
+            </ul>
+          </details>
         </section>
       )}
 

@@ -4,16 +4,18 @@ import { route } from "@/lib/http/route";
 import { organisationClock } from "@/lib/organisations/service";
 import { itemListQuerySchema, listFilters } from "@/lib/stock/api-schemas";
 import { csvDownloadHeaders } from "@/lib/http/download";
+import { itemVerdict } from "@/lib/stock/verdict";
 
 /**
  * The stock as CSV, with the stock table's filters and sort (kind, status, yardId, due, q,
- * sort, order), every matching row, streamed. The file imports back as it is: its header
+ * sort, order), every matching row, streamed, each with its verdict for today ("Usable today"). The file imports back as it is: its header
  * maps itself, and each row updates its item by tag code.
  * Owners and planners: the export carries costs and is made for editing and importing back;
  * a yard hand reads the stock on screen.
  */
 export const GET = route("stock.edit", { query: itemListQuerySchema }, async ({ principal, query }) => {
-  const { today } = await organisationClock(principal.organisationId);
+  const clock = await organisationClock(principal.organisationId);
+  const { today } = clock;
   const batches = streamItems(principal.organisationId, listFilters(query, today));
   const encoder = new TextEncoder();
   let started = false;
@@ -27,7 +29,7 @@ export const GET = route("stock.edit", { query: itemListQuerySchema }, async ({ 
       try {
         const next = await batches.next();
         if (next.done) controller.close();
-        else controller.enqueue(encoder.encode(next.value.map((item) => csvLine(exportRow(item))).join("")));
+        else controller.enqueue(encoder.encode(next.value.map((item) => csvLine(exportRow(item, itemVerdict(item, clock)))).join("")));
       } catch (error) {
         console.error("stock export failed", error);
         controller.error(error);
