@@ -1,15 +1,16 @@
 "use client";
 import Link from "next/link";
-import { useActionState, useSyncExternalStore } from "react";
+import { useSyncExternalStore } from "react";
 import { SubmitButton } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
 import { FormAlert } from "@/components/ui/form-alert";
-import { initialFormState, type FormAction } from "@/lib/forms/state";
+import type { FormAction } from "@/lib/forms/state";
+import { useFormAction } from "@/components/ui/use-form-action";
 
 export function SignInForm({ next, action: signIn }: { next?: string; action: FormAction }) {
-  const [state, action] = useActionState(signIn, initialFormState);
+  const { state, formProps } = useFormAction(signIn);
   return (
-    <form action={action} className="flex flex-col gap-2" noValidate>
+    <form {...formProps} className="flex flex-col gap-2">
       <FormAlert state={state} />
       {next && <input type="hidden" name="next" value={next} />}
       <Field label="E-mail" name="email" type="email" autoComplete="email" defaultValue={state.values?.email} error={state.fieldErrors?.email} />
@@ -27,7 +28,7 @@ const noChanges = () => () => {};
 const browserTimeZone = () => Intl.DateTimeFormat().resolvedOptions().timeZone;
 
 export function SignUpForm({ action: signUp }: { action: FormAction }) {
-  const [state, action] = useActionState(signUp, initialFormState);
+  const { state, formProps } = useFormAction(signUp);
   // The company's time zone starts as this browser's (it can be changed in Settings); the
   // server renders it empty and the browser fills it in.
   const timeZone = useSyncExternalStore(noChanges, browserTimeZone, () => "");
@@ -41,7 +42,7 @@ export function SignUpForm({ action: signUp }: { action: FormAction }) {
     );
   }
   return (
-    <form action={action} className="flex flex-col gap-2" noValidate>
+    <form {...formProps} className="flex flex-col gap-2">
       <FormAlert state={state} />
       <input type="hidden" name="timeZone" value={timeZone} readOnly />
       <Field label="Company name" name="organisationName" autoComplete="organization" defaultValue={state.values?.organisationName} error={state.fieldErrors?.organisationName} />
@@ -55,9 +56,9 @@ export function SignUpForm({ action: signUp }: { action: FormAction }) {
 }
 
 export function ForgotPasswordForm({ action: requestReset }: { action: FormAction }) {
-  const [state, action] = useActionState(requestReset, initialFormState);
+  const { state, formProps } = useFormAction(requestReset);
   return (
-    <form action={action} className="flex flex-col gap-2" noValidate>
+    <form {...formProps} className="flex flex-col gap-2">
       <FormAlert state={state} />
       <Field label="E-mail" name="email" type="email" autoComplete="email" defaultValue={state.values?.email} error={state.fieldErrors?.email} />
       <SubmitButton pendingLabel="Sending…">Send reset link</SubmitButton>
@@ -67,9 +68,9 @@ export function ForgotPasswordForm({ action: requestReset }: { action: FormActio
 }
 
 export function ResetPasswordForm({ token, action: resetPassword }: { token: string; action: FormAction }) {
-  const [state, action] = useActionState(resetPassword, initialFormState);
+  const { state, formProps } = useFormAction(resetPassword);
   return (
-    <form action={action} className="flex flex-col gap-2" noValidate>
+    <form {...formProps} className="flex flex-col gap-2">
       <FormAlert state={state} />
       <input type="hidden" name="token" value={token} />
       <Field label="New password" name="password" type="password" autoComplete="new-password" hint="At least 10 characters." error={state.fieldErrors?.password} />
@@ -79,9 +80,9 @@ export function ResetPasswordForm({ token, action: resetPassword }: { token: str
 }
 
 export function AcceptInviteForm({ token, email, action: accept }: { token: string; email: string; action: FormAction }) {
-  const [state, action] = useActionState(accept, initialFormState);
+  const { state, formProps } = useFormAction(accept);
   return (
-    <form action={action} className="flex flex-col gap-2" noValidate>
+    <form {...formProps} className="flex flex-col gap-2">
       <FormAlert state={state} />
       <p className="text-lg">
         Your sign-in e-mail: <strong>{email}</strong>

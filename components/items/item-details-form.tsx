@@ -1,9 +1,10 @@
 "use client";
-import { useActionState, useState } from "react";
+import { useState } from "react";
 import { SubmitButton } from "@/components/ui/button";
 import { Field, SelectField } from "@/components/ui/field";
 import { FormAlert } from "@/components/ui/form-alert";
-import { initialFormState, type FormAction } from "@/lib/forms/state";
+import type { FormAction } from "@/lib/forms/state";
+import { useFormAction } from "@/components/ui/use-form-action";
 import { ITEM_KINDS, KIND_LABELS, type ItemKind } from "@/lib/stock/labels";
 
 export interface ItemFormValues {
@@ -29,7 +30,7 @@ const WEB_WIDTHS = ["1 3/4", "2", "3", "4"];
 
 /** Add or edit an item. The fields shown follow the kind; the server validates everything again. */
 export function ItemForm({ yards, initial, itemId, action: save }: { yards: { id: string; name: string }[]; initial?: ItemFormValues; itemId?: string; action: FormAction }) {
-  const [state, action] = useActionState(save, initialFormState);
+  const { state, formProps } = useFormAction(save);
   const v = { ...initial, ...state.values } as Partial<ItemFormValues>;
   const [kind, setKind] = useState<ItemKind>((v.kind as ItemKind) ?? "chain");
   const [marking, setMarking] = useState(v.marking ?? "grade");
@@ -37,28 +38,33 @@ export function ItemForm({ yards, initial, itemId, action: save }: { yards: { id
   const sizes = kind === "web-strap" ? WEB_WIDTHS : CHAIN_SIZES;
 
   return (
-    <form action={action} className="flex flex-col gap-2" noValidate>
+    // One column on a phone; two on a wider screen, what belongs together side by side.
+    <form {...formProps} className="grid grid-cols-1 gap-x-6 gap-y-2 md:grid-cols-2">
       {itemId && <input type="hidden" name="itemId" value={itemId} />}
-      <FormAlert state={state} />
+      <div className="md:col-span-2"><FormAlert state={state} /></div>
       {itemId ? (
         <input type="hidden" name="kind" value={kind} />
       ) : (
         <SelectField label="Kind" name="kind" value={kind} onChange={(ev) => setKind(ev.target.value as ItemKind)} options={ITEM_KINDS.map((k) => ({ value: k, label: KIND_LABELS[k] }))} error={e.kind} />
       )}
 
-      <fieldset className="flex flex-col gap-2">
+      <fieldset className="grid grid-cols-1 gap-2 md:col-span-2 md:grid-cols-3" aria-invalid={e.marking ? true : undefined} aria-describedby="marking-error">
         <legend className="text-base font-bold">What is marked on it?</legend>
         {[
           ["wll", "A WLL (working load limit)"],
           ["grade", "A grade only"],
           ["none", "Nothing legible"],
         ].map(([value, label]) => (
-          <label key={value} className="flex min-h-tap items-center gap-3 rounded-lg border-2 border-ink-soft px-3 text-lg has-[:checked]:border-ink has-[:checked]:bg-signal/40">
-            <input type="radio" name="marking" value={value} checked={marking === value} onChange={() => setMarking(value as ItemFormValues["marking"])} className="h-5 w-5" />
+          <label
+            key={value}
+            className="group flex min-h-tap cursor-pointer items-center gap-3 rounded-lg border-2 border-ink-soft px-3 text-lg has-[:checked]:border-deck has-[:checked]:bg-deck has-[:checked]:font-bold has-[:checked]:text-white has-[:focus-visible]:ring-4 has-[:focus-visible]:ring-deck-light"
+          >
+            <input type="radio" name="marking" value={value} checked={marking === value} onChange={() => setMarking(value as ItemFormValues["marking"])} className="sr-only" />
+            <span aria-hidden="true" className="w-5 group-has-[:checked]:before:content-['✓']" />
             {label}
           </label>
         ))}
-        <p aria-live="polite" className="min-h-5 text-sm font-bold text-stop">{e.marking}</p>
+        <p id="marking-error" aria-live="polite" className="min-h-5 text-sm font-bold text-stop md:col-span-3">{e.marking}</p>
       </fieldset>
 
       {marking === "wll" && (
@@ -108,7 +114,7 @@ export function ItemForm({ yards, initial, itemId, action: save }: { yards: { id
       <SelectField label="Lives at" name="yardId" defaultValue={v.yardId ?? yards[0]?.id ?? ""} options={[{ value: "", label: "No yard" }, ...yards.map((y) => ({ value: y.id, label: y.name }))]} error={e.yardId} />
       <Field label="In service since (optional)" name="inServiceOn" type="date" defaultValue={v.inServiceOn} error={e.inServiceOn} />
       <Field label="Cost in dollars (optional)" name="cost" inputMode="decimal" defaultValue={v.cost} error={e.costCents} />
-      <SubmitButton pendingLabel="Saving…">{itemId ? "Save changes" : "Add to stock"}</SubmitButton>
+      <SubmitButton pendingLabel="Saving…" className="md:col-span-2 md:justify-self-start md:px-10">{itemId ? "Save changes" : "Add to stock"}</SubmitButton>
     </form>
   );
 }

@@ -81,7 +81,8 @@ function Answer({ name, value, tone, children }: { name: string; value: string; 
       } has-[:checked]:text-white`}
     >
       <input type="radio" name={name} value={value} className="sr-only" />
-      <span aria-hidden="true" className="hidden group-has-[:checked]:inline">{tone === "ok" ? "✓" : "✕"}</span>
+      {/* The mark is drawn by CSS, so that the answer's name stays "No" or "Yes, I see it". */}
+      <span aria-hidden="true" className={tone === "ok" ? "group-has-[:checked]:before:content-['✓']" : "group-has-[:checked]:before:content-['✕']"} />
       {children}
     </label>
   );
@@ -93,7 +94,7 @@ function Answer({ name, value, tone, children }: { name: string; value: string; 
  */
 function Checklist({ points, errors }: { points: readonly CheckPoint[]; errors?: Record<string, string> }) {
   return (
-    <fieldset className="flex flex-col gap-3">
+    <fieldset className="grid grid-cols-1 gap-3 lg:grid-cols-2">
       <legend className="mb-2 text-lg font-bold">Do you see any of these?</legend>
       {points.map((p) => {
         const error = errors?.[`answers.${p.id}`];
@@ -137,7 +138,7 @@ export function PreUseCheckForm({ itemId, points, notUsable, action: record }: {
       <Checklist points={points} errors={state.fieldErrors} />
       <NoteField label="Note (needed when you found a defect, or add a photo)" error={state.fieldErrors?.note} />
       <PhotoField label="Photo of the damage (optional)" accept="image/jpeg,image/png,image/webp" error={state.fieldErrors?.photo} />
-      <SubmitButton pendingLabel="Recording…">Record the check</SubmitButton>
+      <SubmitButton pendingLabel="Recording…" className="md:self-start md:px-12">Record the check</SubmitButton>
     </form>
   );
 }
@@ -192,7 +193,7 @@ export function InspectionForm({ itemId, points, measurements, action: record }:
       </fieldset>
       <NoteField label="Note" error={e.note} />
       <PhotoField name="certificate" label="Inspection record or certificate (PDF or photo, optional)" accept="application/pdf,image/jpeg,image/png" error={e.certificate} />
-      <SubmitButton pendingLabel="Recording…">Record the inspection</SubmitButton>
+      <SubmitButton pendingLabel="Recording…" className="md:self-start md:px-12">Record the inspection</SubmitButton>
     </form>
   );
 }

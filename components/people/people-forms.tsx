@@ -1,17 +1,17 @@
 "use client";
-import { useActionState } from "react";
 import { SubmitButton } from "@/components/ui/button";
 import { Field, SelectField } from "@/components/ui/field";
 import { FormAlert } from "@/components/ui/form-alert";
 import { ROLE_LABELS, ROLES, type Role } from "@/lib/auth/roles";
-import { initialFormState, type FormAction } from "@/lib/forms/state";
+import type { FormAction } from "@/lib/forms/state";
+import { useFormAction } from "@/components/ui/use-form-action";
 
 const roleOptions = ROLES.map((r) => ({ value: r, label: ROLE_LABELS[r] }));
 
 export function InviteForm({ action: invite }: { action: FormAction }) {
-  const [state, action] = useActionState(invite, initialFormState);
+  const { state, formProps } = useFormAction(invite);
   return (
-    <form action={action} className="flex flex-col gap-2 rounded-xl border-2 border-ink-soft p-4" noValidate>
+    <form {...formProps} className="flex flex-col gap-2 rounded-xl border-2 border-ink-soft p-4">
       <h2 className="text-xl font-bold">Invite someone</h2>
       <FormAlert state={state} />
       <Field label="E-mail" name="email" type="email" defaultValue={state.ok ? "" : state.values?.email} error={state.fieldErrors?.email} />
@@ -34,10 +34,10 @@ export function PersonRow({
   isSelf: boolean;
   action: FormAction;
 }) {
-  const [state, action] = useActionState(update, initialFormState);
+  const { state, formProps } = useFormAction(update);
   return (
     <li className="rounded-xl border-2 border-ink-soft p-4">
-      <form action={action} className="flex flex-col gap-2" noValidate>
+      <form {...formProps} className="flex flex-col gap-2">
         <p className="text-xl font-bold">
           <bdi>{person.name}</bdi> {isSelf && <span className="text-base font-normal">(you)</span>}
           {person.disabled && <span className="ml-2 rounded bg-idle-bg px-2 text-base text-idle">Disabled</span>}
@@ -63,9 +63,9 @@ export function PersonRow({
 }
 
 export function WithdrawInviteButton({ inviteId, email, action: withdraw }: { inviteId: string; email: string; action: FormAction }) {
-  const [state, action] = useActionState(withdraw, initialFormState);
+  const { state, formProps } = useFormAction(withdraw);
   return (
-    <form action={action} className="flex flex-col gap-1">
+    <form {...formProps} className="flex flex-col gap-1">
       <input type="hidden" name="inviteId" value={inviteId} />
       <SubmitButton variant="secondary" pendingLabel="Withdrawing…" aria-label={`Withdraw the invite to ${email}`}>
         Withdraw

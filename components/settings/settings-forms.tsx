@@ -1,16 +1,16 @@
 "use client";
-import { useActionState } from "react";
 import { SubmitButton } from "@/components/ui/button";
 import { Field, SelectField } from "@/components/ui/field";
 import { FormAlert } from "@/components/ui/form-alert";
 import { ROLE_LABELS, ROLES } from "@/lib/auth/roles";
-import { initialFormState, type FormAction } from "@/lib/forms/state";
+import type { FormAction } from "@/lib/forms/state";
+import { useFormAction } from "@/components/ui/use-form-action";
 import { ITEM_KINDS, KIND_LABELS, type ItemKind } from "@/lib/stock/labels";
 
 export function OrganisationForm({ name, publicTagView, timeZone, timeZones, action: save }: { name: string; publicTagView: boolean; timeZone: string; timeZones: string[]; action: FormAction }) {
-  const [state, action] = useActionState(save, initialFormState);
+  const { state, formProps } = useFormAction(save);
   return (
-    <form action={action} className="flex flex-col gap-2 rounded-xl border-2 border-ink-soft p-4" noValidate>
+    <form {...formProps} className="flex flex-col gap-2 rounded-xl border-2 border-ink-soft p-4">
       <h2 className="text-xl font-bold">Company</h2>
       <FormAlert state={state} />
       <Field label="Company name" name="name" defaultValue={state.values?.name ?? name} error={state.fieldErrors?.name} />
@@ -35,9 +35,9 @@ export function OrganisationForm({ name, publicTagView, timeZone, timeZones, act
 }
 
 export function CreateTokenForm({ action: create }: { action: FormAction }) {
-  const [state, action] = useActionState(create, initialFormState);
+  const { state, formProps } = useFormAction(create);
   return (
-    <form action={action} className="flex flex-col gap-2" noValidate>
+    <form {...formProps} className="flex flex-col gap-2">
       <FormAlert state={state} />
       {state.ok && state.values?.secret && (
         <p className="break-all rounded-lg border-2 border-ink bg-signal/30 p-3 font-mono text-base" data-testid="new-token">
@@ -58,9 +58,9 @@ export function CreateTokenForm({ action: create }: { action: FormAction }) {
 }
 
 export function RevokeTokenButton({ tokenId, name, action: revoke }: { tokenId: string; name: string; action: FormAction }) {
-  const [state, action] = useActionState(revoke, initialFormState);
+  const { state, formProps } = useFormAction(revoke);
   return (
-    <form action={action}>
+    <form {...formProps}>
       <input type="hidden" name="tokenId" value={tokenId} />
       <SubmitButton variant="danger" pendingLabel="Revoking…" aria-label={`Revoke token ${name}`}>
         Revoke
@@ -71,9 +71,9 @@ export function RevokeTokenButton({ tokenId, name, action: revoke }: { tokenId: 
 }
 
 export function IntervalsForm({ intervals, action: save }: { intervals: Record<ItemKind, number>; action: FormAction }) {
-  const [state, action] = useActionState(save, initialFormState);
+  const { state, formProps } = useFormAction(save);
   return (
-    <form action={action} className="flex flex-col gap-2 rounded-xl border-2 border-ink-soft p-4" noValidate>
+    <form {...formProps} className="flex flex-col gap-2 rounded-xl border-2 border-ink-soft p-4">
       <h2 className="text-xl font-bold">Periodic inspection, days between</h2>
       <p className="text-base">
         Defaults: a year for chain and hardware (ASME B30.26 asks at most a year in normal service),

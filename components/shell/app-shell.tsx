@@ -23,7 +23,7 @@ export function AppShell({
   return (
     <div className="min-h-dvh md:grid md:grid-cols-[15rem_1fr] print:block">
       <header className="sticky top-0 z-10 flex items-center justify-between gap-3 bg-deck px-4 py-2 text-white md:hidden print:hidden">
-        <Link href="/" className="flex items-center gap-2 text-xl font-bold">
+        <Link href="/" className="flex min-h-tap items-center gap-2 text-xl font-bold">
           <Logo className="h-8 w-8" />
           Linkyard
         </Link>
@@ -38,7 +38,7 @@ export function AppShell({
       </header>
 
       <aside className="hidden bg-deck p-4 text-white md:flex md:flex-col md:gap-6 print:hidden">
-        <Link href="/" className="flex items-center gap-2 text-2xl font-bold">
+        <Link href="/" className="flex min-h-tap items-center gap-2 text-2xl font-bold">
           <Logo />
           Linkyard
         </Link>

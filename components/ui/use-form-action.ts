@@ -4,7 +4,7 @@ import { initialFormState, type FormAction } from "@/lib/forms/state";
 
 /**
  * A server-action form that forgives a gloved mistake: a refused answer keeps every value
- * already given (the form is not reset, files included), and focus moves to the first field
+ * already given (the form is not reset, files included; it is after a success), and focus moves to the first field
  * marked at fault (`aria-invalid="true"`, in page order), or to the form's message when no
  * field is named. Without JavaScript the form still posts to the action.
  *
@@ -17,9 +17,11 @@ export function useFormAction(record: FormAction) {
   const ref = useRef<HTMLFormElement>(null);
 
   useEffect(() => {
-    if (state.ok !== false) return;
     const form = ref.current;
     if (!form) return;
+    // Done: the form starts afresh for the next entry (as a form action would).
+    if (state.ok === true) return form.reset();
+    if (state.ok !== false) return;
     const marked = form.querySelector<HTMLElement>('[aria-invalid="true"]');
     // A question (a group of answers) is marked as a whole: its first answer takes the focus.
     const target =

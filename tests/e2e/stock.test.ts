@@ -42,15 +42,14 @@ describe("the item page answers 'may I use this?'", () => {
     const page = await phone.context.newPage();
     await signIn(page, "yara");
     for (const status of ["in_service", "tagged_out", "retired", "lost"]) {
-      // An in-service item whose inspection is not yet due, so the page must say "In service".
+      // An in-service item whose inspection is not yet due, so the verdict must say "Usable".
       const target =
         status === "in_service"
           ? await testDb("items").where({ organisation_id: demoOrg, status }).where("next_inspection_due", ">", testDb.raw("current_date")).orderBy("tag_code").first("id")
           : await demoItem({ status });
       await page.goto(`${BASE_URL}/items/${target.id}`);
-      const banner = page.getByRole("status").first();
-      const text = await banner.textContent();
-      expect(text).toContain(status === "in_service" ? "In service" : "Do not use");
+      const text = await page.locator("[data-verdict]").textContent();
+      expect(text).toContain(status === "in_service" ? "Usable" : "Do not use");
       expect(await page.locator("main").textContent()).toContain("Working load limit");
       await page.screenshot({ path: `${SCREENSHOT_DIR}/item-${status}-phone.png`, fullPage: true });
     }
@@ -80,7 +79,7 @@ describe("a failed pre-use check", () => {
     await page.getByLabel("Photo of the damage (optional)").setInputFiles({ name: "handle.png", mimeType: "image/png", buffer: PNG.sync.write(photo) });
     await page.screenshot({ path: `${SCREENSHOT_DIR}/check-filled-phone.png`, fullPage: true });
     await page.getByRole("button", { name: "Record the check" }).click();
-    await expect.poll(() => page.getByRole("status").first().textContent(), { timeout: 15_000 }).toContain("Check failed: the item is tagged out");
+    await expect.poll(() => page.locator("[data-form-alert]").textContent(), { timeout: 15_000 }).toContain("Tagged out: do not use. Set it aside");
     await page.screenshot({ path: `${SCREENSHOT_DIR}/check-failed-phone.png`, fullPage: true });
 
     const row = await testDb("items").where({ id: item.id }).first("status");
@@ -98,7 +97,7 @@ describe("a failed pre-use check", () => {
 
     await page.getByRole("link", { name: "Back to the item" }).click();
     await page.waitForURL(`${BASE_URL}/items/${item.id}`);
-    expect(await page.getByRole("status").first().textContent()).toContain("Do not use");
+    expect(await page.locator("[data-verdict]").textContent()).toContain("Do not use");
     await page.screenshot({ path: `${SCREENSHOT_DIR}/item-after-failed-check-phone.png`, fullPage: true });
     await page.close();
   });
@@ -113,7 +112,7 @@ describe("the stock table", () => {
     await page.screenshot({ path: `${SCREENSHOT_DIR}/stock-table.png`, fullPage: true });
     await page.getByLabel("Status").selectOption("tagged_out");
     await page.waitForURL(/status=tagged_out/);
-    await expect.poll(async () => (await page.locator("tbody tr").allTextContents()).every((t) => t.includes("Tagged out"))).toBe(true);
+    await expect.poll(async () => (await page.locator("tbody tr").allTextContents()).every((t) => t.includes("Do not use: tagged out"))).toBe(true);
     const rows = await page.locator("tbody tr").count();
     await page.getByLabel("Select all on this page").check();
     expect(await page.getByText(/\d+ selected/).textContent()).toBe(`${rows} selected`);

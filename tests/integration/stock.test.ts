@@ -3,6 +3,7 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { callAction, discoveredActions } from "../support/actions";
 import { countRows, testDb } from "../support/db";
 import { addMember, Client, latestMailTo, newOrganisation } from "../support/http";
+import { addDays, todayIn } from "@/lib/time";
 
 const s3 = new S3Client({
   endpoint: process.env.S3_ENDPOINT ?? "http://127.0.0.1:54370",
@@ -158,7 +159,7 @@ describe("pre-use checks and tag-outs", () => {
     // A tagged-out item cannot pass a check.
     const again = await hand.post(`/api/v1/items/${item.id}/events`, { type: "check", answers: await answersFor(hand, item.id, null) });
     expect(again.status).toBe(409);
-    expect(again.json.error).toMatch(/tagged out/);
+    expect(again.json.error).toMatch(/Tagged out/);
   });
 
   it("asks for a note or a photo when a defect is found, and an answer for every point", async () => {
@@ -170,6 +171,56 @@ describe("pre-use checks and tag-outs", () => {
     expect(half.status).toBe(400);
     expect(half.json.issues[0]).toEqual({ path: "answers.bent", message: 'Answer every point: "Bent, twisted or stretched links, or links that do not hinge freely" has no answer.' });
     expect((await hand.get(`/api/v1/items/${item.id}`)).json.status).toBe("in_service");
+  });
+});
+
+describe("the usability verdict", () => {
+  const orgToday = async () => todayIn((await testDb("organisations").where({ id: org.organisationId }).first("time_zone")).time_zone);
+
+  it("is in the item, the list and the tag lookup: usable, with the day's pre-use check still to do", async () => {
+    const item = await newChain();
+    const expected = { ok: true, reasons: [], check: { done: false, message: "No pre-use check on record: do one before you use it." } };
+    expect(item.usable).toEqual(expected);
+    expect((await hand.get(`/api/v1/items/${item.id}`)).json.usable).toEqual(expected);
+    expect((await hand.get(`/api/v1/items?q=${item.tagCode}`)).json.data[0].usable).toEqual(expected);
+    expect((await hand.get(`/api/v1/tags/${item.tagCode}`)).json.usable).toEqual(expected);
+    const passed = await hand.post(`/api/v1/items/${item.id}/events`, { type: "check", answers: await answersFor(hand, item.id, null) });
+    expect(passed.json.item.usable).toEqual({ ok: true, reasons: [], check: { done: true, message: "Pre-use check passed today: no defects found." } });
+  });
+
+  it("refuses the pre-use check of an item overdue for inspection with 409 and the reasons, and records nothing", async () => {
+    const item = await newChain();
+    const yesterday = addDays(await orgToday(), -1);
+    await testDb("items").where({ id: item.id }).update({ next_inspection_due: yesterday });
+    const read = (await hand.get(`/api/v1/items/${item.id}`)).json.usable;
+    expect(read).toEqual({ ok: false, reasons: [{ code: "INSPECTION_OVERDUE", message: `Periodic inspection overdue since ${yesterday}: it may not be used until it is inspected.` }] });
+    const events = await countRows("item_events", { item_id: item.id });
+    const res = await hand.post(`/api/v1/items/${item.id}/events`, { type: "check", answers: await answersFor(hand, item.id, null) });
+    expect(res.status).toBe(409);
+    expect(res.json).toMatchObject({ code: "NOT_USABLE", reasons: [{ code: "INSPECTION_OVERDUE" }] });
+    expect(res.json.error).toContain("Set it aside, hang a red tag on it and tell the owner or a designated person.");
+    expect(await countRows("item_events", { item_id: item.id })).toBe(events);
+    // A damage report is still taken: the item can be tagged out.
+    expect((await hand.post(`/api/v1/items/${item.id}/events`, { type: "tag_out", note: "Overdue and the hook looks opened" })).status).toBe(201);
+  });
+
+  it("lists overdue items apart from those merely due soon, and several statuses at once", async () => {
+    const today = await orgToday();
+    const late = await newChain();
+    const soon = await newChain();
+    await testDb("items").where({ id: late.id }).update({ next_inspection_due: addDays(today, -3) });
+    await testDb("items").where({ id: soon.id }).update({ next_inspection_due: addDays(today, 10) });
+    const ids = async (q: string) => (await hand.get(`/api/v1/items?perPage=100&${q}`)).json.data.map((i: { id: string }) => i.id);
+    expect(await ids("due=overdue")).toContain(late.id);
+    expect(await ids("due=overdue")).not.toContain(soon.id);
+    expect(await ids("due=30d")).toContain(soon.id);
+    expect(await ids("due=30d")).not.toContain(late.id);
+    const lost = await newChain();
+    await hand.post(`/api/v1/items/${lost.id}/events`, { type: "tag_out", note: "Bent" });
+    await org.owner.post(`/api/v1/items/${lost.id}/events`, { type: "retired", reason: "Bent beyond repair" });
+    const out = await hand.get("/api/v1/items?perPage=100&status=retired,lost");
+    expect(out.json.data.map((i: { id: string }) => i.id)).toContain(lost.id);
+    expect(out.json.data.every((i: { status: string }) => ["retired", "lost"].includes(i.status))).toBe(true);
   });
 });
 
@@ -265,8 +316,8 @@ describe("uploads", () => {
     const action = discoveredActions().get("app/(app)/items/[id]/actions.ts#itemEventAction")!;
     const before = await objectCount(`${org.organisationId}/damage-photo/`);
     const jpeg = new File([new Uint8Array([0xff, 0xd8, 0xff, 0xe0, 1, 2, 3, 4])], "damage.jpg", { type: "image/jpeg" });
-    const fields: Record<string, string | Blob> = { type: "check", itemId: item.id, note: "still bent", photo: jpeg };
-    for (const id of ["cracked", "bent", "worn", "hooks", "repairs", "heat"]) fields[`defect_${id}`] = id === "bent" ? "yes" : "no";
+    // A second damage report: the photo is stored first, then the tag-out is refused (already tagged out).
+    const fields: Record<string, string | Blob> = { type: "tag_out", itemId: item.id, note: "still bent", photo: jpeg };
     const text = await callAction(hand, { ...action, page: `/items/${item.id}` }, fields);
     expect(text).toContain("This item is tagged out");
     expect(await objectCount(`${org.organisationId}/damage-photo/`)).toBe(before);

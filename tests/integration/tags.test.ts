@@ -85,6 +85,8 @@ describe("GET /api/v1/tags/{code}", () => {
       nextInspectionDue: null,
       lastCheckedAt: null,
       lastInspectedOn: "2026-10-14",
+      // The verdict for the organisation's today: may be used, and no pre-use check yet.
+      usable: { ok: true, reasons: [], check: { done: false, message: "No pre-use check on record: do one before you use it." } },
       url: `/items/${chain.id}`,
     });
   });
@@ -99,6 +101,7 @@ describe("GET /api/v1/tags/{code}", () => {
     const res = await org.owner.get(`/api/v1/tags/${unrated.tagCode}`);
     expect(res.status).toBe(200);
     expect(res.json).toMatchObject({ wllLb: null, wllKg: null, status: "tagged_out", statusLabel: "Tagged out: do not use", description: "Ratchet binder, for 5/16–3/8 in chain" });
+    expect(res.json.usable).toEqual({ ok: false, reasons: [expect.objectContaining({ code: "TAGGED_OUT" }), expect.objectContaining({ code: "NOT_RATED" })] });
   });
 
   it("answers another organisation's code exactly like an unknown one", async () => {
@@ -193,7 +196,7 @@ describe("the tag resolver /t/{code}", () => {
       const res = await visit(new Client(), chain.tagCode);
       expect(res.status).toBe(200);
       expect(res.headers.get("content-type")).toContain("text/html");
-      for (const words of ["Chain", "Grade", "70", "3/8 in", "WLL 6,600 lb", "In service", "October 14, 2026", "not a substitute for the driver"]) {
+      for (const words of ["Chain", "Grade", "70", "3/8 in", "WLL 6,600 lb", "Usable", "October 14, 2026", "not a substitute for the driver"]) {
         expect(res.text).toContain(words);
       }
       expect(res.text).not.toContain(`SER-${chain.tagCode}`); // no serial
@@ -207,8 +210,9 @@ describe("the tag resolver /t/{code}", () => {
       const res = await visit(new Client(), unrated.tagCode);
       expect(res.status).toBe(200);
       expect(res.text).toContain("No WLL: do not use");
-      expect(res.text).toContain("Tagged out: do not use");
-      expect(res.text).toContain("This item is tagged out. Do not use it");
+      expect(res.text).toContain("Do not use");
+      expect(res.text).toContain("Tagged out: it may not be used until the owner or a designated person inspects it");
+      expect(res.text).toContain("No working load limit: it cannot be counted in a tiedown.");
       expect(res.text).toContain("Ratchet binder");
       expect(res.text).toContain("None on record");
     });

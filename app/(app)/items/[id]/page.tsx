@@ -2,6 +2,7 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { EventList } from "@/components/items/event-list";
 import { CertificateForm, ReasonForm, TagOutForm } from "@/components/items/item-event-forms";
+import { OpensAtTop } from "@/components/items/opens-at-top";
 import { VerdictBlock } from "@/components/items/verdict";
 import { buttonClass } from "@/components/ui/button-class";
 import { listEvents } from "@/db/items";
@@ -59,6 +60,7 @@ export default async function ItemPage({ params }: { params: Promise<{ id: strin
 
   return (
     <div className="flex max-w-3xl flex-col gap-5">
+      <OpensAtTop />
       <header className="flex flex-col gap-1">
         <p className="text-base font-bold text-ink-soft">
           Tag <span className="whitespace-nowrap font-mono text-3xl tracking-wider text-ink" data-testid="item-tag-code">{item.tagCode}</span>

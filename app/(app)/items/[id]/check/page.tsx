@@ -17,7 +17,7 @@ export default async function PreUseCheckPage({ params }: { params: Promise<{ id
   const { id, item, clock } = await requireItemPage("items.check", params);
   const usable = itemVerdict(item, clock);
   return (
-    <div className="flex max-w-xl flex-col gap-4">
+    <div className="flex max-w-4xl flex-col gap-4">
       <Link href={`/items/${id}`} className="inline-flex min-h-tap items-center text-lg font-bold underline">
         ← Back to <span className="ml-1 whitespace-nowrap font-mono">{item.tagCode}</span>
       </Link>

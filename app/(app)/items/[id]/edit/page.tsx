@@ -29,7 +29,7 @@ export default async function EditItemPage({ params }: { params: Promise<{ id: s
     cost: item.costCents != null ? (item.costCents / 100).toFixed(2) : undefined,
   };
   return (
-    <div className="flex max-w-xl flex-col gap-4">
+    <div className="flex max-w-4xl flex-col gap-4">
       <Link href={`/items/${id}`} className="text-lg underline">← {item.tagCode}</Link>
       <h1 className="text-3xl font-bold">Edit {item.tagCode}</h1>
       <ItemForm yards={await listYards(principal.organisationId)} initial={initial} itemId={id} action={editItemAction} />

@@ -14,7 +14,7 @@ export default async function InspectionPage({ params }: { params: Promise<{ id:
   const { id, item } = await requireItemPage("items.inspect", params);
   const kind = item.kind as ItemKind;
   return (
-    <div className="flex max-w-xl flex-col gap-4">
+    <div className="flex max-w-4xl flex-col gap-4">
       <Link href={`/items/${id}`} className="text-lg underline">← {item.tagCode}</Link>
       <h1 className="text-3xl font-bold">Periodic inspection</h1>
       <p className="text-xl">{describeItem(item)} · <span className="font-mono font-bold">{item.tagCode}</span></p>
