@@ -10,7 +10,7 @@ import { can } from "@/lib/auth/roles";
 import { toFeet, toKg } from "@/lib/securement/units";
 import { requireItemPage } from "@/lib/stock/page-item";
 import type { ItemKind, ItemStatus } from "@/lib/stock/labels";
-import { itemRating } from "@/lib/stock/rating";
+import { itemRating, type ItemRating } from "@/lib/stock/rating";
 import { describeItem, sizeLabel } from "@/lib/stock/describe";
 import { itemVerdict } from "@/lib/stock/verdict";
 import { unmarkedChainWords } from "@/lib/stock/wll-words";
@@ -20,6 +20,14 @@ import { certificateAction, itemEventAction } from "./actions";
 export const metadata: Metadata = { title: "Item" };
 
 const lb = (n: number) => `${n.toLocaleString("en-US")} lb`;
+
+/** Where the WLL comes from, in words, before the citation (which stays, under it). */
+const BASIS_WORDS: Record<ItemRating["basis"], string> = {
+  marked: "As marked on the item.",
+  table: "From the published table for its grade and size.",
+  "unmarked-rule": "Not marked: the published figure for unmarked gear.",
+  none: "No figure can be given for it.",
+};
 const kg = (n: number) => `${Math.round(toKg({ value: n, unit: "lb" }).value).toLocaleString("en-US")} kg`;
 
 function Fact({ label, children }: { label: string; children: React.ReactNode }) {
@@ -114,7 +122,8 @@ export default async function ItemPage({ params }: { params: Promise<{ id: strin
         {rating.warnings.map((w) => (
           <p key={w} className="mt-2 rounded-lg border-2 border-caution bg-caution-bg p-2 text-base font-bold text-caution">⚠ {w}</p>
         ))}
-        <p className="mt-2 text-base text-ink-soft">Source: {item.wllSource ?? "none"}</p>
+        <p className="mt-2 text-lg">{BASIS_WORDS[rating.basis]}</p>
+        <p className="text-base text-ink-soft">Source: {item.wllSource ?? "none"}</p>
       </section>
 
       <section aria-labelledby="facts-heading" className="flex flex-col gap-2">
