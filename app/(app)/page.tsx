@@ -48,10 +48,10 @@ export default async function TodayPage() {
 
   return (
     <div className="flex max-w-4xl flex-col gap-6">
-      <header className="flex flex-col gap-1">
+      <div className="flex flex-col gap-1">
         <h1 className="text-3xl font-bold">Today</h1>
         <p className="text-lg text-ink-soft">{writtenDate(today)} · {principal.name}</p>
-      </header>
+      </div>
 
       {can(principal, "stock.view") && (
         <section aria-labelledby="gear-heading" className="flex flex-col gap-3">

@@ -70,7 +70,7 @@ const STATUS_REASONS: Partial<Record<ItemStatus, UsabilityReason>> = {
  *
  * @example
  * itemUsability({ status: "in_service", nextInspectionDue: "2026-11-30", wllLb: 5400 }, "2026-12-01")
- * // { ok: false, reasons: [{ code: "INSPECTION_OVERDUE", message: "Periodic inspection overdue since 2026-11-30: it may not be used until it is inspected." }] }
+ * // { ok: false, reasons: [{ code: "INSPECTION_OVERDUE", message: "Periodic inspection overdue since 2026-11-30: have it inspected before use." }] }
  * @example
  * itemUsability({ status: "in_service", nextInspectionDue: null, wllLb: 5400, lastCheck: { on: "2026-12-01", passed: true } }, "2026-12-01").check
  * // { done: true, message: "Pre-use check passed today: no defects found." }
@@ -82,7 +82,7 @@ export function itemUsability(item: UsabilityInput, on: string): Usability {
   if (item.status !== "retired" && item.nextInspectionDue !== null && item.nextInspectionDue < on) {
     reasons.push({
       code: "INSPECTION_OVERDUE",
-      message: `Periodic inspection overdue since ${item.nextInspectionDue}: it may not be used until it is inspected.`,
+      message: `Periodic inspection overdue since ${item.nextInspectionDue}: have it inspected before use.`,
     });
   }
   if (item.wllLb === null || !(item.wllLb > 0)) {

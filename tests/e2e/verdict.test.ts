@@ -18,6 +18,11 @@ let phone: OpenBrowser;
 let desk: OpenBrowser;
 let org: { id: string; time_zone: string };
 let today: string;
+/** Items of this test's own, added to the demo company, so that no other test's kit or check is disturbed. */
+const mine: Record<"overdue" | "failing" | "firstScreen" | "pages", { id: string; tagCode: string }> = {} as never;
+
+const BINDER = { kind: "binder", marking: "wll", markedWll: { value: 5400, unit: "lb" }, mechanism: "ratchet", chainSizeRange: ["5/16", "3/8"] };
+const CHAIN = { kind: "chain", marking: "grade", grade: 70, size: "3/8 in", length: { value: 20, unit: "ft" } };
 
 beforeAll(async () => {
   mkdirSync(SCREENSHOT_DIR, { recursive: true });
@@ -25,7 +30,17 @@ beforeAll(async () => {
   desk = await openBrowser();
   org = await testDb("organisations").where({ name: "Corvid Hollow Groundworks" }).first("id", "time_zone");
   today = todayIn(org.time_zone);
-});
+  const page = await desk.context.newPage();
+  await signIn(page, "olive");
+  for (const [key, body] of [["overdue", BINDER], ["failing", BINDER], ["firstScreen", CHAIN], ["pages", CHAIN]] as const) {
+    mine[key] = await page.evaluate(async (b) => {
+      const res = await fetch("/api/v1/items", { method: "POST", headers: { "content-type": "application/json" }, body: JSON.stringify(b) });
+      if (res.status !== 201) throw new Error(`adding an item answered ${res.status}`);
+      return (await res.json()) as { id: string; tagCode: string };
+    }, body);
+  }
+  await page.close();
+}, 60_000);
 afterAll(async () => {
   await phone?.close();
   await desk?.close();
@@ -42,17 +57,6 @@ async function signIn(page: Page, who: string) {
 }
 
 const shot = (page: Page, name: string, fullPage = true) => page.screenshot({ path: path.join(SCREENSHOT_DIR, `${name}.png`), fullPage });
-
-/** An in-service item of the demo company, rated, not checked, its inspection not due for a while. */
-async function usableItem(kind: string, skip = 0) {
-  return testDb("items")
-    .where({ organisation_id: org.id, status: "in_service", kind })
-    .whereNotNull("wll_lb")
-    .where("next_inspection_due", ">", addDays(today, 7))
-    .orderBy("tag_code")
-    .offset(skip)
-    .first("id", "tag_code as tagCode");
-}
 
 /** axe-core's violations, with WCAG AAA contrast (7:1 for body text) turned on. */
 async function axeViolations(page: Page): Promise<string[]> {
@@ -86,10 +90,9 @@ async function smallTargets(page: Page): Promise<string[]> {
 
 describe("one verdict", () => {
   it("an overdue binder shows only 'do not use', offers no check, and the API refuses the check with 409", async () => {
-    const binder = await usableItem("binder");
-    const due = await testDb("items").where({ id: binder.id }).first("next_inspection_due");
+    const binder = mine.overdue;
     await testDb("items").where({ id: binder.id }).update({ next_inspection_due: addDays(today, -1) });
-    try {
+    {
       for (const [name, browser] of [["phone", phone], ["desk", desk]] as const) {
         const page = await browser.context.newPage();
         await signIn(page, "yara");
@@ -125,8 +128,6 @@ describe("one verdict", () => {
         await page.close();
       }
       expect((await testDb("items").where({ id: binder.id }).first("last_checked_at")).last_checked_at).toBeNull();
-    } finally {
-      await testDb("items").where({ id: binder.id }).update({ next_inspection_due: due.next_inspection_due });
     }
   });
 
@@ -162,7 +163,7 @@ describe("one verdict", () => {
 
 describe("forms that forgive gloves", () => {
   it("a missing answer and a missing note keep every answer, mark the question or field and move the focus there; a failed check shows red", async () => {
-    const binder = await usableItem("binder", 1);
+    const binder = mine.failing;
     const page = await phone.context.newPage();
     await signIn(page, "yara");
     await page.goto(`${BASE_URL}/items/${binder.id}/check`);
@@ -223,7 +224,7 @@ describe("forms that forgive gloves", () => {
 
 describe("the item page in the yard", () => {
   it("opens at the top with the tag code, and 'Report damage and tag out' inside the first screen", async () => {
-    const chain = await usableItem("chain");
+    const chain = mine.firstScreen;
     const page = await phone.context.newPage();
     await signIn(page, "yara");
     await page.goto(`${BASE_URL}/scan`);
@@ -316,7 +317,7 @@ describe("import, seen by the owner", () => {
 
 describe("every main page, for a thumb and in sunlight", () => {
   const pages = async () => {
-    const chain = await usableItem("chain", 2);
+    const chain = mine.pages;
     const out = await testDb("items").where({ organisation_id: org.id, status: "tagged_out" }).orderBy("tag_code").first("id");
     return { "home": "/", "stock": "/stock", "scan": "/scan", "item": `/items/${chain.id}`, "item-tagged-out": `/items/${out.id}`, "check": `/items/${chain.id}/check`, "more": "/more" };
   };

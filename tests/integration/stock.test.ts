@@ -193,7 +193,7 @@ describe("the usability verdict", () => {
     const yesterday = addDays(await orgToday(), -1);
     await testDb("items").where({ id: item.id }).update({ next_inspection_due: yesterday });
     const read = (await hand.get(`/api/v1/items/${item.id}`)).json.usable;
-    expect(read).toEqual({ ok: false, reasons: [{ code: "INSPECTION_OVERDUE", message: `Periodic inspection overdue since ${yesterday}: it may not be used until it is inspected.` }] });
+    expect(read).toEqual({ ok: false, reasons: [{ code: "INSPECTION_OVERDUE", message: `Periodic inspection overdue since ${yesterday}: have it inspected before use.` }] });
     const events = await countRows("item_events", { item_id: item.id });
     const res = await hand.post(`/api/v1/items/${item.id}/events`, { type: "check", answers: await answersFor(hand, item.id, null) });
     expect(res.status).toBe(409);

@@ -2,6 +2,7 @@ import type { Metadata } from "next";
 import { CheckScreen } from "@/components/securement/check/check-screen";
 import { requirePage } from "@/lib/auth/session";
 import { isUuid } from "@/lib/http/ids";
+import { organisationClock } from "@/lib/organisations/service";
 
 export const metadata: Metadata = { title: "Load check" };
 
@@ -9,7 +10,8 @@ type Search = Record<string, string | string[] | undefined>;
 
 /** The load check; `?saved=<id>` opens a saved check (another organisation's id is simply not found). */
 export default async function CheckPage({ searchParams }: { searchParams: Promise<Search> }) {
-  await requirePage("securement.check");
+  const principal = await requirePage("securement.check");
+  const { timeZone } = await organisationClock(principal.organisationId);
   const saved = (await searchParams).saved;
   const openId = typeof saved === "string" && isUuid(saved) ? saved : undefined;
   return (
@@ -20,7 +22,7 @@ export default async function CheckPage({ searchParams }: { searchParams: Promis
           Do these tiedowns meet the published minimums for this machine (49 CFR 393)? Change the example or start empty, then check. Save a check with a name to open or print it later.
         </p>
       </header>
-      <CheckScreen openId={openId} />
+      <CheckScreen openId={openId} timeZone={timeZone} />
     </div>
   );
 }

@@ -47,7 +47,7 @@ function requestIssues(error: unknown): FieldIssue[] | undefined {
  * The load check: the machine, its tiedowns, the answer of POST /api/v1/securement-checks,
  * and the checks saved by name. `openId` opens a saved check when the screen loads.
  */
-export function CheckScreen({ openId }: { openId?: string }) {
+export function CheckScreen({ openId, timeZone }: { openId?: string; timeZone: string }) {
   const queryClient = useQueryClient();
   const [draft, setDraft] = useState<CheckDraft>(exampleDraft);
   const [open, setOpen] = useState<ReadonlySet<string>>(new Set());
@@ -167,7 +167,7 @@ export function CheckScreen({ openId }: { openId?: string }) {
         </button>
       </div>
 
-      <SavedChecks openId={saved?.id ?? null} onOpen={(id) => opening.mutate(id)} />
+      <SavedChecks openId={saved?.id ?? null} onOpen={(id) => opening.mutate(id)} timeZone={timeZone} />
       {opening.error && (
         <p role="alert" className="rounded-lg border-2 border-stop bg-stop-bg p-3 text-lg font-bold text-stop">
           ✕ {opening.error.message}

@@ -2,16 +2,14 @@
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import Link from "next/link";
 import { useState } from "react";
+import { formatDateTime } from "@/lib/time";
 import { ApiError, deleteSavedCheck, fetchSavedChecks, type SavedCheckLine } from "../api";
 
 export const SAVED_CHECKS_KEY = ["saved-checks"] as const;
 
-function when(iso: string): string {
-  return new Date(iso).toLocaleString("en-US", { month: "short", day: "numeric", year: "numeric", hour: "numeric", minute: "2-digit" });
-}
-
-/** The organisation's saved checks: open one into the form, print it, or delete it (when allowed). */
-export function SavedChecks({ openId, onOpen }: { openId: string | null; onOpen: (id: string) => void }) {
+/** The organisation's saved checks: open one into the form, print it, or delete it (when allowed). Times on the organisation's clock. */
+export function SavedChecks({ openId, onOpen, timeZone }: { openId: string | null; onOpen: (id: string) => void; timeZone: string }) {
+  const when = (iso: string) => formatDateTime(iso, timeZone);
   const queryClient = useQueryClient();
   const list = useQuery({ queryKey: SAVED_CHECKS_KEY, queryFn: fetchSavedChecks });
   const [confirming, setConfirming] = useState<string | null>(null);

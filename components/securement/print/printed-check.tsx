@@ -1,7 +1,7 @@
 import type { SavedCheckAnswer, SecurementCheckRequest } from "@/lib/securement";
 import { formatNumber, SECUREMENT_CAUTION } from "@/lib/securement";
 import { ATTACHMENT_LABELS } from "@/lib/forms/securement-draft";
-import { formatDateTime } from "@/lib/time";
+import { formatDateTime, zoneWords } from "@/lib/time";
 import { CheckResult } from "../check/check-result";
 
 function cargoLine(c: SecurementCheckRequest["cargo"]): string {
@@ -29,7 +29,7 @@ export function PrintedCheck({ check, printedAt, timeZone }: { check: SavedCheck
         <h1 className="text-3xl font-bold leading-tight">{check.name}</h1>
         <p className="text-base">
           Saved by {check.savedBy}, {day(check.savedAt)}
-          {check.updatedAt !== check.savedAt ? `; last changed by ${check.updatedBy}, ${day(check.updatedAt)}` : ""}. Printed {day(printedAt)} ({timeZone}).
+          {check.updatedAt !== check.savedAt ? `; last changed by ${check.updatedBy}, ${day(check.updatedAt)}` : ""}. Printed {day(printedAt)} ({zoneWords(timeZone)}).
         </p>
         <p className="text-base">
           Checked again at printing against the rules as Linkyard applies them today; when it was saved it {check.passAtSave ? "met" : "did not meet"} the published minimums.

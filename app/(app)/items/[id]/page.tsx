@@ -69,12 +69,12 @@ export default async function ItemPage({ params }: { params: Promise<{ id: strin
   return (
     <div className="flex max-w-3xl flex-col gap-5">
       <OpensAtTop />
-      <header className="flex flex-col gap-1">
+      <div className="flex flex-col gap-1">
         <p className="text-base font-bold text-ink-soft">
           Tag <span className="whitespace-nowrap font-mono text-3xl tracking-wider text-ink" data-testid="item-tag-code">{item.tagCode}</span>
         </p>
         <h1 className="text-3xl font-bold leading-tight">{describeItem(item)}</h1>
-      </header>
+      </div>
 
       <VerdictBlock usable={usable} />
 
