@@ -1,6 +1,9 @@
 "use client";
 import { buttonClass } from "@/components/ui/button-class";
-import { ITEM_KINDS, ITEM_STATUSES, KIND_LABELS, STATUS_LABELS } from "@/lib/stock/labels";
+import { ITEM_KINDS, ITEM_STATUSES, KIND_LABELS, type ItemStatus } from "@/lib/stock/labels";
+
+/** A status as a filter names it, short enough for a phone's select (whether it may be used is the verdict's to say). */
+const STATUS_WORDS: Record<ItemStatus, string> = { in_service: "In service", tagged_out: "Tagged out", retired: "Retired", lost: "Lost" };
 
 /** The list's filters as they travel in the page's address (and on to the CSV export). */
 export const FILTER_KEYS = ["kind", "status", "yardId", "due", "rated", "q"] as const;
@@ -33,7 +36,7 @@ export function StockFilters({
       </form>
       <div className="grid grid-cols-2 gap-2 md:grid-cols-4">
         <Filter label="Kind" value={params.get("kind")} onChange={(v) => setParams({ kind: v })} options={ITEM_KINDS.map((k) => [k, KIND_LABELS[k]])} />
-        <Filter label="Status" value={params.get("status")} onChange={(v) => setParams({ status: v })} options={[...ITEM_STATUSES.map((s) => [s, STATUS_LABELS[s].label]), ["retired,lost", "Retired or lost"]]} />
+        <Filter label="Status" value={params.get("status")} onChange={(v) => setParams({ status: v })} options={[...ITEM_STATUSES.map((s) => [s, STATUS_WORDS[s]]), ["retired,lost", "Retired or lost"]]} />
         <Filter label="Lives at" value={params.get("yardId")} onChange={(v) => setParams({ yardId: v })} options={yards.map((y) => [y.id, y.name])} />
         <Filter label="Inspection" value={params.get("due")} onChange={(v) => setParams({ due: v })} options={[["overdue", "Overdue"], ["7d", "Due in the next 7 days (not overdue)"], ["30d", "Due in the next 30 days (not overdue)"]]} />
       </div>

@@ -39,11 +39,23 @@ function Fact({ label, children }: { label: string; children: React.ReactNode })
   );
 }
 
+/** The mark of a folded section: down when closed, up when open. */
+function Chevron() {
+  return (
+    <svg viewBox="0 0 24 24" className="h-6 w-6 shrink-0 transition-transform group-open:rotate-180" fill="none" stroke="currentColor" strokeWidth="3" strokeLinecap="round" strokeLinejoin="round" aria-hidden="true">
+      <path d="M6 9l6 6 6-6" />
+    </svg>
+  );
+}
+
 /** A less frequent action, folded until asked for. */
 function Folded({ summary, tone = "idle", children }: { summary: string; tone?: "idle" | "ink"; children: React.ReactNode }) {
   return (
-    <details className={`rounded-xl border-2 px-4 ${tone === "ink" ? "border-ink" : "border-idle"}`}>
-      <summary className="flex min-h-tap cursor-pointer items-center text-lg font-bold">{summary}</summary>
+    <details className={`group rounded-xl border-2 px-4 ${tone === "ink" ? "border-ink" : "border-idle"}`}>
+      <summary className="flex min-h-tap cursor-pointer items-center justify-between gap-2 text-lg font-bold">
+        {summary}
+        <Chevron />
+      </summary>
       <div className="pb-4">{children}</div>
     </details>
   );
@@ -87,8 +99,11 @@ export default async function ItemPage({ params }: { params: Promise<{ id: strin
             </Link>
           )}
           {status === "in_service" && mayCheck && (
-            <details className="rounded-xl border-2 border-stop px-4" data-testid="tag-out">
-              <summary className="flex min-h-tap cursor-pointer items-center gap-2 text-lg font-bold text-stop">Report damage and tag out</summary>
+            <details className="group rounded-xl border-2 border-stop px-4" data-testid="tag-out">
+              <summary className="flex min-h-tap cursor-pointer items-center justify-between gap-2 text-lg font-bold text-stop">
+                Report damage and tag out
+                <Chevron />
+              </summary>
               <div className="pb-4">
                 <TagOutForm itemId={id} action={itemEventAction} />
               </div>
