@@ -97,9 +97,9 @@ export function AcceptInviteForm({ token, email, action: accept }: { token: stri
 
 /** The last step of a sign-up, from the e-mailed link: one button, so a link scanner's visit creates nothing. */
 export function ConfirmSignUpForm({ token, action: confirm }: { token: string; action: FormAction }) {
-  const [state, action] = useActionState(confirm, initialFormState);
+  const { state, formProps } = useFormAction(confirm);
   return (
-    <form action={action} className="flex flex-col gap-2" noValidate>
+    <form {...formProps} className="flex flex-col gap-2">
       <FormAlert state={state} />
       <input type="hidden" name="token" value={token} />
       <SubmitButton pendingLabel="Setting up…">Set up company and sign in</SubmitButton>

@@ -9,6 +9,7 @@ import { receivesByRole } from "@/lib/mail/kinds";
 import { queueMail, reminderMessage } from "@/lib/mail/queue";
 import { kitCheckMail } from "@/lib/mail/templates";
 import { DUE_THIS_WEEK_DAYS } from "@/lib/stock/api-schemas";
+import { inspectionOverdue } from "@/lib/stock/usability";
 import { describeItem } from "@/lib/stock/describe";
 import { addDays } from "@/lib/time";
 import { buildDigest, type DigestItem } from "./digest";
@@ -53,8 +54,8 @@ export async function runDay(org: Pick<DailyOrganisation, "id" | "name">, day: s
   const digest = buildDigest({
     organisationName: org.name,
     today: day,
-    overdue: inService.filter((r) => r.nextInspectionDue! < day).map(toDigestItem),
-    dueThisWeek: inService.filter((r) => r.nextInspectionDue! >= day).map(toDigestItem),
+    overdue: inService.filter((r) => inspectionOverdue(r.nextInspectionDue, day)).map(toDigestItem),
+    dueThisWeek: inService.filter((r) => !inspectionOverdue(r.nextInspectionDue, day)).map(toDigestItem),
     taggedOut: rows.filter((r) => r.status === "tagged_out").map(toDigestItem),
     appUrl: config.APP_URL,
   });

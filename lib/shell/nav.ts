@@ -38,7 +38,7 @@ export function navFor(actor: Actor): NavEntry[] {
 /**
  * What the phone's "More" page lists: the entries the bottom bar has no room for (never one
  * the bar already shows).
- * @example moreFor({ role: "yard_hand", designated: false }).map((e) => e.href) // ["/check", "/machines", "/trailers", "/ratings"]
+ * @example moreFor({ role: "yard_hand", designated: false }).map((e) => e.href) // ["/check", "/machines", "/trailers", "/ratings", "/preferences"]
  */
 export function moreFor(actor: Actor): NavEntry[] {
   return navFor(actor).filter((e) => !e.primary);

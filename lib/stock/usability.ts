@@ -43,6 +43,16 @@ export interface UsabilityInput {
   lastCheck?: { on: string; passed: boolean } | null;
 }
 
+/**
+ * Whether a periodic inspection date is past on a day: due *on* its date, overdue from the day
+ * after. The one place this comparison is made; screens ask {@link itemUsability}.
+ * @example inspectionOverdue("2026-11-30", "2026-12-01") // true
+ * @example inspectionOverdue("2026-12-01", "2026-12-01") // false
+ */
+export function inspectionOverdue(nextInspectionDue: string | null, on: string): boolean {
+  return nextInspectionDue !== null && nextInspectionDue < on;
+}
+
 /** What each status asks of the person holding the item. */
 const STATUS_REASONS: Partial<Record<ItemStatus, UsabilityReason>> = {
   tagged_out: {
@@ -79,7 +89,7 @@ export function itemUsability(item: UsabilityInput, on: string): Usability {
   const reasons: UsabilityReason[] = [];
   const byStatus = STATUS_REASONS[item.status];
   if (byStatus) reasons.push(byStatus);
-  if (item.status !== "retired" && item.nextInspectionDue !== null && item.nextInspectionDue < on) {
+  if (item.status !== "retired" && inspectionOverdue(item.nextInspectionDue, on)) {
     reasons.push({
       code: "INSPECTION_OVERDUE",
       message: `Periodic inspection overdue since ${item.nextInspectionDue}: have it inspected before use.`,

@@ -62,6 +62,7 @@ describe("mail templates", () => {
     const m = withUnsubscribe({ to: "a@b.example", subject: "S", text: "Body" }, { what: "the daily digest", why: "you are an owner at Acme", pageLink: "http://x/unsubscribe/t", oneClickLink: "http://x/api/v1/unsubscribe/t", preferencesLink: "http://x/preferences" });
     expect(m.text).toBe("Body\n\n--\nYou get the daily digest because you are an owner at Acme.\nStop the daily digest: http://x/unsubscribe/t\nChoose what Linkyard e-mails you: http://x/preferences");
     expect(m.headers).toEqual({ "List-Unsubscribe": "<http://x/api/v1/unsubscribe/t>", "List-Unsubscribe-Post": "List-Unsubscribe=One-Click" });
+  });
   describe("tag-out mail", () => {
     const base = { to: "o@b.example", reporterName: "Dell", itemDescription: "Chain, grade 70, 3/8 in", tagCode: "K7XM-3HQA", link: "http://x/items/1" };
     it("says a direct tag-out was a damage report, not a pre-use check", () => {

@@ -42,6 +42,6 @@ describe("moreFor", () => {
       expect(more.filter((h) => bar.has(h))).toEqual([]);
       expect(new Set([...bar, ...more])).toEqual(new Set([...navFor(actor).map((e) => e.href), "/more"]));
     }
-    expect(moreFor({ role: "yard_hand", designated: false }).map((e) => e.href)).toEqual(["/check", "/machines", "/trailers", "/ratings"]);
+    expect(moreFor({ role: "yard_hand", designated: false }).map((e) => e.href)).toEqual(["/check", "/machines", "/trailers", "/ratings", "/preferences"]);
   });
 });
