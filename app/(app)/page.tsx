@@ -5,12 +5,11 @@ import { stockBuckets } from "@/db/items";
 import { listOpenInvites } from "@/db/people";
 import { can } from "@/lib/auth/roles";
 import { requirePage } from "@/lib/auth/session";
-import { dayLabel, writtenDate } from "@/lib/kits/dates";
 import { listKitEntries } from "@/lib/kits/kit-service";
 import { organisationClock } from "@/lib/organisations/service";
 import { DUE_SOON_DAYS } from "@/lib/stock/api-schemas";
 import { stockGlance } from "@/lib/stock/glance";
-import { addDays } from "@/lib/time";
+import { addDays, dayLabel, writtenDate } from "@/lib/time";
 
 const n = (v: number) => v.toLocaleString("en-US");
 const items = (v: number) => `${n(v)} ${v === 1 ? "item" : "items"}`;

@@ -9,7 +9,6 @@ import { getUnits, latestAnchorEvents } from "@/db/fleet";
 import { kitsUsingAnchor } from "@/db/kits";
 import { can } from "@/lib/auth/roles";
 import { requirePage } from "@/lib/auth/session";
-import { formatDay } from "@/lib/time";
 import { isUuid } from "@/lib/http/ids";
 import { trailerJson } from "@/lib/kits/answers";
 import { formatLength, formatWeight } from "@/lib/kits/display";
