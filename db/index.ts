@@ -32,6 +32,14 @@ if (process.env.NODE_ENV !== "production") {
 /** A transaction (or the pool itself) that query functions run in. */
 export type Tx = Knex;
 
+/**
+ * Runs work in one transaction that writes no audit row: the worker's own bookkeeping
+ * (sending a queued e-mail, the daily run). A person's change goes through `audited()`.
+ */
+export function inTransaction<T>(work: (tx: Tx) => Promise<T>): Promise<T> {
+  return db.transaction(work);
+}
+
 /** Runs work in a transaction that is always rolled back: reads that may use temporary tables, writing nothing. */
 export async function rolledBack<T>(work: (tx: Knex.Transaction) => Promise<T>): Promise<T> {
   const tx = await db.transaction();

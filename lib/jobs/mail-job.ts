@@ -1,5 +1,5 @@
 import "server-only";
-import { db } from "@/db";
+import { inTransaction } from "@/db";
 import * as mail from "@/db/mail";
 import { smtpSend } from "@/lib/mail/send";
 
@@ -27,7 +27,7 @@ export type Delivery = "sent" | "already sent" | "not queued" | "missing";
  */
 export async function deliverMessage(id: string): Promise<Delivery> {
   let failure: unknown;
-  const outcome = await db.transaction(async (trx): Promise<Delivery | "failed"> => {
+  const outcome = await inTransaction(async (trx): Promise<Delivery | "failed"> => {
     const message = await mail.lockMessageForSending(id, trx);
     if (!message) {
       if (await mail.messageExists(id, trx)) throw new MessageBusy(id);

@@ -1,5 +1,5 @@
 import "server-only";
-import type { Knex } from "knex";
+import type { Tx } from "@/db";
 import { QUEUES, sendJob } from "@/db/jobs";
 import * as mail from "@/db/mail";
 import { config } from "@/lib/config";
@@ -25,7 +25,7 @@ export interface QueuedMail {
  * Queues one e-mail in a transaction. False when its idempotency key was queued before.
  * @example await queueMail(trx, { kind: "invite", idempotencyKey: `invite:${inviteId}`, organisationId, message: inviteMail(...) })
  */
-export async function queueMail(trx: Knex, mailToSend: QueuedMail): Promise<boolean> {
+export async function queueMail(trx: Tx, mailToSend: QueuedMail): Promise<boolean> {
   const id = await mail.insertMessage(
     {
       organisationId: mailToSend.organisationId,

@@ -1,5 +1,5 @@
 import "server-only";
-import { db } from "@/db";
+import { inTransaction } from "@/db";
 import { listReminderRecipients } from "@/db/mail";
 import { claimDay, listDigestItems, listOrganisationsForDaily, openKitIdsOn, type DailyOrganisation, type DigestRow } from "@/db/reminders";
 import { config } from "@/lib/config";
@@ -62,7 +62,7 @@ export async function runDay(org: Pick<DailyOrganisation, "id" | "name">, day: s
   const tomorrow = addDays(day, 1);
   const kits = await failingKits(org.id, tomorrow);
 
-  return db.transaction(async (trx) => {
+  return inTransaction(async (trx) => {
     if (!(await claimDay(org.id, day, trx))) return false;
     if (digest) {
       for (const person of (await listReminderRecipients(org.id, "digest", trx)).filter((p) => receivesByRole(p, "digest"))) {

@@ -1,5 +1,5 @@
 import "server-only";
-import type { Knex } from "knex";
+import type { Tx } from "@/db";
 import { listReminderRecipients, type MailRecipient } from "@/db/mail";
 import { getOrganisation } from "@/db/organisations";
 import { openKitsHolding } from "@/db/reminders";
@@ -23,7 +23,7 @@ export interface TaggedOutItem {
   details?: Record<string, unknown> | null;
 }
 
-async function recipients(trx: Knex, organisationId: string, kind: ReminderKind): Promise<MailRecipient[]> {
+async function recipients(trx: Tx, organisationId: string, kind: ReminderKind): Promise<MailRecipient[]> {
   return (await listReminderRecipients(organisationId, kind, trx)).filter((p) => receivesByRole(p, kind));
 }
 
@@ -32,7 +32,7 @@ async function recipients(trx: Knex, organisationId: string, kind: ReminderKind)
  * @example await queueTagOutMail(trx, { organisationId, eventId, reporterName: actor.name, item, defects: [], note })
  */
 export async function queueTagOutMail(
-  trx: Knex,
+  trx: Tx,
   t: { organisationId: string; eventId: string | number; reporterName: string; item: TaggedOutItem; defects: string[]; note: string | null },
 ): Promise<void> {
   const organisation = (await getOrganisation(t.organisationId, trx))!;
