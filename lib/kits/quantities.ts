@@ -68,10 +68,9 @@ export function toWholeMm(length: LengthInput): number {
   return Math.round(settle(toMillimetres(length).value));
 }
 
-const number = (what: string) =>
-  z.coerce
-    .number({ error: `Enter the ${what} as a number.` })
-    .refine(Number.isFinite, { error: `Enter the ${what} as a number.` });
+// JSON numbers are numbers: true, [5] or "3674" is refused, never coerced (issue 11.8); the
+// screens' forms turn their text into numbers first (quantityBody in components/fleet).
+const number = (what: string) => z.number({ error: `Enter the ${what} as a number.` });
 
 /**
  * A `{ value, unit }` weight, checked and converted to whole pounds. `max` is in pounds.

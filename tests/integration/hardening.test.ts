@@ -1,6 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { callAction, discoveredActions } from "../support/actions";
 import { countRows, testDb } from "../support/db";
+import { machineBody } from "../support/fleet";
 import { addMember, BASE_URL, Client, linkIn, mailsTo, newOrganisation, TEST_PASSWORD, uniqueEmail } from "../support/http";
 
 // The fixes of the hardening issue (issue 11), one block per numbered item, each written
@@ -187,6 +188,17 @@ describe("issue 11.8: JSON input is taken as typed, bounded and checked", () => 
     expect(cost.json.issues[0].path).toBe("costCents");
     const ok = await org.owner.post("/api/v1/items", { ...chain, markedWll: { value: 5000, unit: "lb" }, costCents: 2500 });
     expect(ok.status).toBe(201);
+  });
+
+  it("takes a machine's or trailer's quantities as JSON numbers only", async () => {
+    for (const value of [true, [5], "12000"]) {
+      const before = await countRows("machines", { organisation_id: org.organisationId });
+      const res = await org.owner.post("/api/v1/machines", machineBody({ weight: { value, unit: "lb" } }));
+      expect(res.status, JSON.stringify(value)).toBe(400);
+      expect(res.json.issues).toEqual([{ path: "weight.value", message: "Enter the shipping weight as a number." }]);
+      expect(await countRows("machines", { organisation_id: org.organisationId })).toBe(before);
+    }
+    expect((await org.owner.post("/api/v1/machines", machineBody())).status).toBe(201);
   });
 
   it("answers an in-service date far in the future with 400 naming the field", async () => {

@@ -20,7 +20,7 @@ describe("toWholeLb and toWholeMm", () => {
 
 describe("weightField and lengthField", () => {
   it("answer whole pounds and millimetres", () => {
-    expect(weightField("weight", 200_000).parse({ value: "3674", unit: "kg" })).toBe(8100);
+    expect(weightField("weight", 200_000).parse({ value: 3674, unit: "kg" })).toBe(8100);
     expect(lengthField("length", 1, 30_000).parse({ value: 16, unit: "ft" })).toBe(4877);
   });
 
@@ -28,6 +28,10 @@ describe("weightField and lengthField", () => {
     const w = weightField("shipping weight", 200_000);
     expect(w.safeParse({ value: 8100, unit: "daN" }).error?.issues[0]).toMatchObject({ path: ["unit"], message: "The shipping weight is in lb or kg." });
     expect(w.safeParse({ value: "heavy", unit: "lb" }).error?.issues[0]?.message).toBe("Enter the shipping weight as a number.");
+    // JSON numbers only: text, true or [5] is refused, not coerced (issue 11.8).
+    for (const value of ["3674", true, [5], null]) {
+      expect(w.safeParse({ value, unit: "lb" }).error?.issues[0]).toMatchObject({ path: ["value"], message: "Enter the shipping weight as a number." });
+    }
     expect(w.safeParse({ value: 0, unit: "lb" }).error?.issues[0]?.message).toBe("The shipping weight must be more than 0.");
     expect(w.safeParse({ value: 250_000, unit: "lb" }).error?.issues[0]).toMatchObject({ path: ["value"] });
     expect(w.safeParse(8100).error?.issues[0]?.message).toBe("Give the shipping weight as { value, unit }.");
