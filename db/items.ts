@@ -92,6 +92,10 @@ export interface ItemFilters {
   yardId?: string;
   /** Only items without a WLL. */
   unrated?: boolean;
+  /** Only items with a WLL. */
+  rated?: boolean;
+  /** Inspection not due before this date, or none scheduled: not overdue, when it is the organisation's today. */
+  notDueBefore?: string;
   /** Inspection due before this date (YYYY-MM-DD): overdue, when it is the organisation's today. */
   dueBefore?: string;
   /** Inspection due on or after this date (YYYY-MM-DD). */
@@ -114,12 +118,14 @@ export const SORTABLE = {
 } as const;
 export type SortKey = keyof typeof SORTABLE;
 
-function applyFilters(query: Knex.QueryBuilder, organisationId: string, f: ItemFilters) {
+export function applyFilters(query: Knex.QueryBuilder, organisationId: string, f: ItemFilters) {
   query.where("i.organisation_id", organisationId);
   if (f.kind) query.where("i.kind", f.kind);
   if (f.status?.length) query.whereIn("i.status", f.status);
   if (f.yardId) query.where("i.yard_id", f.yardId);
-  if (f.unrated) query.whereNull("i.wll_lb");
+  if (f.unrated) query.where((w) => w.whereNull("i.wll_lb").orWhere("i.wll_lb", "<=", 0));
+  if (f.rated) query.where("i.wll_lb", ">", 0);
+  if (f.notDueBefore) query.where((w) => w.whereNull("i.next_inspection_due").orWhere("i.next_inspection_due", ">=", f.notDueBefore!));
   if (f.dueBefore) query.where("i.next_inspection_due", "<", f.dueBefore);
   if (f.dueFrom) query.where("i.next_inspection_due", ">=", f.dueFrom);
   if (f.dueBy) query.where("i.next_inspection_due", "<=", f.dueBy);

@@ -39,8 +39,8 @@ export default async function TodayPage() {
   const tiles = [
     { label: "Overdue for inspection: do not use", value: g.overdue, tone: "stop", href: "/stock?due=overdue&status=in_service", show: true },
     { label: "Tagged out: waiting for a decision", value: g.taggedOut, tone: "stop", href: "/stock?status=tagged_out", show: true },
-    { label: "No WLL: do not use in a tiedown", value: g.notRated, tone: "stop", href: "/stock?status=in_service&rated=no", show: g.notRated > 0 },
-    { label: `Inspection due in the next ${DUE_SOON_DAYS} days`, value: g.dueSoon, tone: "caution", href: "/stock?due=30d&status=in_service", show: true },
+    { label: "No WLL: do not use in a tiedown", value: g.notRated, tone: "stop", href: "/stock?status=in_service&rated=no&due=current", show: g.notRated > 0 },
+    { label: `Inspection due in the next ${DUE_SOON_DAYS} days`, value: g.dueSoon, tone: "caution", href: "/stock?due=30d&status=in_service&rated=yes", show: true },
     { label: "Retired or lost", value: g.retiredOrLost, tone: "idle", href: "/stock?status=retired,lost", show: true },
   ] as const;
   const goingOut = kits.filter((k) => k.state !== "returned");

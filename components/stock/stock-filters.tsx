@@ -6,9 +6,12 @@ import { ITEM_KINDS, ITEM_STATUSES, KIND_LABELS, type ItemStatus } from "@/lib/s
 const STATUS_WORDS: Record<ItemStatus, string> = { in_service: "In service", tagged_out: "Tagged out", retired: "Retired", lost: "Lost" };
 
 /** The list's filters as they travel in the page's address (and on to the CSV export). */
-export const FILTER_KEYS = ["kind", "status", "yardId", "due", "rated", "q"] as const;
+export const FILTER_KEYS = ["kind", "status", "yardId", "due", "rated", "dueFrom", "dueBy", "q"] as const;
 
-/** The search box and the four filters above the stock table; each change goes to the address. */
+/**
+ * The search box and the filters above the stock table; each change goes to the address. A
+ * week of the dashboard's chart comes as dates (dueFrom, dueBy), shown in words with a way out.
+ */
 export function StockFilters({
   params,
   yards,
@@ -34,12 +37,22 @@ export function StockFilters({
         </label>
         <button type="submit" className={buttonClass("primary")}>Search</button>
       </form>
-      <div className="grid grid-cols-2 gap-2 md:grid-cols-4">
+      <div className="grid grid-cols-2 gap-2 md:grid-cols-5">
         <Filter label="Kind" value={params.get("kind")} onChange={(v) => setParams({ kind: v })} options={ITEM_KINDS.map((k) => [k, KIND_LABELS[k]])} />
         <Filter label="Status" value={params.get("status")} onChange={(v) => setParams({ status: v })} options={[...ITEM_STATUSES.map((s) => [s, STATUS_WORDS[s]]), ["retired,lost", "Retired or lost"]]} />
         <Filter label="Lives at" value={params.get("yardId")} onChange={(v) => setParams({ yardId: v })} options={yards.map((y) => [y.id, y.name])} />
-        <Filter label="Inspection" value={params.get("due")} onChange={(v) => setParams({ due: v })} options={[["overdue", "Overdue"], ["7d", "Due in the next 7 days (not overdue)"], ["30d", "Due in the next 30 days (not overdue)"]]} />
+        <Filter label="Inspection" value={params.get("due")} onChange={(v) => setParams({ due: v })} options={[["overdue", "Overdue"], ["current", "Not overdue"], ["7d", "Due in the next 7 days (not overdue)"], ["30d", "Due in the next 30 days (not overdue)"]]} />
+        <Filter label="WLL" value={params.get("rated")} onChange={(v) => setParams({ rated: v })} options={[["yes", "With a WLL"], ["no", "Without a WLL"]]} />
       </div>
+      {(params.get("dueFrom") || params.get("dueBy")) && (
+        <p className="flex flex-wrap items-center gap-2 text-lg">
+          <span>
+            Inspection due {params.get("dueFrom") ? `from ${params.get("dueFrom")} ` : ""}
+            {params.get("dueBy") ? `to ${params.get("dueBy")}` : "on"}
+          </span>
+          <button type="button" className={buttonClass("secondary")} onClick={() => setParams({ dueFrom: null, dueBy: null })}>Clear these dates</button>
+        </p>
+      )}
     </>
   );
 }

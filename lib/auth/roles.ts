@@ -24,7 +24,8 @@ export type Permission =
   | "fleet.view"
   | "kits.load" // load a kit onto the trailer and return it, by scanning its items
   | "securement.check" // rated-limit lookup and scratch securement check
-  | "reports.view"
+  | "reports.view" // the dashboard's charts: owners and planners (kits and due items)
+  | "records.view" // the inspection and service record for auditors: owner or designated person
   | "audit.view"
   | "mail.preferences"; // choose one's own reminder e-mails
 
@@ -32,14 +33,17 @@ const GRANTS: Record<Role, readonly Permission[]> = {
   owner: [
     "people.manage", "settings.manage", "stock.view", "stock.edit", "stock.import", "stock.retire",
     "items.check", "items.inspect", "fleet.manage", "fleet.view", "kits.load", "securement.check",
-    "reports.view", "audit.view", "mail.preferences",
+    "reports.view", "records.view", "audit.view", "mail.preferences",
   ],
   planner: ["stock.view", "stock.edit", "items.check", "fleet.manage", "fleet.view", "kits.load", "securement.check", "reports.view", "mail.preferences"],
   yard_hand: ["stock.view", "items.check", "fleet.view", "kits.load", "securement.check", "mail.preferences"],
 };
 
-/** Permissions that a designated person gets whatever the role (periodic inspection). */
-const DESIGNATED_GRANTS: readonly Permission[] = ["items.inspect"];
+/**
+ * Permissions that a designated person gets whatever the role: periodic inspection, and the
+ * record of inspections and service that an auditor or insurer asks them to hand over.
+ */
+const DESIGNATED_GRANTS: readonly Permission[] = ["items.inspect", "records.view"];
 
 export interface Actor {
   role: Role;

@@ -1,10 +1,11 @@
 import { z } from "zod";
-import { addDays } from "@/lib/time";
+import { addDays, isIsoDate } from "@/lib/time";
 import { ITEM_KINDS, ITEM_STATUSES } from "./labels";
 
 // Query and body shapes of the stock API, shared by the route handlers and the table.
 
 const blank = (v: unknown) => (v === "" ? undefined : v);
+const isoDate = (field: string) => z.string().refine(isIsoDate, `${field} is a date written YYYY-MM-DD`);
 
 export const SORT_KEYS = ["tagCode", "kind", "grade", "size", "wllLb", "status", "yardName", "nextInspectionDue", "serial"] as const;
 
@@ -19,10 +20,14 @@ export const itemListQuerySchema = z.object({
     (v) => (typeof v === "string" && v !== "" ? v.split(",").map((s) => s.trim()) : blank(v)),
     z.array(z.enum(ITEM_STATUSES, { error: `status is one of ${ITEM_STATUSES.join(", ")} (several with commas)` })).min(1).optional(),
   ),
-  /** "no": only items without a WLL (they may not be counted in a tiedown). */
-  rated: z.preprocess(blank, z.enum(["no"], { error: 'rated is "no" (items without a WLL)' }).optional()),
+  /** "no": only items without a WLL (they may not be counted in a tiedown); "yes": only items with one. */
+  rated: z.preprocess(blank, z.enum(["no", "yes"], { error: 'rated is "no" (items without a WLL) or "yes" (items with one)' }).optional()),
   yardId: z.preprocess(blank, z.uuid("yardId is not a yard id").optional()),
-  due: z.preprocess(blank, z.enum(["overdue", "7d", "30d"]).optional()),
+  /** "current": not overdue (due today or later, or no inspection scheduled). */
+  due: z.preprocess(blank, z.enum(["overdue", "current", "7d", "30d"], { error: "due is one of overdue, current, 7d, 30d" }).optional()),
+  /** Inspection due on or after this date, and on or before `dueBy` (a week of the dashboard's chart). */
+  dueFrom: z.preprocess(blank, isoDate("dueFrom").optional()),
+  dueBy: z.preprocess(blank, isoDate("dueBy").optional()),
   q: z.preprocess(blank, z.string().trim().max(60).optional()),
 });
 export type ItemListQuery = z.output<typeof itemListQuerySchema>;
@@ -35,16 +40,19 @@ export const DUE_THIS_WEEK_DAYS = 6;
 
 /**
  * The list query with its inspection filter as dates, counted from the organisation's today:
- * "overdue" is due before today; "7d" and "30d" are due from today to 6 or 30 days on, so
- * that the overdue ones are never counted as merely "due soon".
+ * "overdue" is due before today; "current" is not overdue (due today or later, or never);
+ * "7d" and "30d" are due from today to 6 or 30 days on, so that the overdue ones are never
+ * counted as merely "due soon". `dueFrom` and `dueBy` pass through as dates.
  * @example listFilters({ due: "overdue", page: 1, perPage: 25, sort: "tagCode", order: "asc" }, "2026-12-01").dueBefore // "2026-12-01"
  * @example listFilters({ due: "30d", page: 1, perPage: 25, sort: "tagCode", order: "asc" }, "2026-12-01") // { …, dueFrom: "2026-12-01", dueBy: "2026-12-31" }
  */
-export function listFilters<Q extends { due?: "overdue" | "7d" | "30d"; rated?: "no" }>({ due, rated, ...query }: Q, today: string) {
+export function listFilters<Q extends { due?: "overdue" | "current" | "7d" | "30d"; rated?: "no" | "yes" }>({ due, rated, ...query }: Q, today: string) {
   return {
     ...query,
     ...(rated === "no" && { unrated: true }),
+    ...(rated === "yes" && { rated: true }),
     ...(due === "overdue" && { dueBefore: today }),
+    ...(due === "current" && { notDueBefore: today }),
     ...(due === "7d" && { dueFrom: today, dueBy: addDays(today, DUE_THIS_WEEK_DAYS) }),
     ...(due === "30d" && { dueFrom: today, dueBy: addDays(today, DUE_SOON_DAYS) }),
   };

@@ -1,5 +1,5 @@
 import { TZDate } from "@date-fns/tz";
-import { addDays as addCalendarDays, differenceInCalendarDays, format } from "date-fns";
+import { addDays as addCalendarDays, addMonths as addCalendarMonths, differenceInCalendarDays, format, startOfWeek } from "date-fns";
 
 // One "today", and every date and time shown to a person, in the organisation's time zone
 // (an IANA name such as "America/Chicago"). Calendar dates (inspection due, in service since)
@@ -152,4 +152,55 @@ export function zoneWords(zone: string): string {
   if (zone === DEFAULT_TIME_ZONE) return "Coordinated Universal Time (UTC), until an owner sets the company's time zone in Settings";
   const place = zone.split("/").pop()!.replaceAll("_", " ");
   return `${place} time`;
+}
+
+/**
+ * The Monday that starts the calendar week of a date (weeks run Monday to Sunday, ISO 8601).
+ * @example weekStart("2026-12-03") // "2026-11-30"
+ * @example weekStart("2026-11-30") // "2026-11-30"
+ */
+export function weekStart(day: string): string {
+  return format(startOfWeek(calendarDay(day), { weekStartsOn: 1 }), "yyyy-MM-dd");
+}
+
+/**
+ * The month (YYYY-MM) of a calendar date.
+ * @example monthOf("2026-12-03") // "2026-12"
+ */
+export function monthOf(day: string): string {
+  return day.slice(0, 7);
+}
+
+/**
+ * A month (YYYY-MM) plus whole months.
+ * @example addMonths("2026-02", -3) // "2025-11"
+ */
+export function addMonths(month: string, months: number): string {
+  return format(addCalendarMonths(calendarDay(`${month}-01`), months), "yyyy-MM");
+}
+
+/**
+ * A month written out: "Dec 2026".
+ * @example monthWords("2026-12") // "Dec 2026"
+ */
+export function monthWords(month: string): string {
+  return format(calendarDay(`${month}-01`), "MMM yyyy");
+}
+
+/**
+ * A date written short, for a chart's axis: day and month.
+ * @example shortDate("2026-12-03") // "3 Dec"
+ */
+export function shortDate(day: string): string {
+  return format(calendarDay(day), "d MMM");
+}
+
+/**
+ * The instant a calendar date begins on the wall clock of a zone: where a period of days
+ * (a report from one date to another) starts and ends among stored instants.
+ * @example startOfDayIn("2026-12-01", "America/Chicago").toISOString() // "2026-12-01T06:00:00.000Z"
+ */
+export function startOfDayIn(day: string, zone: string): Date {
+  const [y, m, d] = day.split("-").map(Number);
+  return new Date(new TZDate(y, m - 1, d, zone).getTime());
 }

@@ -17,6 +17,7 @@ const EXPECTED: Record<Permission, Role[]> = {
   "kits.load": ["owner", "planner", "yard_hand"],
   "securement.check": ["owner", "planner", "yard_hand"],
   "reports.view": ["owner", "planner"],
+  "records.view": ["owner"],
   "audit.view": ["owner"],
   "mail.preferences": ["owner", "planner", "yard_hand"],
 };
@@ -30,9 +31,11 @@ describe("can", () => {
     }
   }
 
-  it("lets a designated person of any role do periodic inspections, and nothing more", () => {
+  it("lets a designated person of any role do periodic inspections and hand over their record, and nothing more", () => {
     expect(can({ role: "yard_hand", designated: true }, "items.inspect")).toBe(true);
     expect(can({ role: "planner", designated: true }, "items.inspect")).toBe(true);
+    expect(can({ role: "yard_hand", designated: true }, "records.view")).toBe(true);
+    expect(can({ role: "planner", designated: true }, "audit.view")).toBe(false);
     expect(can({ role: "yard_hand", designated: true }, "stock.edit")).toBe(false);
     expect(can({ role: "yard_hand", designated: true }, "people.manage")).toBe(false);
   });

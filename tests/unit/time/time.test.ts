@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { addDays, canonicalTimeZone, clockTimeIn, dayLabel, daysBetween, formatDateTime, formatDay, isIsoDate, isTimeZone, timeZones, todayIn, weekday, writtenDate } from "@/lib/time";
+import { addDays, addMonths, canonicalTimeZone, clockTimeIn, dayLabel, daysBetween, formatDateTime, formatDay, isIsoDate, isTimeZone, timeZones, todayIn, monthOf, monthWords, shortDate, startOfDayIn, weekday, weekStart, writtenDate } from "@/lib/time";
 
 describe("todayIn", () => {
   it("a US yard (America/Chicago) at 7 pm local on 2026-12-01 sees 2026-12-01, not 12-02", () => {
@@ -98,5 +98,29 @@ describe("calendar dates (kits are for a date)", () => {
     expect(dayLabel("2026-12-02", "2026-12-02")).toBe("Today, Wed 2 Dec 2026");
     expect(dayLabel("2026-12-01", "2026-12-02")).toBe("Yesterday, Tue 1 Dec 2026");
     expect(dayLabel("2026-12-09", "2026-12-02")).toBe("Wed 9 Dec 2026");
+  });
+});
+
+describe("weeks and months for the dashboard", () => {
+  it("weeks start on Monday", () => {
+    expect(weekStart("2026-12-03")).toBe("2026-11-30"); // a Thursday
+    expect(weekStart("2026-11-30")).toBe("2026-11-30"); // a Monday
+    expect(weekStart("2026-12-06")).toBe("2026-11-30"); // a Sunday ends the week
+    expect(weekStart("2027-01-01")).toBe("2026-12-28"); // across the year
+  });
+
+  it("months add across years and print as words", () => {
+    expect(addMonths("2026-02", -3)).toBe("2025-11");
+    expect(addMonths("2026-12", 1)).toBe("2027-01");
+    expect(monthOf("2026-12-31")).toBe("2026-12");
+    expect(monthWords("2026-12")).toBe("Dec 2026");
+    expect(shortDate("2026-12-03")).toBe("3 Dec");
+  });
+
+  it("a day starts at local midnight, on either side of a daylight-saving change", () => {
+    expect(startOfDayIn("2026-12-01", "America/Chicago").toISOString()).toBe("2026-12-01T06:00:00.000Z"); // CST
+    expect(startOfDayIn("2026-07-01", "America/Chicago").toISOString()).toBe("2026-07-01T05:00:00.000Z"); // CDT
+    expect(startOfDayIn("2026-12-01", "UTC").toISOString()).toBe("2026-12-01T00:00:00.000Z");
+    expect(startOfDayIn("2026-12-02", "Pacific/Auckland").toISOString()).toBe("2026-12-01T11:00:00.000Z");
   });
 });
