@@ -6,6 +6,7 @@ const PATHS: Record<NavIconName, string> = {
   people: "M9 11a4 4 0 1 0 0-8 4 4 0 0 0 0 8zM2 21c0-4 3-6 7-6s7 2 7 6M17 11a3 3 0 1 0 0-6M22 21c0-3-2-5-5-5.5",
   settings: "M12 15a3 3 0 1 0 0-6 3 3 0 0 0 0 6zM12 2v3M12 19v3M2 12h3M19 12h3M4.9 4.9l2.1 2.1M17 17l2.1 2.1M4.9 19.1L7 17M17 7l2.1-2.1",
   audit: "M6 3h9l4 4v14H6zM9 10h7M9 14h7M9 18h4",
+  records: "M8 4h8v3H8zM6 5H5v16h14V5h-1M8 11h8M8 15h8M8 19h5",
   scan: "M4 8V5a1 1 0 0 1 1-1h3M16 4h3a1 1 0 0 1 1 1v3M20 16v3a1 1 0 0 1-1 1h-3M8 20H5a1 1 0 0 1-1-1v-3M7 12h10",
   kits: "M9 4h6v3H9zM6 6H5a1 1 0 0 0-1 1v13a1 1 0 0 0 1 1h14a1 1 0 0 0 1-1V7a1 1 0 0 0-1-1h-1M8 12l2 2 4-4M8 17h8",
   machines: "M3 17h11v3H3zM5 17v-4h6l2 4M11 13l3-6 5 2-2 5M19 9l2 4-3 1",

@@ -74,3 +74,21 @@ export function recordSearch(q: Partial<RecordQuery>, extra: Record<string, stri
   for (const [k, v] of Object.entries(extra)) out.set(k, v);
   return out.toString();
 }
+
+const KIND_PLURALS: Record<string, string> = {
+  chain: "Chains", binder: "Chain binders", "web-strap": "Web straps", "wire-rope": "Wire ropes", hook: "Hooks", shackle: "Shackles", "rated-item": "Other rated items",
+};
+const STATUS_PLAIN: Record<string, string> = { in_service: "in service", tagged_out: "tagged out", retired: "retired", lost: "lost" };
+
+/**
+ * Which items a report covers, in words for its heading.
+ * @example selectionWords({ kind: "chain", status: ["in_service", "tagged_out"] }) // "Chains, now in service or tagged out"
+ * @example selectionWords({}, "3X4K-9P2M") // "Item 3X4K-9P2M"
+ */
+export function selectionWords(q: { kind?: string; status?: string[]; q?: string }, itemTag?: string | null): string {
+  if (itemTag) return `Item ${itemTag}`;
+  const parts = [q.kind ? KIND_PLURALS[q.kind] ?? q.kind : "All stock"];
+  if (q.status?.length) parts.push(`now ${q.status.map((s) => STATUS_PLAIN[s] ?? s).join(" or ")}`);
+  if (q.q) parts.push(`tag code or serial starting “${q.q}”`);
+  return parts.join(", ");
+}

@@ -86,3 +86,10 @@ export async function recordReport(actor: Principal, q: Omit<RecordQuery, "forma
 export function recordBatches(actor: Principal, selection: RecordSelection): AsyncGenerator<RecordEvent[]> {
   return streamRecordEvents(actor.organisationId, selection.filters);
 }
+
+/** A selection's size and its people, without its entries (the records page). */
+export async function recordSummary(actor: Principal, q: Omit<RecordQuery, "format">) {
+  const selection = await recordSelection(actor, q);
+  const [total, people] = await Promise.all([countRecordEvents(actor.organisationId, selection.filters), recordPeople(actor.organisationId, selection.filters)]);
+  return { ...selection, total, people };
+}

@@ -1,6 +1,6 @@
 import { can, type Actor, type Permission } from "@/lib/auth/roles";
 
-export type NavIconName = "home" | "scan" | "stock" | "kits" | "machines" | "trailers" | "check" | "ratings" | "people" | "settings" | "audit" | "mail" | "more";
+export type NavIconName = "home" | "scan" | "stock" | "kits" | "machines" | "trailers" | "check" | "ratings" | "people" | "settings" | "audit" | "records" | "mail" | "more";
 
 export interface NavEntry {
   href: string;
@@ -22,6 +22,7 @@ const ENTRIES: readonly NavEntry[] = [
   { href: "/trailers", label: "Trailers", icon: "trailers", permission: "fleet.view" },
   { href: "/ratings", label: "WLL lookup", icon: "ratings", permission: "securement.check" },
   { href: "/people", label: "People", icon: "people", permission: "people.manage" },
+  { href: "/records", label: "Records", icon: "records", permission: "records.view" },
   { href: "/audit", label: "Audit log", icon: "audit", permission: "audit.view" },
   { href: "/settings", label: "Settings", icon: "settings", permission: "settings.manage" },
   { href: "/preferences", label: "E-mail", icon: "mail", permission: "mail.preferences" },

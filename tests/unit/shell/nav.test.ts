@@ -7,8 +7,12 @@ describe("navFor", () => {
   });
   it("shows an owner the people, audit and settings pages", () => {
     expect(navFor({ role: "owner", designated: false }).map((e) => e.href)).toEqual([
-      "/", "/scan", "/stock", "/kits", "/check", "/machines", "/trailers", "/ratings", "/people", "/audit", "/settings", "/preferences",
+      "/", "/scan", "/stock", "/kits", "/check", "/machines", "/trailers", "/ratings", "/people", "/records", "/audit", "/settings", "/preferences",
     ]);
+  });
+  it("shows the records to a designated person of any role, and not to others", () => {
+    expect(navFor({ role: "yard_hand", designated: true }).map((e) => e.href)).toContain("/records");
+    expect(navFor({ role: "planner", designated: false }).map((e) => e.href)).not.toContain("/records");
   });
   it("keeps people and settings from a planner", () => {
     const hrefs = navFor({ role: "planner", designated: true }).map((e) => e.href);

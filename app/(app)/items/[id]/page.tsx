@@ -171,6 +171,9 @@ export default async function ItemPage({ params }: { params: Promise<{ id: strin
             <Link href={`/items/${id}/edit`} className={buttonClass("secondary")}>Edit details</Link>
           )}
           <Link href={`/tags/sheet?ids=${id}`} className={buttonClass("secondary")}>Print its tag</Link>
+          {can(principal, "records.view") && (
+            <Link href={`/records/print?itemId=${id}`} className={buttonClass("secondary")}>Print its inspection record</Link>
+          )}
         </div>
         {can(principal, "stock.edit") && (status === "in_service" || status === "tagged_out") && (
           <Folded summary="Mark lost">
