@@ -95,7 +95,9 @@ export interface TaggedOutItem {
   id: string;
   tagCode: string;
   kind: ItemKind;
+  grade: number | null;
   size: string | null;
+  details: Record<string, unknown>;
   /** When it was last tagged out (its latest history entry that put it there). */
   since: Date | null;
   note: string | null;
@@ -113,5 +115,5 @@ export async function taggedOutItems(organisationId: string, limit = 8): Promise
     )
     .orderByRaw("t.at asc nulls first, i.tag_code")
     .limit(limit)
-    .select("i.id", "i.tag_code as tagCode", "i.kind", "i.size", "t.at as since", "t.note");
+    .select("i.id", "i.tag_code as tagCode", "i.kind", "i.grade", "i.size", "i.details", "t.at as since", "t.note");
 }

@@ -4,6 +4,9 @@ import { itemRating } from "../lib/stock/rating";
 import type { ItemKind } from "../lib/stock/labels";
 import { toWholeMm } from "../lib/stock/schemas";
 import { newTagCode } from "../lib/tags/code";
+import { PRE_USE_CHECKLISTS } from "../lib/stock/checklists";
+import { evaluateMeasurements } from "../lib/stock/inspection";
+import { DEFAULT_INTERVAL_DAYS } from "../lib/stock/intervals";
 
 // The demo scenario: an invented groundworks outfit with one person per role, two yards
 // and a realistic spread of tiedown gear. Names, places and addresses are made up.
@@ -103,25 +106,57 @@ export async function seed(knex: Knex): Promise<void> {
         });
       }
     }
-    const inserted: { id: string; status: string; kind: string }[] = await trx("items").insert(rows).returning(["id", "status", "kind"]);
-    // A believable history: every item was put in service, most were checked this week,
-    // and the tagged-out ones failed a pre-use check.
+    const inserted: { id: string; status: string; kind: string; size: string | null }[] = await trx("items").insert(rows).returning(["id", "status", "kind", "size"]);
+    // A believable history: every item was put in service and had its periodic inspection a
+    // interval before it next falls due, most were checked this week, the tagged-out ones
+    // failed a pre-use check, and over the last months a few were tagged out and came back
+    // (damage reported, a failed check, an inspection that held one for repair).
     const events: Record<string, unknown>[] = [];
+    const DAY = 86_400_000;
     inserted.forEach((item, i) => {
-      const at = (daysAgo: number, hour = 7) => new Date(Date.now() - daysAgo * 86_400_000 - hour * 3_600_000).toISOString();
-      events.push({ organisation_id: organisationId, item_id: item.id, type: "created", actor_id: "demo-owner-olive", at: at(300), note: "Put in service" });
-      if (item.status === "tagged_out") {
-        events.push({ organisation_id: organisationId, item_id: item.id, type: "check", outcome: "fail", actor_id: "demo-yard-yara", at: at(2), note: item.kind === "chain" ? "Hook at one end opened up after the last haul" : "Handle bent", checklist: JSON.stringify([]) });
-        events.push({ organisation_id: organisationId, item_id: item.id, type: "tag_out", actor_id: "demo-yard-yara", at: at(2), note: "Tagged out after a failed pre-use check" });
-      } else if (item.status === "retired") {
-        events.push({ organisation_id: organisationId, item_id: item.id, type: "retired", actor_id: "demo-owner-olive", at: at(40), note: "Links stretched past the limit at the yearly inspection" });
-      } else if (item.status === "lost") {
-        events.push({ organisation_id: organisationId, item_id: item.id, type: "lost", actor_id: "demo-planner-pete", at: at(20), note: "Not back from the Millbrook culvert job" });
-      } else if (i % 3 !== 2) {
-        events.push({ organisation_id: organisationId, item_id: item.id, type: "check", outcome: "pass", actor_id: "demo-yard-yara", at: at(i % 5) });
+      const at = (daysAgo: number, hour = 7) => new Date(Date.now() - daysAgo * DAY - hour * 3_600_000).toISOString();
+      const kind = item.kind as ItemKind;
+      const clean = JSON.stringify(PRE_USE_CHECKLISTS[kind].map((p) => ({ id: p.id, label: p.label, defect: false })));
+      const own: Record<string, unknown>[] = [];
+      own.push({ type: "created", actor_id: "demo-owner-olive", at: at(400), note: "Put in service" });
+      const due = rows[i].next_inspection_due as string; // rows come back in the order given
+      {
+        const inspectedAgo = Math.round((Date.now() - Date.parse(`${due}T12:00:00Z`)) / DAY) + DEFAULT_INTERVAL_DAYS[kind];
+        if (inspectedAgo > 3 && inspectedAgo < 390) {
+          own.push({ type: "inspection", outcome: "in_service", actor_id: "demo-owner-olive", at: at(inspectedAgo, 4), checklist: clean, measurements: JSON.stringify(evaluateMeasurements(kind, item.size, demoMeasurements(kind, i))), note: i % 4 === 0 ? "Yearly inspection in the yard shop" : null });
+        }
       }
+      if (item.status === "tagged_out") {
+        own.push({ type: "check", outcome: "fail", actor_id: "demo-yard-yara", at: at(2), note: item.kind === "chain" ? "Hook at one end opened up after the last haul" : "Handle bent", checklist: JSON.stringify([]) });
+        own.push({ type: "tag_out", actor_id: "demo-yard-yara", at: at(2), note: "Tagged out after a failed pre-use check" });
+      } else if (item.status === "retired") {
+        own.push({ type: "retired", actor_id: "demo-owner-olive", at: at(40), note: "Links stretched past the limit at the yearly inspection" });
+      } else if (item.status === "lost") {
+        own.push({ type: "lost", actor_id: "demo-planner-pete", at: at(20), note: "Not back from the Millbrook culvert job" });
+      } else if (i % 3 !== 2) {
+        // Earlier tag-outs, each answered, all before this week's pass.
+        const back = 12 + ((i * 23) % 160);
+        if (i % 9 === 4) {
+          own.push({ type: "tag_out", actor_id: "demo-yard-yara", at: at(back, 9), note: "Strap snagged on the deck edge, outer fibres cut" });
+          own.push({ type: "inspection", outcome: "in_service", actor_id: "demo-owner-olive", at: at(back - 2, 5), checklist: clean, measurements: JSON.stringify(evaluateMeasurements(kind, item.size, demoMeasurements(kind, i))), note: "Damage within the limit after a close look" });
+        } else if (i % 11 === 5) {
+          const failed = JSON.stringify(PRE_USE_CHECKLISTS[kind].map((p, n) => ({ id: p.id, label: p.label, defect: n === 0 })));
+          own.push({ type: "check", outcome: "fail", actor_id: "demo-yard-yara", at: at(back, 8), checklist: failed, note: "Looked wrong at the morning check" });
+          own.push({ type: "tag_out", actor_id: "demo-yard-yara", at: at(back, 8), note: "Tagged out after a failed pre-use check" });
+          own.push({ type: "return_to_service", actor_id: "demo-owner-olive", at: at(back - 3, 5), note: "Cleaned and looked at again: dirt, not a crack" });
+        } else if (i % 13 === 6) {
+          own.push({ type: "inspection", outcome: "repair", actor_id: "demo-owner-olive", at: at(back, 6), checklist: clean, measurements: JSON.stringify(evaluateMeasurements(kind, item.size, demoMeasurements(kind, i))), note: "Latch spring weak: sent for repair" });
+          own.push({ type: "return_to_service", actor_id: "demo-owner-olive", at: at(back - 5, 5), note: "Back from repair with a new latch" });
+        }
+        own.push({ type: "check", outcome: "pass", actor_id: "demo-yard-yara", at: at(i % 5) });
+      }
+      own.sort((a, b) => String(a.at).localeCompare(String(b.at)));
+      for (const e of own) events.push({ organisation_id: organisationId, item_id: item.id, ...e });
     });
     await trx("item_events").insert(events);
+    await trx.raw(`update items i set last_inspected_on = e.on from
+      (select item_id, max(at)::date as on from item_events where type = 'inspection' group by item_id) e
+      where e.item_id = i.id and i.organisation_id = ?`, [organisationId]);
     await trx.raw(`update items i set last_checked_at = e.at from
       (select item_id, max(at) as at from item_events where type = 'check' group by item_id) e
       where e.item_id = i.id and i.organisation_id = ?`, [organisationId]);
@@ -134,4 +169,22 @@ export async function seed(knex: Knex): Promise<void> {
       after: JSON.stringify({ items: rows.length }),
     });
   });
+}
+
+/** What the demo's inspector measured: worn a little, within the limits (lib/stock/inspection.ts). */
+function demoMeasurements(kind: ItemKind, i: number): Record<string, number> {
+  const wobble = (i % 5) / 10;
+  switch (kind) {
+    case "chain":
+      return { linkThickness: 0.36 - wobble / 50, stretch: 1 + wobble * 2 };
+    case "hook":
+      return { throatNew: 1, throatNow: 1.01 + wobble / 20, wear: 2 + wobble * 5 };
+    case "web-strap":
+      return { damage: wobble / 4 };
+    case "shackle":
+    case "rated-item":
+      return { wear: 1 + wobble * 10 };
+    default:
+      return {};
+  }
 }

@@ -98,6 +98,11 @@ const API: Record<string, Access> = {
   "POST /api/v1/kits/[id]/copies": EDITORS,
   "PUT /api/v1/kits/[id]/placement": EDITORS,
   "POST /api/v1/kits/[id]/proposal": EDITORS, // with or without ?apply=true
+  // The inspection and service record: owners, and designated persons of any role (the
+  // matrix's planner and yard hand are not designated; tests/integration/owner-reports.test.ts
+  // lets a designated yard hand in). The audit log: owners only.
+  "GET /api/v1/records": OWNER,
+  "GET /api/v1/audit": OWNER,
 };
 
 const PAGES: Record<string, Access> = {
@@ -106,6 +111,7 @@ const PAGES: Record<string, Access> = {
   "/people": OWNER,
   "/settings": OWNER,
   "/audit": OWNER,
+  "/records": OWNER, // or a designated person of any role
   "/more": ALL,
   "/stock/new": EDITORS,
   "/items/[id]": ALL,

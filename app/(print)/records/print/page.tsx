@@ -25,30 +25,31 @@ export default async function PrintRecordsPage({ searchParams }: { searchParams:
   const parsed = recordQuerySchema.safeParse(raw);
   const back = typeof raw.itemId === "string" && !parsed.error?.issues.some((i) => i.path[0] === "itemId") ? `/items/${raw.itemId}` : `/records?${parsed.success ? recordSearch(parsed.data) : ""}`;
   if (!parsed.success) return <Refused back={back} message={zodIssues(parsed.error).map((i) => i.message).join(" ")} />;
+  let report: Awaited<ReturnType<typeof recordReport>>;
   try {
-    const report = await recordReport(principal, parsed.data);
-    return (
-      <main className="mx-auto max-w-4xl bg-white">
-        <style>{PRINT_CSS}</style>
-        <PrintToolbar back={back} csv={`/api/v1/records?${recordSearch(parsed.data, { format: "csv" })}`} />
-        <RecordReport
-          organisationName={report.organisationName}
-          period={report.period}
-          selection={selectionWords(parsed.data, report.item?.tagCode)}
-          timeZone={report.timeZone}
-          printedAt={formatDateTime(new Date(), report.timeZone)}
-          printedBy={principal.name}
-          total={report.total}
-          events={report.events}
-          people={report.people}
-        />
-      </main>
-    );
+    report = await recordReport(principal, parsed.data);
   } catch (error) {
     if (error instanceof AppError && error.status === 404) notFound();
     if (error instanceof AppError && error.status === 400) return <Refused back={back} message={error.message} />;
     throw error;
   }
+  return (
+    <main className="mx-auto max-w-4xl bg-white">
+      <style>{PRINT_CSS}</style>
+      <PrintToolbar back={back} csv={`/api/v1/records?${recordSearch(parsed.data, { format: "csv" })}`} />
+      <RecordReport
+        organisationName={report.organisationName}
+        period={report.period}
+        selection={selectionWords(parsed.data, report.item?.tagCode)}
+        timeZone={report.timeZone}
+        printedAt={formatDateTime(new Date(), report.timeZone)}
+        printedBy={principal.name}
+        total={report.total}
+        events={report.events}
+        people={report.people}
+      />
+    </main>
+  );
 }
 
 function Refused({ back, message }: { back: string; message: string }) {
