@@ -145,8 +145,8 @@ export async function seed(knex: Knex): Promise<void> {
           own.push({ type: "tag_out", actor_id: "demo-yard-yara", at: at(back, 8), note: "Tagged out after a failed pre-use check" });
           own.push({ type: "return_to_service", actor_id: "demo-owner-olive", at: at(back - 3, 5), note: "Cleaned and looked at again: dirt, not a crack" });
         } else if (i % 13 === 6) {
-          own.push({ type: "inspection", outcome: "repair", actor_id: "demo-owner-olive", at: at(back, 6), checklist: clean, measurements: JSON.stringify(evaluateMeasurements(kind, item.size, demoMeasurements(kind, i))), note: "Latch spring weak: sent for repair" });
-          own.push({ type: "return_to_service", actor_id: "demo-owner-olive", at: at(back - 5, 5), note: "Back from repair with a new latch" });
+          own.push({ type: "inspection", outcome: "repair", actor_id: "demo-owner-olive", at: at(back, 6), checklist: clean, measurements: JSON.stringify(evaluateMeasurements(kind, item.size, demoMeasurements(kind, i))), note: "Hardware worn at the hook: sent for repair" });
+          own.push({ type: "return_to_service", actor_id: "demo-owner-olive", at: at(back - 5, 5), note: "Back from repair with new end hardware" });
         }
         own.push({ type: "check", outcome: "pass", actor_id: "demo-yard-yara", at: at(i % 5) });
       }

@@ -3,7 +3,7 @@ import type { ReactNode } from "react";
 /**
  * A chart with its words: a heading, the figures in a sentence, the picture (hidden from
  * screen readers, which get the table), and the table of its figures, each linking to its
- * rows, folded under the picture.
+ * rows, folded under the picture so that the page stays a glance.
  */
 export function ChartFigure({ id, title, summary, chart, table }: { id: string; title: string; summary: ReactNode; chart: ReactNode; table: ReactNode }) {
   return (
@@ -11,7 +11,7 @@ export function ChartFigure({ id, title, summary, chart, table }: { id: string; 
       <h2 id={id} className="text-xl font-bold">{title}</h2>
       <p className="text-lg">{summary}</p>
       <div aria-hidden="true" className="min-h-48">{chart}</div>
-      <details className="group" open>
+      <details className="group">
         <summary className="flex min-h-tap cursor-pointer items-center text-lg font-bold underline">The figures, each with its list</summary>
         {table}
       </details>

@@ -3,6 +3,7 @@ import { Bar, BarChart, CartesianGrid, LabelList, Legend, ResponsiveContainer, X
 import type { DueWeek, GearCounts, TagOutMonth, TagOutReason } from "@/lib/dashboard/charts";
 import { TAG_OUT_REASONS } from "@/lib/dashboard/charts";
 import type { ItemStatus } from "@/lib/stock/labels";
+import { shortDate } from "@/lib/time";
 import tailwind from "@/tailwind.config";
 
 // The dashboard's pictures (recharts). Loaded only by the home page, after it has drawn
@@ -19,7 +20,7 @@ const STATUS_FILL: Record<ItemStatus, string> = { in_service: C.ok.DEFAULT, tagg
 
 /** In-service items due for inspection, week by week. */
 export function DueByWeekChart({ weeks }: { weeks: DueWeek[] }) {
-  const data = weeks.map((w, i) => ({ name: i < 2 ? w.label : w.from.slice(5).replace("-", "/"), count: w.count }));
+  const data = weeks.map((w, i) => ({ name: i < 2 ? w.label : shortDate(w.from), count: w.count }));
   return (
     <ResponsiveContainer width="100%" height={260}>
       <BarChart data={data} margin={{ top: 24, right: 8, bottom: 8, left: 0 }} accessibilityLayer={false}>
@@ -73,9 +74,9 @@ function ReasonPatterns() {
   );
 }
 
-/** Tag-outs by reason, month by month, stacked; the month's total above its bar. */
+/** Tag-outs by reason, month by month, stacked (the totals are in the table beside it). */
 export function TagOutsChart({ months }: { months: TagOutMonth[] }) {
-  const data = months.map((m) => ({ name: m.label, ...m.counts, total: m.total }));
+  const data = months.map((m) => ({ name: m.label, ...m.counts }));
   return (
     <ResponsiveContainer width="100%" height={300}>
       <BarChart data={data} margin={{ top: 24, right: 8, bottom: 8, left: 0 }} accessibilityLayer={false}>
@@ -83,11 +84,9 @@ export function TagOutsChart({ months }: { months: TagOutMonth[] }) {
         <CartesianGrid vertical={false} stroke={C.idle.bg} />
         <XAxis dataKey="name" tick={AXIS} />
         <YAxis allowDecimals={false} tick={AXIS} width={36} />
-        <Legend wrapperStyle={{ color: INK, fontSize: 14 }} />
-        {TAG_OUT_REASONS.map(({ reason, label }, i) => (
-          <Bar key={reason} dataKey={reason} name={label} stackId="reasons" fill={`url(#tag-out-${reason})`} stroke={REASON_FILL[reason]} strokeWidth={1.5} isAnimationActive={false}>
-            {i === TAG_OUT_REASONS.length - 1 && <LabelList dataKey="total" position="top" fill={INK} fontSize={14} fontWeight={700} />}
-          </Bar>
+        <Legend wrapperStyle={{ color: INK, fontSize: 14 }} itemSorter={null} />
+        {TAG_OUT_REASONS.map(({ reason, label }) => (
+          <Bar key={reason} dataKey={reason} name={label} stackId="reasons" fill={`url(#tag-out-${reason})`} stroke={REASON_FILL[reason]} strokeWidth={1.5} isAnimationActive={false} />
         ))}
       </BarChart>
     </ResponsiveContainer>

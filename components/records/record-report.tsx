@@ -85,11 +85,11 @@ export function RecordReport(r: ReportProps) {
               {item.serial ? <>Serial or lot <bdi>{item.serial}</bdi> · </> : null}
               {lb(item.wllLb)} · Status now: {STATUS_LABELS[item.status as ItemStatus]?.label ?? item.status}
             </p>
-            <table className="w-full border-collapse text-left text-base">
+            <table className="w-full table-fixed border-collapse text-left text-base">
               <thead>
                 <tr className="border-b border-ink">
                   <th scope="col" className="w-32 py-1 pr-2">When</th>
-                  <th scope="col" className="py-1 pr-2">Entry and verdict</th>
+                  <th scope="col" className="w-48 py-1 pr-2">Entry and verdict</th>
                   <th scope="col" className="py-1 pr-2">Found and measured</th>
                   <th scope="col" className="w-36 py-1 pr-2">By</th>
                 </tr>
