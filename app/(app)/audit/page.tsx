@@ -7,7 +7,6 @@ import { auditFilters, auditLine, auditQuerySchema } from "@/lib/audit/query";
 import { requirePage } from "@/lib/auth/session";
 import { zodIssues } from "@/lib/field-issues";
 import { organisationClock } from "@/lib/organisations/service";
-import { zoneWords } from "@/lib/time";
 
 export const metadata: Metadata = { title: "Audit log" };
 
@@ -40,7 +39,7 @@ export default async function AuditPage({ searchParams }: { searchParams: Promis
   return (
     <div className="flex max-w-5xl flex-col gap-4">
       <h1 className="text-3xl font-bold">Audit log</h1>
-      <p className="text-lg">Every change in your company, newest first, 100 at a time. Times are {zoneWords(timeZone)}.</p>
+      <p className="text-lg">Every change in your company, newest first, 100 at a time. Times are in {timeZone.replaceAll("_", " ")}.</p>
       <form method="get" action="/audit" className="grid grid-cols-1 gap-x-3 sm:grid-cols-2 lg:grid-cols-4">
         <SelectField label="Person" name="person" defaultValue={raw.person ?? ""} error={errors.person} options={[{ value: "", label: "Anyone" }, ...actors.map((a) => ({ value: a.id, label: a.name }))]} />
         <SelectField label="Kind of change" name="kind" defaultValue={raw.kind ?? ""} error={errors.kind} options={[{ value: "", label: "Every kind" }, ...Object.entries(AUDIT_KINDS).map(([value, label]) => ({ value, label }))]} />
