@@ -3,7 +3,7 @@ import { periodWords, type Period } from "@/lib/records/query";
 import { entryInWords } from "@/lib/records/rows";
 import { describeItem } from "@/lib/stock/describe";
 import { STATUS_LABELS, type ItemStatus } from "@/lib/stock/labels";
-import { writtenDate } from "@/lib/time";
+import { writtenDate, zoneWords } from "@/lib/time";
 
 const lb = (n: number | null) => (n === null ? "no WLL" : `WLL ${n.toLocaleString("en-US")} lb`);
 
@@ -41,7 +41,7 @@ export function RecordReport(r: ReportProps) {
           <dt className="font-bold">Items</dt>
           <dd>{r.selection}</dd>
           <dt className="font-bold">Printed</dt>
-          <dd data-testid="printed-at">{r.printedAt} ({r.timeZone}) by <bdi>{r.printedBy}</bdi></dd>
+          <dd data-testid="printed-at">{r.printedAt} ({zoneWords(r.timeZone)}) by <bdi>{r.printedBy}</bdi></dd>
           <dt className="font-bold">Entries</dt>
           <dd>{r.total.toLocaleString("en-US")} on {items.size.toLocaleString("en-US")} {items.size === 1 ? "item" : "items"}, of which {inspections.toLocaleString("en-US")} periodic {inspections === 1 ? "inspection" : "inspections"}</dd>
         </dl>
@@ -99,7 +99,8 @@ export function RecordReport(r: ReportProps) {
                   const w = entryInWords(e, r.timeZone);
                   return (
                     <tr key={e.id} className="border-b border-idle align-top">
-                      <td className="py-1 pr-2 whitespace-nowrap">{w.when}</td>
+                      {/* Day over time, so that neither runs into the next column on paper. */}
+                      <td className="py-1 pr-2">{w.when.split(" ").map((part) => <span key={part} className="block whitespace-nowrap">{part}</span>)}</td>
                       <td className="py-1 pr-2">
                         <span className="font-bold">{w.headline}</span>
                         {e.correctsEventId && <span> (corrects entry {e.correctsEventId})</span>}
