@@ -60,6 +60,8 @@ export interface LoadResult {
   p95: number;
   p99: number;
   statuses: Record<string, number>;
+  /** Requests without an answer (timeouts after 10 s, broken connections): reported, never hidden. */
+  failures: number;
 }
 
 export interface LoadOptions {
@@ -108,7 +110,7 @@ export async function load(o: LoadOptions): Promise<LoadResult> {
   });
   const result = await finished;
   times.sort((a, b) => a - b);
-  if (result.errors || result.timeouts) statuses.errors = result.errors + result.timeouts;
+  const failures = result.errors + result.timeouts; // no answer in 10 s, or a broken connection
   const r: LoadResult = {
     label: o.label,
     connections: o.connections,
@@ -119,10 +121,11 @@ export async function load(o: LoadOptions): Promise<LoadResult> {
     p95: quantile(times, 0.95),
     p99: quantile(times, 0.99),
     statuses,
+    failures,
   };
   const wrong = Object.entries(statuses).filter(([s]) => s !== String(o.expect));
   console.log(
-    `${o.label.padEnd(58)} ${r.rps.toFixed(0).padStart(6)} req/s  p50 ${r.p50.toFixed(1).padStart(6)} ms  p95 ${r.p95.toFixed(1).padStart(6)} ms  p99 ${r.p99.toFixed(1).padStart(6)} ms  (${o.connections} conn, ${o.seconds} s, ${r.requests} answers${wrong.length ? `; UNEXPECTED ${JSON.stringify(statuses)}` : `, all ${o.expect}`})`,
+    `${o.label.padEnd(58)} ${r.rps.toFixed(0).padStart(6)} req/s  p50 ${r.p50.toFixed(1).padStart(6)} ms  p95 ${r.p95.toFixed(1).padStart(6)} ms  p99 ${r.p99.toFixed(1).padStart(6)} ms  (${o.connections} conn, ${o.seconds} s, ${r.requests} answers${wrong.length ? `; UNEXPECTED ${JSON.stringify(statuses)}` : `, all ${o.expect}`}${failures ? `; ${failures} WITHOUT ANSWER` : ""})`,
   );
   if (wrong.length) throw new Error(`${o.label}: answers other than ${o.expect}: ${JSON.stringify(statuses)}`);
   return r;

@@ -61,6 +61,7 @@ bench api.ts
 bench tag-sheet.ts
 bench page-weight.ts --record
 bench import.ts --record
+bench explain.ts --record
 # Figures without a target in the issue, kept from earlier work:
 bench stock-list.ts
 bench kit-proposal-api.ts

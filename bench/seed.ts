@@ -39,7 +39,7 @@ async function main() {
             (array['in_service','in_service','in_service','in_service','tagged_out','retired'])[1 + c.g % 6], ?, 4700 + (c.g % 7) * 700,
             '49 CFR 393.108', 'BY-' || c.g, current_date + (c.g % 400) - 30,
             case when c.g % 3 = 0 then now() - (c.g % 50) * interval '1 day' end, case when c.g % 3 = 0 then c.g % 17 <> 0 end, '{}'::jsonb
-     from unnest(?::text[]) with ordinality as c(code, g)`,
+     from (select u.code, u.n::int as g from unnest(?::text[]) with ordinality as u(code, n)) c`,
     [organisationId, yard.id, [...codes]],
   );
   await db.raw("analyze");

@@ -36,19 +36,30 @@ export interface ActiveApiToken {
   creatorRole: Role;
   name: string;
   email: string;
+  lastUsedAt: Date | null;
+  organisationName: string;
+  timeZone: string;
 }
 
 export async function findActiveApiToken(tokenHash: string): Promise<ActiveApiToken | undefined> {
   return db("api_tokens as t")
     .join("users as u", "u.id", "t.created_by")
+    .join("organisations as o", "o.id", "t.organisation_id")
     .where("t.token_hash", tokenHash)
     .whereNull("t.revoked_at")
     .whereNull("u.disabled_at")
-    .first("t.id", "t.organisation_id as organisationId", "t.role", "u.id as userId", "u.role as creatorRole", "u.name", "u.email");
+    .first(
+      "t.id", "t.organisation_id as organisationId", "t.role", "t.last_used_at as lastUsedAt", "u.id as userId", "u.role as creatorRole", "u.name", "u.email",
+      "o.name as organisationName", "o.time_zone as timeZone",
+    );
 }
 
-export async function markApiTokenUsed(id: string): Promise<void> {
-  await db("api_tokens").where({ id }).update({ last_used_at: db.fn.now() });
+/** Records a token's use, unless one was recorded in the last `withinMinutes` (a read then writes nothing). */
+export async function markApiTokenUsed(id: string, withinMinutes: number): Promise<void> {
+  await db("api_tokens")
+    .where({ id })
+    .where((w) => w.whereNull("last_used_at").orWhere("last_used_at", "<", db.raw("now() - make_interval(mins => ?)", [withinMinutes])))
+    .update({ last_used_at: db.fn.now() });
 }
 
 /** The live tokens a person made, for capping or revoking them when the person changes. */

@@ -1,13 +1,12 @@
 import { AppShell } from "@/components/shell/app-shell";
-import { getOrganisation } from "@/db/organisations";
 import { requirePage } from "@/lib/auth/session";
 import { signOutAction } from "@/app/(auth)/actions";
 
 export default async function AppLayout({ children }: { children: React.ReactNode }) {
+  // The organisation's name comes with the session (one query for both).
   const principal = await requirePage();
-  const organisation = await getOrganisation(principal.organisationId);
   return (
-    <AppShell principal={principal} organisationName={organisation?.name ?? ""} signOut={signOutAction}>
+    <AppShell principal={principal} organisationName={principal.organisationName} signOut={signOutAction}>
       {children}
     </AppShell>
   );

@@ -1,31 +1,18 @@
 "use client";
 import { useEffect, useRef, useState } from "react";
-import type { Html5Qrcode } from "html5-qrcode";
 import { buttonClass } from "@/components/ui/button";
 import { CAMERA_MESSAGES, cameraProblem, type CameraProblem } from "@/lib/tags/camera";
+import { hasCamera, startCamera, type RunningCamera } from "./camera-engines";
 
 const REGION_ID = "tag-camera";
 
 type CameraState = { on: "starting" } | { on: "scanning" } | { on: "stopped" } | { on: "failed"; problem: CameraProblem };
 
-async function stopScanner(scanner: Html5Qrcode | null) {
-  if (!scanner) return;
-  try {
-    if (scanner.isScanning) await scanner.stop();
-  } catch {
-    /* already stopped */
-  }
-  try {
-    scanner.clear();
-  } catch {
-    /* nothing to clear */
-  }
-}
-
 /**
- * The rear camera, reading QR codes ten times a second. html5-qrcode is loaded in the
- * browser only. The camera stops when this leaves the screen, and through `stopRef` before
- * the page navigates away.
+ * The rear camera, reading QR codes ten times a second: with the browser's own barcode
+ * detector where it has one, else with html5-qrcode, loaded only when a camera starts
+ * (components/scan/camera-engines.ts). The camera stops when this leaves the screen, and
+ * through `stopRef` before the page navigates away.
  */
 export function CameraScanner({
   onText,
@@ -45,34 +32,27 @@ export function CameraScanner({
   useEffect(() => {
     if (run < 0) return;
     let cancelled = false;
-    let scanner: Html5Qrcode | null = null;
+    let running: RunningCamera | null = null;
 
     const stop = async () => {
       cancelled = true;
-      const s = scanner;
-      scanner = null;
-      await stopScanner(s);
+      const r = running;
+      running = null;
+      await r?.stop();
     };
     stopRef.current = stop;
 
     (async () => {
       if (!window.isSecureContext) return setCamera({ on: "failed", problem: "insecure" });
       if (!navigator.mediaDevices?.getUserMedia) return setCamera({ on: "failed", problem: "unsupported" });
-      const { Html5Qrcode, Html5QrcodeSupportedFormats } = await import("html5-qrcode");
-      if (cancelled) return;
-      const instance = new Html5Qrcode(REGION_ID, { formatsToSupport: [Html5QrcodeSupportedFormats.QR_CODE], verbose: false });
-      scanner = instance;
+      if (!(await hasCamera())) {
+        if (!cancelled) setCamera({ on: "failed", problem: "none" });
+        return;
+      }
       try {
-        await instance.start(
-          { facingMode: "environment" },
-          { fps: 10, qrbox: 250 },
-          (text) => onTextRef.current(text),
-          () => {},
-        );
-        if (cancelled) await stopScanner(instance);
-        else setCamera({ on: "scanning" });
+        running = await startCamera(document.getElementById(REGION_ID)!, (text) => onTextRef.current(text), () => cancelled);
+        if (running) setCamera({ on: "scanning" });
       } catch (error) {
-        scanner = null;
         if (!cancelled) setCamera({ on: "failed", problem: cameraProblem(error) });
       }
     })();

@@ -1,14 +1,40 @@
 import "server-only";
-import { generateIdFromEntropySize, Lucia } from "lucia";
+import { generateIdFromEntropySize, Lucia, type DatabaseSession, type DatabaseUser } from "lucia";
 import { NodePostgresAdapter } from "@lucia-auth/adapter-postgresql";
 import { pool } from "@/db";
+import { findSessionWithUser } from "@/db/sessions";
 import { cookieSecure } from "@/lib/config";
 import type { Role } from "./roles";
 import { SESSION_COOKIE } from "./session-cookie";
 
 // lucia v3 is in maintenance; only lib/auth imports this file (everything else talks to
 // lib/auth/session.ts), so it can be swapped here without touching routes.
-const adapter = new NodePostgresAdapter(pool, { user: "users", session: "user_sessions" });
+// Its adapter reads a session and its person in two queries on every request (and every
+// column of the person); ours reads them, with the organisation's name and time zone, in one.
+class OneQueryAdapter extends NodePostgresAdapter {
+  override async getSessionAndUser(sessionId: string): Promise<[DatabaseSession | null, DatabaseUser | null]> {
+    const row = await findSessionWithUser(sessionId);
+    if (!row) return [null, null];
+    return [
+      { id: row.sessionId, userId: row.userId, expiresAt: row.expiresAt, attributes: {} },
+      {
+        id: row.userId,
+        attributes: {
+          email: row.email,
+          name: row.name,
+          role: row.role as Role,
+          designated: row.designated,
+          organisation_id: row.organisationId,
+          disabled_at: row.disabledAt,
+          time_zone: row.timeZone,
+          organisation_name: row.organisationName,
+        },
+      },
+    ];
+  }
+}
+
+const adapter = new OneQueryAdapter(pool, { user: "users", session: "user_sessions" });
 
 export const lucia = new Lucia(adapter, {
   sessionCookie: {
@@ -23,6 +49,8 @@ export const lucia = new Lucia(adapter, {
     designated: row.designated,
     organisationId: row.organisation_id,
     disabledAt: row.disabled_at,
+    timeZone: row.time_zone,
+    organisationName: row.organisation_name,
   }),
 });
 
@@ -36,6 +64,8 @@ declare module "lucia" {
       designated: boolean;
       organisation_id: string;
       disabled_at: Date | null;
+      time_zone: string;
+      organisation_name: string;
     };
   }
 }

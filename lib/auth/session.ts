@@ -1,44 +1,30 @@
 import "server-only";
 import { cache } from "react";
-import { cookies } from "next/headers";
+import { cookies, headers } from "next/headers";
 import { forbidden, redirect } from "next/navigation";
 import { findActiveApiToken, markApiTokenUsed } from "@/db/api-tokens";
 import { lucia } from "./lucia";
-import { can, lowerRole, type Permission, type Role } from "./roles";
+import { openPrincipal, PRINCIPAL_HEADER, principalFromSessionId, type Principal } from "./principal";
+import { can, lowerRole, type Permission } from "./roles";
 import { hashSecret } from "./secrets";
 
-/** Who is asking, as every route and action sees it. */
-export interface Principal {
-  userId: string;
-  organisationId: string;
-  role: Role;
-  designated: boolean;
-  name: string;
-  email: string;
-  via: "session" | "token";
-}
+export type { Principal } from "./principal";
 
-async function principalFromSessionId(sessionId: string | undefined): Promise<Principal | null> {
-  if (!sessionId) return null;
-  // validateSession also extends a session that is past half its life (sliding expiry);
-  // the cookie itself lasts, so nothing needs re-setting here.
-  const { session, user } = await lucia.validateSession(sessionId);
-  if (!session || !user || user.disabledAt) return null;
-  return {
-    userId: user.id,
-    organisationId: user.organisationId,
-    role: user.role,
-    designated: user.designated,
-    name: user.name,
-    email: user.email,
-    via: "session",
-  };
-}
+/**
+ * A token's last use is recorded at most once in this many minutes: a request with a token
+ * reads, and writes only when the recorded use is older (the settings page shows the day).
+ */
+export const TOKEN_USE_RECORDED_EVERY_MINUTES = 5;
 
-/** The signed-in person of this request (cookie), or null. Cached per request. */
+/**
+ * The signed-in person of this request (cookie), or null. Cached per request. A page takes
+ * what proxy.ts read for this same session (lib/auth/principal.ts); a server action that
+ * changed the cookie, or a request the proxy did not see, reads the session here.
+ */
 export const getPrincipal = cache(async (): Promise<Principal | null> => {
-  const jar = await cookies();
-  return principalFromSessionId(jar.get(lucia.sessionCookieName)?.value);
+  const sessionId = (await cookies()).get(lucia.sessionCookieName)?.value;
+  const handed = openPrincipal((await headers()).get(PRINCIPAL_HEADER), sessionId);
+  return handed !== undefined ? handed : principalFromSessionId(sessionId);
 });
 
 /** For pages: send a stranger to sign-in, and answer 403 to the wrong role. */
@@ -62,7 +48,8 @@ async function principalFromApiToken(secret: string): Promise<Principal | null> 
   if (!secret) return null;
   const token = await findActiveApiToken(hashSecret(secret));
   if (!token) return null;
-  await markApiTokenUsed(token.id);
+  const recordedSince = Date.now() - TOKEN_USE_RECORDED_EVERY_MINUTES * 60_000;
+  if (!token.lastUsedAt || token.lastUsedAt.getTime() < recordedSince) await markApiTokenUsed(token.id, TOKEN_USE_RECORDED_EVERY_MINUTES);
   return {
     userId: token.userId,
     organisationId: token.organisationId,
@@ -72,6 +59,8 @@ async function principalFromApiToken(secret: string): Promise<Principal | null> 
     name: `${token.name} (API token)`,
     email: token.email,
     via: "token",
+    organisationName: token.organisationName,
+    timeZone: token.timeZone,
   };
 }
 

@@ -4,7 +4,7 @@ import { getUnits } from "@/db/fleet";
 import type { Permission } from "@/lib/auth/roles";
 import { requirePage } from "@/lib/auth/session";
 import { isUuid } from "@/lib/http/ids";
-import { organisationClock } from "@/lib/organisations/service";
+import { principalClock } from "@/lib/organisations/service";
 import { kitJson } from "./answers";
 import { loadKit } from "./kit-service";
 
@@ -19,6 +19,6 @@ export async function requireKitPage(permission: Permission, params: Promise<{ i
   if (!isUuid(id)) notFound();
   const kit = await loadKit(principal.organisationId, id);
   if (!kit) notFound();
-  const [units, { timeZone, today }] = await Promise.all([getUnits(principal.organisationId), organisationClock(principal.organisationId)]);
+  const [units, { timeZone, today }] = await Promise.all([getUnits(principal.organisationId), principalClock(principal)]);
   return { principal, kit: kitJson(kit), units, timeZone, today };
 }

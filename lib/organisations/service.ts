@@ -47,3 +47,12 @@ export async function organisationClock(organisationId: string, now: Date = new 
   const timeZone = (await getTimeZone(organisationId)) ?? DEFAULT_TIME_ZONE;
   return { timeZone, today: todayIn(timeZone, now) };
 }
+
+/**
+ * The same clock for the signed-in person's organisation, from the time zone read with the
+ * session or token (lib/auth/session.ts): no query of its own. Pages and routes use this;
+ * work without a principal (the worker, imports in a job) uses {@link organisationClock}.
+ */
+export function principalClock(principal: Pick<Principal, "timeZone">, now: Date = new Date()): { timeZone: string; today: string } {
+  return { timeZone: principal.timeZone, today: todayIn(principal.timeZone, now) };
+}

@@ -4,7 +4,7 @@ import { getItem } from "@/db/items";
 import type { Permission } from "@/lib/auth/roles";
 import { requirePage } from "@/lib/auth/session";
 import { isUuid } from "@/lib/http/ids";
-import { organisationClock } from "@/lib/organisations/service";
+import { principalClock } from "@/lib/organisations/service";
 
 /**
  * For the item pages: the signed-in person (sign-in or 403 otherwise) and the item of their
@@ -17,5 +17,5 @@ export async function requireItemPage(permission: Permission, params: Promise<{ 
   if (!isUuid(id)) notFound();
   const item = await getItem(principal.organisationId, id);
   if (!item) notFound();
-  return { principal, id, item, clock: await organisationClock(principal.organisationId) };
+  return { principal, id, item, clock: await principalClock(principal) };
 }

@@ -16,7 +16,8 @@ export function testAddress(): string {
 export class Client {
   cookie = "";
   readonly address = testAddress();
-  constructor(readonly bearer?: string) {}
+  /** `base`: another app process of the same deployment (its Origin stays APP_URL's, as behind a load balancer). */
+  constructor(readonly bearer?: string, public base = BASE_URL) {}
 
   async request(method: string, path: string, body?: unknown, headers: Record<string, string> = {}) {
     const h: Record<string, string> = { "x-forwarded-for": this.address, ...headers };
@@ -29,7 +30,7 @@ export class Client {
       payload = JSON.stringify(body);
       h["content-type"] = "application/json";
     }
-    const res = await fetch(BASE_URL + path, { method, headers: h, body: payload, redirect: "manual" });
+    const res = await fetch(this.base + path, { method, headers: h, body: payload, redirect: "manual" });
     const set = res.headers.get("set-cookie");
     if (set?.startsWith("linkyard_session=")) {
       const value = set.split(";")[0];

@@ -6,7 +6,7 @@ import { AUDIT_KINDS } from "@/lib/audit/actions";
 import { auditFilters, auditLine, auditQuerySchema } from "@/lib/audit/query";
 import { requirePage } from "@/lib/auth/session";
 import { zodIssues } from "@/lib/field-issues";
-import { organisationClock } from "@/lib/organisations/service";
+import { principalClock } from "@/lib/organisations/service";
 
 export const metadata: Metadata = { title: "Audit log" };
 
@@ -24,7 +24,7 @@ export default async function AuditPage({ searchParams }: { searchParams: Promis
   const parsed = auditQuerySchema.safeParse(raw);
   const errors: Record<string, string> = {};
   if (!parsed.success) for (const i of zodIssues(parsed.error)) errors[i.path] = i.message;
-  const { timeZone } = await organisationClock(principal.organisationId);
+  const { timeZone } = await principalClock(principal);
   const asked = parsed.success ? parsed.data : { format: "json" as const };
   const [rows, actors] = await Promise.all([
     parsed.success ? listAudit(principal.organisationId, auditFilters(asked, timeZone), PAGE) : Promise.resolve([]),

@@ -2,7 +2,7 @@ import type { Metadata } from "next";
 import { CheckScreen } from "@/components/securement/check/check-screen";
 import { requirePage } from "@/lib/auth/session";
 import { isUuid } from "@/lib/http/ids";
-import { organisationClock } from "@/lib/organisations/service";
+import { principalClock } from "@/lib/organisations/service";
 
 export const metadata: Metadata = { title: "Load check" };
 
@@ -11,7 +11,7 @@ type Search = Record<string, string | string[] | undefined>;
 /** The load check; `?saved=<id>` opens a saved check (another organisation's id is simply not found). */
 export default async function CheckPage({ searchParams }: { searchParams: Promise<Search> }) {
   const principal = await requirePage("securement.check");
-  const { timeZone } = await organisationClock(principal.organisationId);
+  const { timeZone } = await principalClock(principal);
   const saved = (await searchParams).saved;
   const openId = typeof saved === "string" && isUuid(saved) ? saved : undefined;
   return (

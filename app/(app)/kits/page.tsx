@@ -6,7 +6,7 @@ import { can } from "@/lib/auth/roles";
 import { requirePage } from "@/lib/auth/session";
 import type { KitListEntry } from "@/lib/kits/answers";
 import { kitsStillOut, listKitEntries } from "@/lib/kits/kit-service";
-import { organisationClock } from "@/lib/organisations/service";
+import { principalClock } from "@/lib/organisations/service";
 import { addDays, dayLabel, isIsoDate } from "@/lib/time";
 
 export const metadata: Metadata = { title: "Kits" };
@@ -16,7 +16,7 @@ const DAYS = 14;
 /** The coming days' kits by date, each with its state and verdict in words; gear still out first. */
 export default async function KitsPage({ searchParams }: { searchParams: Promise<{ from?: string }> }) {
   const principal = await requirePage("fleet.view");
-  const { today } = await organisationClock(principal.organisationId);
+  const { today } = await principalClock(principal);
   const asked = (await searchParams).from;
   const from = asked && isIsoDate(asked) ? asked : today;
   const to = addDays(from, DAYS - 1);

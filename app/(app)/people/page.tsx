@@ -4,7 +4,7 @@ import { inviteAction, updatePersonAction, withdrawInviteAction } from "./action
 import { listOpenInvites, listPeople } from "@/db/people";
 import { ROLE_LABELS, type Role } from "@/lib/auth/roles";
 import { requirePage } from "@/lib/auth/session";
-import { organisationClock } from "@/lib/organisations/service";
+import { principalClock } from "@/lib/organisations/service";
 import { formatDay } from "@/lib/time";
 
 export const metadata: Metadata = { title: "People" };
@@ -14,7 +14,7 @@ export default async function PeoplePage() {
   const [people, invites, { timeZone }] = await Promise.all([
     listPeople(principal.organisationId),
     listOpenInvites(principal.organisationId),
-    organisationClock(principal.organisationId),
+    principalClock(principal),
   ]);
   return (
     <div className="flex max-w-3xl flex-col gap-6">

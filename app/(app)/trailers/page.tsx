@@ -7,14 +7,14 @@ import { requirePage } from "@/lib/auth/session";
 import { formatLength, formatWeight } from "@/lib/kits/display";
 import { listTrailers } from "@/lib/kits/fleet-service";
 import { TRAILER_TYPE_LABELS } from "@/lib/kits/model";
-import { organisationClock } from "@/lib/organisations/service";
+import { principalClock } from "@/lib/organisations/service";
 
 export const metadata: Metadata = { title: "Trailers" };
 
 /** The trailers, each with how many of its anchor points may be used today. */
 export default async function TrailersPage() {
   const principal = await requirePage("fleet.view");
-  const [units, { today }] = await Promise.all([getUnits(principal.organisationId), organisationClock(principal.organisationId)]);
+  const [units, { today }] = await Promise.all([getUnits(principal.organisationId), principalClock(principal)]);
   const trailers = await listTrailers(principal.organisationId, today);
   return (
     <div className="flex max-w-3xl flex-col gap-5">

@@ -5,7 +5,7 @@ import { getUnits } from "@/db/fleet";
 import { requirePage } from "@/lib/auth/session";
 import { formatWeight } from "@/lib/kits/display";
 import { listMachines, listTrailers } from "@/lib/kits/fleet-service";
-import { organisationClock } from "@/lib/organisations/service";
+import { principalClock } from "@/lib/organisations/service";
 import { addDays, isIsoDate } from "@/lib/time";
 
 export const metadata: Metadata = { title: "Plan a kit" };
@@ -13,7 +13,7 @@ export const metadata: Metadata = { title: "Plan a kit" };
 /** A new kit for a date (tomorrow unless asked), a job, a machine and a trailer. */
 export default async function NewKitPage({ searchParams }: { searchParams: Promise<{ date?: string }> }) {
   const principal = await requirePage("fleet.manage");
-  const [units, { today }] = await Promise.all([getUnits(principal.organisationId), organisationClock(principal.organisationId)]);
+  const [units, { today }] = await Promise.all([getUnits(principal.organisationId), principalClock(principal)]);
   const asked = (await searchParams).date;
   const [machines, trailers] = await Promise.all([listMachines(principal.organisationId), listTrailers(principal.organisationId, today)]);
   return (

@@ -14,7 +14,7 @@ import { trailerJson } from "@/lib/kits/answers";
 import { formatLength, formatWeight } from "@/lib/kits/display";
 import { getTrailer } from "@/lib/kits/fleet-service";
 import { ANCHOR_STATUS_LABELS, COUPLING_LABELS, SIDE_LABELS } from "@/lib/kits/model";
-import { organisationClock } from "@/lib/organisations/service";
+import { principalClock } from "@/lib/organisations/service";
 import { formatDay } from "@/lib/time";
 
 export const metadata: Metadata = { title: "Trailer" };
@@ -33,7 +33,7 @@ export default async function TrailerPage({ params, searchParams }: { params: Pr
   const principal = await requirePage("fleet.view");
   const { id } = await params;
   if (!isUuid(id)) notFound();
-  const [units, { timeZone, today }] = await Promise.all([getUnits(principal.organisationId), organisationClock(principal.organisationId)]);
+  const [units, { timeZone, today }] = await Promise.all([getUnits(principal.organisationId), principalClock(principal)]);
   const trailer = await getTrailer(principal.organisationId, id, today).catch(() => null);
   if (!trailer) notFound();
   const t = trailerJson(trailer);

@@ -6,7 +6,7 @@ import { buttonClass } from "@/components/ui/button-class";
 import { createdItems, getBatch } from "@/db/imports";
 import { describeItem } from "@/lib/stock/describe";
 import { requirePage } from "@/lib/auth/session";
-import { organisationClock } from "@/lib/organisations/service";
+import { principalClock } from "@/lib/organisations/service";
 import { formatDateTime } from "@/lib/time";
 import { isUuid } from "@/lib/http/ids";
 import { undoState } from "@/lib/import/undo";
@@ -26,7 +26,7 @@ export default async function ImportResultPage({ params }: { params: Promise<{ b
   const [created, undo, { timeZone }] = await Promise.all([
     batch.status === "committed" ? createdItems(principal.organisationId, batchId, SHEET * MAX_SHEETS) : Promise.resolve([]),
     undoState(principal.organisationId, batch),
-    organisationClock(principal.organisationId),
+    principalClock(principal),
   ]);
   const ids = created.map((i) => i.id);
   const sheets: string[][] = [];

@@ -4,7 +4,7 @@ import { UndoImportButton } from "@/components/import/undo-import";
 import { buttonClass } from "@/components/ui/button-class";
 import { listBatches } from "@/db/imports";
 import { requirePage } from "@/lib/auth/session";
-import { organisationClock } from "@/lib/organisations/service";
+import { principalClock } from "@/lib/organisations/service";
 import { formatDateTime } from "@/lib/time";
 import { undoState } from "@/lib/import/undo";
 
@@ -14,7 +14,7 @@ const n = (v: number) => v.toLocaleString("en-US");
 
 export default async function ImportHistoryPage() {
   const principal = await requirePage("stock.import");
-  const [batches, { timeZone }] = await Promise.all([listBatches(principal.organisationId), organisationClock(principal.organisationId)]);
+  const [batches, { timeZone }] = await Promise.all([listBatches(principal.organisationId), principalClock(principal)]);
   const when = (d: Date) => formatDateTime(d, timeZone);
   const undo = await Promise.all(batches.map((b) => undoState(principal.organisationId, b)));
   return (

@@ -4,7 +4,7 @@ import { PrintedCheck } from "@/components/securement/print/printed-check";
 import { PrintToolbar } from "@/components/securement/print/print-toolbar";
 import { requirePage } from "@/lib/auth/session";
 import { isUuid } from "@/lib/http/ids";
-import { organisationClock } from "@/lib/organisations/service";
+import { principalClock } from "@/lib/organisations/service";
 import { readSavedCheck } from "@/lib/securement-checks/service";
 
 export const metadata: Metadata = { title: "Load check (print)" };
@@ -18,7 +18,7 @@ export default async function PrintCheckPage({ params }: { params: Promise<{ id:
   const { id } = await params;
   const check = isUuid(id) ? await readSavedCheck(principal, id) : undefined;
   if (!check) notFound();
-  const { timeZone } = await organisationClock(principal.organisationId);
+  const { timeZone } = await principalClock(principal);
   return (
     <main className="mx-auto max-w-3xl bg-white">
       <style>{PRINT_CSS}</style>

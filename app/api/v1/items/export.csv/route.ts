@@ -1,7 +1,7 @@
 import { streamItems } from "@/db/items";
 import { csvLine, EXPORT_HEADERS, exportRow } from "@/lib/import/csv-write";
 import { route } from "@/lib/http/route";
-import { organisationClock } from "@/lib/organisations/service";
+import { principalClock } from "@/lib/organisations/service";
 import { itemListQuerySchema, listFilters } from "@/lib/stock/api-schemas";
 import { csvDownloadHeaders } from "@/lib/http/download";
 import { itemVerdict } from "@/lib/stock/verdict";
@@ -14,7 +14,7 @@ import { itemVerdict } from "@/lib/stock/verdict";
  * a yard hand reads the stock on screen.
  */
 export const GET = route("stock.edit", { query: itemListQuerySchema }, async ({ principal, query }) => {
-  const clock = await organisationClock(principal.organisationId);
+  const clock = await principalClock(principal);
   const { today } = clock;
   const batches = streamItems(principal.organisationId, listFilters(query, today));
   const encoder = new TextEncoder();

@@ -1,6 +1,6 @@
 import { findItemByTag } from "@/db/items";
 import { route } from "@/lib/http/route";
-import { organisationClock } from "@/lib/organisations/service";
+import { principalClock } from "@/lib/organisations/service";
 import { badRequest, notFound } from "@/lib/http/errors";
 import { toItemJson } from "@/lib/stock/item-json";
 import { tagCodeFromPath } from "@/lib/tags/entry";
@@ -16,5 +16,5 @@ export const GET = route("stock.view", {}, async ({ principal, params }) => {
   }
   const item = await findItemByTag(code);
   if (!item || item.organisationId !== principal.organisationId) throw notFound("No item has this tag code.");
-  return toItemJson(item, await organisationClock(principal.organisationId));
+  return toItemJson(item, await principalClock(principal));
 });

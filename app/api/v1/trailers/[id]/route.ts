@@ -3,11 +3,11 @@ import { route } from "@/lib/http/route";
 import { trailerJson } from "@/lib/kits/answers";
 import { editTrailer, getTrailer } from "@/lib/kits/fleet-service";
 import { onDateQuerySchema, trailerInputSchema } from "@/lib/kits/schemas";
-import { organisationClock } from "@/lib/organisations/service";
+import { principalClock } from "@/lib/organisations/service";
 
 /** The trailer and its anchor points in use or out of use, each judged for `on` (default today). */
 export const GET = route("fleet.view", { query: onDateQuerySchema }, async ({ principal, params, query }) => {
-  const on = query.on ?? ((await organisationClock(principal.organisationId)).today);
+  const on = query.on ?? ((await principalClock(principal)).today);
   return trailerJson(await getTrailer(principal.organisationId, uuidParam(params.id, "trailer"), on));
 });
 
@@ -18,6 +18,6 @@ export const GET = route("fleet.view", { query: onDateQuerySchema }, async ({ pr
 export const PUT = route("fleet.manage", { body: trailerInputSchema }, async ({ principal, params, body }) => {
   const id = uuidParam(params.id, "trailer");
   const { retired } = await editTrailer(principal, id, body);
-  const on = (await organisationClock(principal.organisationId)).today;
+  const on = (await principalClock(principal)).today;
   return { ...trailerJson(await getTrailer(principal.organisationId, id, on)), retired };
 });

@@ -5,7 +5,7 @@ import { anchorJson } from "@/lib/kits/answers";
 import { toAnchor } from "@/lib/kits/assemble";
 import { recordAnchorEvent } from "@/lib/kits/fleet-service";
 import { anchorEventSchema } from "@/lib/kits/schemas";
-import { organisationClock } from "@/lib/organisations/service";
+import { principalClock } from "@/lib/organisations/service";
 
 /** The anchor point's history, newest first. */
 export const GET = route("fleet.view", {}, async ({ principal, params }) => {
@@ -22,5 +22,5 @@ export const POST = route("items.check", { body: anchorEventSchema }, async ({ p
   const id = uuidParam(params.id, "anchor point");
   await recordAnchorEvent(principal, id, body);
   const anchor = (await getAnchorPoint(principal.organisationId, id))!;
-  return Response.json(anchorJson(toAnchor(anchor, (await organisationClock(principal.organisationId)).today)), { status: 201 });
+  return Response.json(anchorJson(toAnchor(anchor, (await principalClock(principal)).today)), { status: 201 });
 });

@@ -1,7 +1,7 @@
 import { getItem, listEvents } from "@/db/items";
 import { notFound, uuidParam } from "@/lib/http/errors";
 import { route } from "@/lib/http/route";
-import { organisationClock } from "@/lib/organisations/service";
+import { principalClock } from "@/lib/organisations/service";
 import { itemEventSchema } from "@/lib/stock/api-schemas";
 import { recordItemEvent } from "@/lib/stock/events";
 import { toItemJson } from "@/lib/stock/item-json";
@@ -21,5 +21,5 @@ export const POST = route("items.check", { body: itemEventSchema }, async ({ pri
   const id = uuidParam(params.id);
   const result = await recordItemEvent(principal, id, body);
   const item = await getItem(principal.organisationId, id);
-  return Response.json({ result: result ?? null, item: item ? toItemJson(item, await organisationClock(principal.organisationId)) : null }, { status: 201 });
+  return Response.json({ result: result ?? null, item: item ? toItemJson(item, await principalClock(principal)) : null }, { status: 201 });
 });
