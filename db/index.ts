@@ -24,10 +24,10 @@ function newPool(): pg.Pool {
   return p;
 }
 
-if (process.env.NODE_ENV !== "production") {
-  globalForDb.linkyardKnex = db;
-  globalForDb.linkyardPool = pool;
-}
+// Once per process: Next bundles proxy.ts apart from the pages and routes, and the dev server
+// reloads modules; both would otherwise open pools of their own.
+globalForDb.linkyardKnex = db;
+globalForDb.linkyardPool = pool;
 
 /** A transaction (or the pool itself) that query functions run in. */
 export type Tx = Knex;

@@ -4,7 +4,6 @@ import type { Principal } from "@/lib/auth/session";
 import type { FormAction } from "@/lib/forms/state";
 import { barFor, navFor } from "@/lib/shell/nav";
 import { Logo } from "@/components/ui/logo";
-import { QueryProvider } from "@/components/providers/query-provider";
 import { NavLinks } from "./nav-links";
 import { SignOutButton } from "./sign-out-button";
 
@@ -57,7 +56,7 @@ export function AppShell({
       </aside>
 
       <main className="px-4 pb-24 pt-4 md:px-8 md:pb-8">
-        <QueryProvider>{children}</QueryProvider>
+        {children}
       </main>
 
       <nav aria-label="Main" className="fixed inset-x-0 bottom-0 z-10 bg-deck md:hidden print:hidden">

@@ -247,6 +247,54 @@ describe("scanning with the phone's camera", () => {
   });
 });
 
+describe("scanning with a browser that has its own barcode detector", () => {
+  it("reads the tag through BarcodeDetector and never downloads html5-qrcode", async () => {
+    // Debian's Chromium has no BarcodeDetector (Android's and recent Safari do): the page gets
+    // a stand-in that reads like the real one, answering the tag's URL once the camera's
+    // video has a frame. The camera itself is Chromium's fake device, as above.
+    const item = items.find((i) => i.status === "in_service")!;
+    const video = path.join(work, "native.y4m");
+    await writeQrVideo(video, `${APP_URL}/t/${item.tagCode}`, { size: 480, margin: 10 });
+    const phone = await openBrowser({
+      phone: true,
+      extraArgs: ["--use-fake-ui-for-media-stream", "--use-fake-device-for-media-stream", `--use-file-for-fake-video-capture=${video}`],
+    });
+    try {
+      const page = await phone.context.newPage();
+      await page.addInitScript((text: string) => {
+        const w = window as unknown as { BarcodeDetector: unknown; __detected: number };
+        w.__detected = 0;
+        w.BarcodeDetector = class {
+          static async getSupportedFormats() {
+            return ["qr_code", "ean_13"];
+          }
+          constructor(options: { formats: string[] }) {
+            if (!options.formats.includes("qr_code")) throw new TypeError("qr_code expected");
+          }
+          async detect(source: HTMLVideoElement) {
+            if (!(source instanceof HTMLVideoElement) || source.videoWidth === 0) return [];
+            w.__detected++;
+            return [{ rawValue: text, format: "qr_code" }];
+          }
+        };
+      }, `${APP_URL}/t/${item.tagCode}`);
+      const libraryLoaded: string[] = [];
+      page.on("response", async (res) => {
+        if (res.request().resourceType() !== "script") return;
+        const body = await res.text().catch(() => "");
+        if (body.includes("html5-qrcode")) libraryLoaded.push(res.url());
+      });
+      await signIn(page, "yara");
+      await page.goto(`${BASE_URL}/scan`);
+      await page.waitForURL(`${BASE_URL}/items/${item.id}`, { timeout: 30_000 });
+      expect(await page.evaluate(() => (window as unknown as { __detected: number }).__detected)).toBeGreaterThan(0);
+      expect(libraryLoaded).toEqual([]);
+    } finally {
+      await phone.close();
+    }
+  });
+});
+
 describe("typing a code on the scan page", () => {
   let phone: OpenBrowser;
   beforeAll(async () => {
