@@ -100,7 +100,7 @@ export async function load(o: LoadOptions): Promise<LoadResult> {
         path: url.pathname + url.search,
         headers: o.headers,
         body: o.body,
-        setupRequest: o.path ? (req) => ({ ...req, path: o.path!() }) : undefined,
+        ...(o.path && { setupRequest: (req: autocannon.Request) => ({ ...req, path: o.path!() }) }),
       },
     ],
   }, (error, result) => (error ? failed(error) : done(result)));
