@@ -20,6 +20,8 @@ import { tagLookupsExhausted, tooManyLookupsResponse } from "@/lib/tags/lookups"
 //   few seconds;
 // - every page gets its Content-Security-Policy with a fresh nonce, which Next reads from
 //   the request header and puts on its scripts.
+const APP_ORIGIN = appOrigin(app.APP_URL); // once, not per request
+
 export async function proxy(request: NextRequest) {
   const crossSite = isCrossSite(
     {
@@ -29,7 +31,7 @@ export async function proxy(request: NextRequest) {
       hasSessionCookie: request.cookies.has(SESSION_COOKIE),
       bearer: false,
     },
-    appOrigin(app.APP_URL),
+    APP_ORIGIN,
   );
   if (crossSite) {
     return new Response("Cross-site request refused.", { status: 403, headers: { "content-type": "text/plain; charset=utf-8", "cache-control": "no-store" } });

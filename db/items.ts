@@ -188,9 +188,13 @@ export async function getItemsByIds(organisationId: string, ids: string[], trx: 
   return base(trx).where("i.organisation_id", organisationId).whereIn("i.id", ids).orderBy("i.tag_code").select(ITEM_COLUMNS);
 }
 
+// The scan's lookup is the most frequent query of all: its SQL is built once, not per request.
+const BY_TAG = base().where("i.tag_code", "").first([...ITEM_COLUMNS, "i.organisation_id as organisationId"]).toSQL();
+
 /** By printed tag code, in any organisation (callers check the organisation). */
 export async function findItemByTag(tagCode: string): Promise<(ItemRecord & { organisationId: string }) | undefined> {
-  return base().where("i.tag_code", tagCode).first([...ITEM_COLUMNS, "i.organisation_id as organisationId"]);
+  const { rows } = await db.raw(BY_TAG.sql, [tagCode, ...BY_TAG.bindings.slice(1)] as Knex.RawBinding[]);
+  return rows[0];
 }
 
 export async function serialTaken(organisationId: string, serial: string, exceptId?: string, trx: Knex = db): Promise<boolean> {

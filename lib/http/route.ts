@@ -13,6 +13,9 @@ import { DATABASE_DOWN, isConnectionFailure, RETRY_AFTER_SECONDS } from "./unava
 // handler's own few lines. Failures come back as { error, issues } with the right status;
 // every answer is Cache-Control: no-store (it is someone's data, or about their account).
 
+/** The app's own origin, worked out once: every request's Origin is compared with it. */
+const APP_ORIGIN = appOrigin(config.APP_URL);
+
 /** The largest body a route reads: the public account routes take a few fields, the rest a kit or a check. */
 export const BODY_LIMITS = { public: 8 * 1024, signedIn: 128 * 1024 } as const;
 
@@ -65,7 +68,7 @@ function wrap<B, Q>(
           hasSessionCookie: cookie.includes(`${SESSION_COOKIE}=`),
           bearer,
         },
-        appOrigin(config.APP_URL),
+        APP_ORIGIN,
       );
       if (crossSite) throw forbidden("Cross-site request refused.");
 
