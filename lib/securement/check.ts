@@ -46,7 +46,7 @@ import { SOURCES, sortFindings } from "./findings";
 import { formatFeet, formatLbKg, formatNumber, roundHalfUp } from "./format";
 import { HEAVY_MACHINE_MIN_TIEDOWNS, isHeavyMachine, minimumTiedowns } from "./minimum";
 import type { Attachment, CargoKind, ComponentType, SecurementCheckRequest } from "./request";
-import { securementCheckRequestSchema } from "./schema";
+import { securementCheckRequestSchema, type SecurementCheckRequestInput } from "./schema";
 import { KG_PER_LB, M_PER_FT, settle, toFeet, toKg, toLb, toMillimetres } from "./units";
 
 /**
@@ -172,7 +172,20 @@ function plural(n: number, word: string): string {
 export function checkSecurement(request: SecurementCheckRequest): SecurementCheckResult {
   const parsed = securementCheckRequestSchema.safeParse(request);
   if (!parsed.success) throw new RequestValidationError(zodIssues(parsed.error));
-  const { cargo, tiedowns } = parsed.data;
+  return checkParsedRequest(parsed.data);
+}
+
+/**
+ * The same check of a request that `securementCheckRequestSchema` has already parsed (the
+ * API's route parses its body with it): the answer of {@link checkSecurement}, without
+ * parsing the request a second time.
+ *
+ * @example
+ * const parsed = securementCheckRequestSchema.parse(body);
+ * checkParsedRequest(parsed).pass; // as checkSecurement(body).pass
+ */
+export function checkParsedRequest(request: SecurementCheckRequestInput): SecurementCheckResult {
+  const { cargo, tiedowns } = request;
 
   const weightLb = settle(toLb(cargo.weight).value);
   const lengthFt = settle(toFeet(cargo.length).value);

@@ -34,7 +34,7 @@ export type { AssembledComponent, AssembledTiedown } from "./assembly";
 export { assembleTiedown } from "./assembly";
 export { SECUREMENT_CAUTION } from "./caution";
 export type { ComponentResult, SecurementCheckResult, TiedownResult } from "./check";
-export { HANDBOOK_MIN_TIEDOWN_WLL_LB, checkSecurement } from "./check";
+export { HANDBOOK_MIN_TIEDOWN_WLL_LB, checkParsedRequest, checkSecurement } from "./check";
 export type { RatingErrorCode } from "./errors";
 export type { FieldIssue } from "@/lib/field-issues";
 export { zodIssues } from "@/lib/field-issues";
