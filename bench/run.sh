@@ -46,6 +46,11 @@ export TRUSTED_PROXIES="127.0.0.1"
 # the load runs (whose heap V8 keeps long after), so that its peak is the import's own.
 serve() {
   stop_pid_file "$DATA/bench-app.pid" server.mts
+  for _ in $(seq 1 50); do port_taken "$BENCH_PORT" || break; sleep 0.2; done
+  if port_taken "$BENCH_PORT"; then
+    say "port $BENCH_PORT is taken by a program that is not this bench's server; set LINKYARD_BENCH_PORT to a free port"
+    exit 1
+  fi
   say "serving the build on $APP_URL for the benchmarks"
   (cd "$ROOT"; nohup node --import tsx server.mts -H 127.0.0.1 -p "$BENCH_PORT" >>"$DATA/bench-app.log" 2>&1 & echo $! >"$DATA/bench-app.pid")
   wait_for_http "$APP_URL/api/health" "$DATA/bench-app.log"
