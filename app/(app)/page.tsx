@@ -11,7 +11,7 @@ import { can } from "@/lib/auth/roles";
 import { requirePage } from "@/lib/auth/session";
 import { duePeriod, dueByWeek, gearCounts, STATUS_WORDS, TAG_OUT_REASONS, tagOutPeriod, tagOutsByMonth } from "@/lib/dashboard/charts";
 import { listKitEntries } from "@/lib/kits/kit-service";
-import { organisationClock } from "@/lib/organisations/service";
+import { principalClock } from "@/lib/organisations/service";
 import { DUE_SOON_DAYS } from "@/lib/stock/api-schemas";
 import { describeItem } from "@/lib/stock/describe";
 import { stockGlance } from "@/lib/stock/glance";
@@ -50,7 +50,7 @@ const when = <T,>(allowed: boolean, load: () => Promise<T[]>): Promise<T[]> => (
 export default async function TodayPage() {
   const principal = await requirePage();
   const org = principal.organisationId;
-  const { today, timeZone } = await organisationClock(org);
+  const { today, timeZone } = principalClock(principal);
   const tomorrow = addDays(today, 1);
   const reports = can(principal, "reports.view");
   const records = can(principal, "records.view");

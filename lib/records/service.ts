@@ -5,7 +5,7 @@ import { countRecordEvents, listRecordEvents, recordPeople, streamRecordEvents, 
 import { can } from "@/lib/auth/roles";
 import type { Principal } from "@/lib/auth/session";
 import { badRequest, forbidden, notFound } from "@/lib/http/errors";
-import { organisationClock } from "@/lib/organisations/service";
+import { principalClock } from "@/lib/organisations/service";
 import { addDays, startOfDayIn } from "@/lib/time";
 import { MAX_REPORT_EVENTS, recordPeriod, type Period, type RecordQuery } from "./query";
 
@@ -28,7 +28,7 @@ export interface RecordSelection {
  */
 export async function recordSelection(actor: Principal, q: Omit<RecordQuery, "format">): Promise<RecordSelection> {
   if (!can(actor, "records.view")) throw forbidden();
-  const { timeZone, today } = await organisationClock(actor.organisationId);
+  const { timeZone, today } = principalClock(actor);
   const asked = recordPeriod(q, today);
   if ("issue" in asked) throw badRequest(asked.issue.message, [asked.issue]);
   const { period } = asked;

@@ -3,7 +3,7 @@ import { AUDIT_HEADERS, auditFilters, auditLine, auditQuerySchema } from "@/lib/
 import { csvDownloadHeaders } from "@/lib/http/download";
 import { route } from "@/lib/http/route";
 import { csvLine } from "@/lib/import/csv-write";
-import { organisationClock } from "@/lib/organisations/service";
+import { principalClock } from "@/lib/organisations/service";
 
 /** Rows of the log a JSON page holds; `before` (the last row's number) asks for the next. */
 const PAGE = 100;
@@ -15,7 +15,7 @@ const PAGE = 100;
  */
 export const GET = route("audit.view", { query: auditQuerySchema }, async ({ principal, query }) => {
   const { format, ...asked } = query;
-  const { timeZone, today } = await organisationClock(principal.organisationId);
+  const { timeZone, today } = principalClock(principal);
   const filters = auditFilters(asked, timeZone);
   if (format === "json") {
     const rows = await listAudit(principal.organisationId, filters, PAGE);
