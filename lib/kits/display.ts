@@ -27,7 +27,8 @@ export const UNIT_SYSTEM_LABELS: Record<UnitSystem, string> = {
   metric: "Metric (kg, m)",
 };
 
-const whole = (n: number) => Math.round(n).toLocaleString("en-US");
+const WHOLE = new Intl.NumberFormat("en-US", { maximumFractionDigits: 0 });
+const whole = (n: number) => WHOLE.format(Math.round(n));
 
 /**
  * Pounds in the preferred system, with the other in brackets; kilograms to the whole kg.
