@@ -1,6 +1,6 @@
 import { listAudit, streamAudit } from "@/db/audit";
 import { AUDIT_HEADERS, auditFilters, auditLine, auditQuerySchema } from "@/lib/audit/query";
-import { csvDownloadHeaders } from "@/lib/http/download";
+import { csvDownload } from "@/lib/http/download";
 import { route } from "@/lib/http/route";
 import { csvLine } from "@/lib/import/csv-write";
 import { principalClock } from "@/lib/organisations/service";
@@ -28,28 +28,8 @@ export const GET = route("audit.view", { query: auditQuerySchema }, async ({ pri
       next: rows.length === PAGE ? rows[rows.length - 1].id : null,
     };
   }
-  const batches = streamAudit(principal.organisationId, filters);
-  const encoder = new TextEncoder();
-  let started = false;
-  const stream = new ReadableStream<Uint8Array>({
-    async pull(controller) {
-      if (!started) {
-        started = true;
-        controller.enqueue(encoder.encode("\ufeff" + csvLine([...AUDIT_HEADERS])));
-        return;
-      }
-      try {
-        const next = await batches.next();
-        if (next.done) controller.close();
-        else controller.enqueue(encoder.encode(next.value.map((r) => csvLine(auditLine(r, timeZone))).join("")));
-      } catch (error) {
-        console.error("audit export failed", error);
-        controller.error(error);
-      }
-    },
-    async cancel() {
-      await batches.return(undefined);
-    },
-  });
-  return new Response(stream, { headers: csvDownloadHeaders(`linkyard-audit-log-${today}.csv`) });
+  async function* lines() {
+    for await (const rows of streamAudit(principal.organisationId, filters)) yield rows.map((r) => csvLine(auditLine(r, timeZone))).join("");
+  }
+  return csvDownload(`linkyard-audit-log-${today}.csv`, csvLine([...AUDIT_HEADERS]), lines(), "audit");
 });

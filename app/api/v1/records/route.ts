@@ -1,4 +1,4 @@
-import { csvDownloadHeaders } from "@/lib/http/download";
+import { csvDownload } from "@/lib/http/download";
 import { route } from "@/lib/http/route";
 import { csvLine } from "@/lib/import/csv-write";
 import { recordQuerySchema } from "@/lib/records/query";
@@ -34,29 +34,9 @@ export const GET = route("records.view", { query: recordQuerySchema }, async ({ 
     };
   }
   const selection = await recordSelection(principal, asked);
-  const batches = recordBatches(principal, selection);
-  const encoder = new TextEncoder();
-  let started = false;
-  const stream = new ReadableStream<Uint8Array>({
-    async pull(controller) {
-      if (!started) {
-        started = true;
-        controller.enqueue(encoder.encode("\ufeff" + csvLine([...RECORD_HEADERS])));
-        return;
-      }
-      try {
-        const next = await batches.next();
-        if (next.done) controller.close();
-        else controller.enqueue(encoder.encode(next.value.map((e) => csvLine(recordRow(e, selection.timeZone))).join("")));
-      } catch (error) {
-        console.error("records export failed", error);
-        controller.error(error);
-      }
-    },
-    async cancel() {
-      await batches.return(undefined);
-    },
-  });
+  async function* lines() {
+    for await (const entries of recordBatches(principal, selection)) yield entries.map((e) => csvLine(recordRow(e, selection.timeZone))).join("");
+  }
   const name = selection.item ? `linkyard-record-${selection.item.tagCode}-${selection.period.to}.csv` : `linkyard-records-${selection.period.from ?? "start"}-to-${selection.period.to}.csv`;
-  return new Response(stream, { headers: csvDownloadHeaders(name) });
+  return csvDownload(name, csvLine([...RECORD_HEADERS]), lines(), "records");
 });

@@ -3,7 +3,7 @@ import { csvLine, EXPORT_HEADERS, exportRow } from "@/lib/import/csv-write";
 import { route } from "@/lib/http/route";
 import { principalClock } from "@/lib/organisations/service";
 import { itemListQuerySchema, listFilters } from "@/lib/stock/api-schemas";
-import { csvDownloadHeaders } from "@/lib/http/download";
+import { csvDownload } from "@/lib/http/download";
 import { itemVerdict } from "@/lib/stock/verdict";
 
 /**
@@ -14,30 +14,12 @@ import { itemVerdict } from "@/lib/stock/verdict";
  * a yard hand reads the stock on screen.
  */
 export const GET = route("stock.edit", { query: itemListQuerySchema }, async ({ principal, query }) => {
-  const clock = await principalClock(principal);
+  const clock = principalClock(principal);
   const { today } = clock;
-  const batches = streamItems(principal.organisationId, listFilters(query, today));
-  const encoder = new TextEncoder();
-  let started = false;
-  const stream = new ReadableStream<Uint8Array>({
-    async pull(controller) {
-      if (!started) {
-        started = true;
-        controller.enqueue(encoder.encode("\ufeff" + csvLine([...EXPORT_HEADERS])));
-        return;
-      }
-      try {
-        const next = await batches.next();
-        if (next.done) controller.close();
-        else controller.enqueue(encoder.encode(next.value.map((item) => csvLine(exportRow(item, itemVerdict(item, clock)))).join("")));
-      } catch (error) {
-        console.error("stock export failed", error);
-        controller.error(error);
-      }
-    },
-    async cancel() {
-      await batches.return(undefined);
-    },
-  });
-  return new Response(stream, { headers: csvDownloadHeaders(`linkyard-stock-${today}.csv`) });
+  async function* lines() {
+    for await (const items of streamItems(principal.organisationId, listFilters(query, today))) {
+      yield items.map((item) => csvLine(exportRow(item, itemVerdict(item, clock)))).join("");
+    }
+  }
+  return csvDownload(`linkyard-stock-${today}.csv`, csvLine([...EXPORT_HEADERS]), lines(), "stock");
 });
