@@ -69,7 +69,10 @@ export default async function AuditPage({ searchParams }: { searchParams: Promis
               const [when, , who, kind, what, concerning] = auditLine(r, timeZone);
               return (
                 <tr key={r.id} className="border-b border-idle align-top">
-                  <td className="py-2 pr-3 whitespace-nowrap"><time dateTime={new Date(r.at).toISOString()}>{when}</time></td>
+                  {/* Day over time, so that a phone's width holds the four columns. */}
+                  <td className="py-2 pr-3">
+                    <time dateTime={new Date(r.at).toISOString()}>{when.split(" ").map((part) => <span key={part} className="block whitespace-nowrap">{part}</span>)}</time>
+                  </td>
                   <td className="py-2 pr-3"><bdi>{who}</bdi></td>
                   <td className="py-2 pr-3">
                     <span className="font-bold">{what}</span>
