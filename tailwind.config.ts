@@ -22,8 +22,8 @@ export default {
         idle: { DEFAULT: "#374151", bg: "#e5e7eb" },
       },
       fontFamily: {
-        sans: ['"Atkinson Hyperlegible Next"', "system-ui", "Segoe UI", "Arial", "sans-serif"],
-        mono: ['"Atkinson Hyperlegible Mono"', "ui-monospace", "Menlo", "Consolas", "monospace"],
+        sans: ["var(--font-reading)", '"Atkinson Hyperlegible Next"', "system-ui", "Segoe UI", "Arial", "sans-serif"],
+        mono: ["var(--font-codes)", '"Atkinson Hyperlegible Mono"', "ui-monospace", "Menlo", "Consolas", "monospace"],
       },
       minHeight: { tap: "3rem" },
       minWidth: { tap: "3rem" },

@@ -7,6 +7,7 @@ import "@fontsource/atkinson-hyperlegible-mono/700.css";
 // The printed tag sheet keeps its narrow face, so that a label's words fit the tag.
 import "@fontsource/roboto-condensed/400.css";
 import "@fontsource/roboto-condensed/700.css";
+import { codes, reading } from "./fonts";
 import { ZodWithoutEval } from "@/components/providers/zod-without-eval";
 import "./globals.css";
 
@@ -21,7 +22,7 @@ export default async function RootLayout({ children }: { children: React.ReactNo
   // Every page is rendered per request: its scripts carry that answer's CSP nonce (proxy.ts).
   await connection();
   return (
-    <html lang="en">
+    <html lang="en" className={`${reading.variable} ${codes.variable}`}>
       <body className="min-h-dvh">
         <ZodWithoutEval />
         {children}

@@ -86,22 +86,26 @@ export function CameraScanner({
   return (
     <section aria-labelledby="camera-heading" className="flex flex-col gap-3">
       <h2 id="camera-heading" className="sr-only">Camera</h2>
-      <div className={`relative overflow-hidden rounded-xl border-2 border-ink bg-ink ${camera.on === "failed" ? "hidden" : ""}`}>
-        <div id={REGION_ID} className="min-h-56 w-full [&_video]:block [&_video]:w-full" data-camera={camera.on} />
-        {camera.on !== "scanning" && (
-          <div className="absolute inset-0 flex items-center justify-center p-4 text-center text-xl font-bold text-white">
-            {camera.on === "stopped" ? "Camera off" : "Starting the camera…"}
-          </div>
-        )}
+      {/* One fixed height whatever the camera does (starting, showing, off, missing), with its
+          words inside: the typed code's field below never moves under a finger about to tap it. */}
+      <div className="relative h-64 overflow-hidden rounded-xl border-2 border-ink bg-ink">
+        <div id={REGION_ID} className="h-full w-full [&_video]:block [&_video]:!h-full [&_video]:!w-full [&_video]:object-cover" data-camera={camera.on} />
+        <p
+          id="camera-status"
+          role="status"
+          aria-live="polite"
+          className={
+            camera.on === "scanning"
+              ? "absolute inset-x-0 bottom-0 bg-ink/85 p-2 text-center text-lg font-bold text-white"
+              : "absolute inset-0 flex items-center justify-center p-4 text-center text-xl font-bold text-white"
+          }
+        >
+          <span>
+            {camera.on === "failed" && <span aria-hidden="true">⚠ </span>}
+            {words}
+          </span>
+        </p>
       </div>
-      <p
-        id="camera-status"
-        role="status"
-        aria-live="polite"
-        className={`text-xl ${camera.on === "failed" ? "rounded-lg border-2 border-caution bg-caution-bg p-3 font-bold text-caution" : ""}`}
-      >
-        {words}
-      </p>
       <button type="button" onClick={toggle} className={buttonClass("secondary", "w-full")}>
         {camera.on === "scanning" || camera.on === "starting" ? "Stop camera" : "Start camera"}
       </button>
