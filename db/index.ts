@@ -29,6 +29,25 @@ function newPool(): pg.Pool {
 globalForDb.linkyardKnex = db;
 globalForDb.linkyardPool = pool;
 
+/**
+ * The first row of a hot read (the session of every signed-in request, the scan's lookup by
+ * tag code) keyed by its first binding, as a named prepared statement: PostgreSQL parses and
+ * plans it once per pooled connection instead of on every call, and the call skips Knex's
+ * query building. The SQL still comes from Knex's builder, once; the connection from Knex's pool.
+ */
+export function preparedFirst<R>(name: string, query: Knex.QueryBuilder): (key: string) => Promise<R | undefined> {
+  const { sql, bindings } = query.toSQL().toNative();
+  return async (key) => {
+    const connection: pg.PoolClient = await db.client.acquireConnection();
+    try {
+      const { rows } = await connection.query<R & pg.QueryResultRow>({ name, text: sql, values: [key, ...bindings.slice(1)] });
+      return rows[0];
+    } finally {
+      await db.client.releaseConnection(connection);
+    }
+  };
+}
+
 /** A transaction (or the pool itself) that query functions run in. */
 export type Tx = Knex;
 

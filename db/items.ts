@@ -1,6 +1,6 @@
 import type { Knex } from "knex";
 import type { ItemKind, ItemStatus } from "@/lib/stock/labels";
-import { db } from "./index";
+import { db, preparedFirst } from "./index";
 
 // Stock queries. Every function takes the organisation id and filters on it, except the
 // tag lookup, which finds the one item a printed code names. This file owns the shapes of
@@ -188,13 +188,15 @@ export async function getItemsByIds(organisationId: string, ids: string[], trx: 
   return base(trx).where("i.organisation_id", organisationId).whereIn("i.id", ids).orderBy("i.tag_code").select(ITEM_COLUMNS);
 }
 
-// The scan's lookup is the most frequent query of all: its SQL is built once, not per request.
-const BY_TAG = base().where("i.tag_code", "").first([...ITEM_COLUMNS, "i.organisation_id as organisationId"]).toSQL();
+// The scan's lookup is the most frequent query of all: built once, prepared on each connection.
+const byTag = preparedFirst<ItemRecord & { organisationId: string }>(
+  "item_by_tag",
+  base().where("i.tag_code", "").first([...ITEM_COLUMNS, "i.organisation_id as organisationId"]),
+);
 
 /** By printed tag code, in any organisation (callers check the organisation). */
-export async function findItemByTag(tagCode: string): Promise<(ItemRecord & { organisationId: string }) | undefined> {
-  const { rows } = await db.raw(BY_TAG.sql, [tagCode, ...BY_TAG.bindings.slice(1)] as Knex.RawBinding[]);
-  return rows[0];
+export function findItemByTag(tagCode: string): Promise<(ItemRecord & { organisationId: string }) | undefined> {
+  return byTag(tagCode);
 }
 
 export async function serialTaken(organisationId: string, serial: string, exceptId?: string, trx: Knex = db): Promise<boolean> {

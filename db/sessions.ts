@@ -1,5 +1,4 @@
-import type { Knex } from "knex";
-import { db } from "./index";
+import { db, preparedFirst } from "./index";
 
 // The one read every signed-in request makes: the session, its person and the person's
 // organisation (its name and time zone, which the app shell and "today" need), in one query.
@@ -20,18 +19,15 @@ export interface SessionWithUser {
   organisationName: string;
 }
 
-// Every signed-in request runs it: its SQL is built once, not per request.
-const BY_ID = db("user_sessions as s")
-  .join("users as u", "u.id", "s.user_id")
-  .join("organisations as o", "o.id", "u.organisation_id")
-  .where("s.id", "")
-  .first(
-    "s.id as sessionId", "s.user_id as userId", "s.expires_at as expiresAt", "u.email", "u.name", "u.role", "u.designated",
-    "u.organisation_id as organisationId", "u.disabled_at as disabledAt", "o.time_zone as timeZone", "o.name as organisationName",
-  )
-  .toSQL();
-
-export async function findSessionWithUser(sessionId: string): Promise<SessionWithUser | undefined> {
-  const { rows } = await db.raw(BY_ID.sql, [sessionId, ...BY_ID.bindings.slice(1)] as Knex.RawBinding[]);
-  return rows[0];
-}
+// Every signed-in request runs it: its SQL is built once and prepared on each connection.
+export const findSessionWithUser = preparedFirst<SessionWithUser>(
+  "session_with_user",
+  db("user_sessions as s")
+    .join("users as u", "u.id", "s.user_id")
+    .join("organisations as o", "o.id", "u.organisation_id")
+    .where("s.id", "")
+    .first(
+      "s.id as sessionId", "s.user_id as userId", "s.expires_at as expiresAt", "u.email", "u.name", "u.role", "u.designated",
+      "u.organisation_id as organisationId", "u.disabled_at as disabledAt", "o.time_zone as timeZone", "o.name as organisationName",
+    ),
+);
