@@ -86,8 +86,8 @@ export interface AssembledTiedown {
 
 /** The inch value used to compare chain sizes: a metric size that is a chain-table row counts as that row's inch size (10 mm ↔ 3/8 in). */
 function chainTradeInches(size: ParsedSize): number {
-  const row = CHAIN_TABLE.rows.find((r) => sizeMatchesRow(size, r));
-  return row ? row.inches : size.inches;
+  for (const r of CHAIN_TABLE.rows) if (sizeMatchesRow(size, r)) return r.inches;
+  return size.inches;
 }
 
 function tiedownName(tiedown: Tiedown, index: number): string {
@@ -98,8 +98,42 @@ function componentName(c: Component, i: number): string {
   return `component ${i + 1} (${c.label ? `"${c.label}", ` : ""}${c.type})`;
 }
 
+/** Where a finding about component `i` applies, in words (built only when there is a finding). */
+function componentWhere(tiedown: Tiedown, index: number, c: Component, i: number): string {
+  return `${tiedownName(tiedown, index)}, ${componentName(c, i)}`;
+}
+
 function parseOptionalSize(value: SizeInput | undefined): ParsedSize | undefined {
   return value === undefined ? undefined : tryParseSize(value);
+}
+
+type Writable<T> = { -readonly [K in keyof T]: T[K] };
+
+/** A rated component. Keys are set one by one, in the order the answer has always had. */
+function ratedComponent(c: Component, i: number, r: ComponentRating): AssembledComponent {
+  const out = { index: i, type: c.type } as Writable<AssembledComponent>;
+  if (c.label) out.label = c.label;
+  if (c.gearId) out.gearId = c.gearId;
+  out.description = r.description;
+  out.wllLb = r.wllLb;
+  if (r.tableWllKg !== undefined) out.tableWllKg = r.tableWllKg;
+  out.basis = r.basis;
+  out.source = r.source;
+  if (r.status !== undefined) out.status = r.status;
+  return out;
+}
+
+/** A component that could not be rated: it counts 0, with the error that says why. */
+function unratedComponent(c: Component, i: number, e: RatingError): AssembledComponent {
+  const out = { index: i, type: c.type } as Writable<AssembledComponent>;
+  if (c.label) out.label = c.label;
+  if (c.gearId) out.gearId = c.gearId;
+  out.description = c.label ? `"${c.label}" ${c.type}` : c.type;
+  out.wllLb = 0;
+  out.basis = "not-rated";
+  out.source = e.code === "MISSING_WLL" ? SOURCES.assemblyWll : "49 CFR 393.108";
+  out.error = { code: e.code, message: e.message, nearest: [...e.nearest] };
+  return out;
 }
 
 /**
@@ -113,56 +147,52 @@ function parseOptionalSize(value: SizeInput | undefined): ParsedSize | undefined
  * t.limitedBy; // "anchor"
  */
 export function assembleTiedown(tiedown: Tiedown, index = 0): AssembledTiedown {
-  const name = tiedownName(tiedown, index);
   const base = `tiedowns.${index}`;
   const findings: Finding[] = [];
   const components: AssembledComponent[] = [];
+  const parts = tiedown.components;
 
-  tiedown.components.forEach((c, i) => {
-    const where = `${name}, ${componentName(c, i)}`;
-    const meta = { index: i, type: c.type, ...(c.label ? { label: c.label } : {}), ...(c.gearId ? { gearId: c.gearId } : {}) };
+  for (let i = 0; i < parts.length; i++) {
+    const c = parts[i]!;
+    let r: ComponentRating;
     try {
-      const r = componentWll(c);
-      components.push({
-        ...meta,
-        description: r.description,
-        wllLb: r.wllLb,
-        ...(r.tableWllKg === undefined ? {} : { tableWllKg: r.tableWllKg }),
-        basis: r.basis,
-        source: r.source,
-        ...(r.status === undefined ? {} : { status: r.status }),
-      });
-      for (const f of r.findings) {
-        const { field, ...rest } = f;
-        findings.push({ ...rest, ...said(where, f.message), tiedown: index, component: i, path: `${base}.components.${i}${field ? `.${field}` : ""}` });
-      }
+      r = componentWll(c);
     } catch (e) {
       if (!(e instanceof RatingError)) throw e;
-      components.push({
-        ...meta,
-        description: c.label ? `"${c.label}" ${c.type}` : c.type,
-        wllLb: 0,
-        basis: "not-rated",
-        source: e.code === "MISSING_WLL" ? SOURCES.assemblyWll : "49 CFR 393.108",
-        error: { code: e.code, message: e.message, nearest: [...e.nearest] },
-      });
+      components.push(unratedComponent(c, i, e));
       findings.push({
         code: e.code,
         severity: "fail",
-        ...said(where, `${e.message}. The tiedown counts 0 toward the aggregate until it is corrected`),
+        ...said(componentWhere(tiedown, index, c, i), `${e.message}. The tiedown counts 0 toward the aggregate until it is corrected`),
         source: e.code === "MISSING_WLL" ? SOURCES.assemblyWll : "49 CFR 393.108",
         tiedown: index,
         component: i,
         path: `${base}.components.${i}${e.field ? `.${e.field}` : ""}`,
       });
+      continue;
     }
-  });
+    components.push(ratedComponent(c, i, r));
+    if (r.findings.length === 0) continue;
+    const where = componentWhere(tiedown, index, c, i);
+    for (const f of r.findings) {
+      findings.push({
+        code: f.code,
+        severity: f.severity,
+        message: `${where}: ${f.message}`,
+        source: f.source,
+        detail: f.message,
+        tiedown: index,
+        component: i,
+        path: `${base}.components.${i}${f.field ? `.${f.field}` : ""}`,
+      });
+    }
+  }
 
   // A binder outside its chain-size range cannot seat the chain and its marking is not a
   // rating for that chain: the binder is not rated, so the tiedown counts 0.
-  const chains = chainFacts(tiedown.components);
-  for (const p of binderPairings(tiedown.components, chains)) {
-    const binderWhere = `${name}, ${componentName(tiedown.components[p.binder]!, p.binder)}`;
+  const chains = chainFacts(parts);
+  for (const p of binderPairings(parts, chains)) {
+    const binderWhere = componentWhere(tiedown, index, parts[p.binder]!, p.binder);
     if (p.range === undefined) {
       findings.push({
         code: "BINDER_RANGE_NOT_GIVEN",
@@ -196,16 +226,20 @@ export function assembleTiedown(tiedown: Tiedown, index = 0): AssembledTiedown {
     });
   }
 
-  const rated = components.every((c) => c.basis !== "not-rated");
+  // The lowest WLL limits the tiedown (the first of equals); an unrated part makes it 0.
+  let rated = true;
   let limiting: AssembledComponent | undefined;
-  if (!rated) {
-    limiting = components.find((c) => c.basis === "not-rated");
-  } else {
-    for (const c of components) if (!limiting || c.wllLb < limiting.wllLb) limiting = c;
+  for (const c of components) {
+    if (c.basis === "not-rated") {
+      if (rated) limiting = c;
+      rated = false;
+    } else if (rated && (!limiting || c.wllLb < limiting.wllLb)) {
+      limiting = c;
+    }
   }
   const wllLb = rated && limiting ? limiting.wllLb : 0;
 
-  findings.push(...compatibility(tiedown, index, name, chains));
+  compatibility(tiedown, index, chains, findings);
 
   return {
     wllLb,
@@ -231,13 +265,14 @@ interface ChainFact {
 }
 
 function chainFacts(parts: readonly Component[]): ChainFact[] {
-  return parts
-    .map((c, i) => ({ c, i }))
-    .filter((x): x is { c: Extract<Component, { type: "chain" }>; i: number } => x.c.type === "chain")
-    .map(({ c, i }) => {
-      const size = parseOptionalSize(c.size);
-      return { i, size, inches: size ? chainTradeInches(size) : undefined, grade: c.marked === false || c.grade === undefined ? undefined : parseGrade(c.grade) };
-    });
+  const out: ChainFact[] = [];
+  for (let i = 0; i < parts.length; i++) {
+    const c = parts[i]!;
+    if (c.type !== "chain") continue;
+    const size = parseOptionalSize(c.size);
+    out.push({ i, size, inches: size ? chainTradeInches(size) : undefined, grade: c.marked === false || c.grade === undefined ? undefined : parseGrade(c.grade) });
+  }
+  return out;
 }
 
 interface BinderPairing {
@@ -252,79 +287,107 @@ interface BinderPairing {
 /** Each binder with each chain of known size in the same tiedown. */
 function binderPairings(parts: readonly Component[], chains: readonly ChainFact[]): BinderPairing[] {
   const out: BinderPairing[] = [];
-  parts.forEach((c, i) => {
-    if (c.type !== "binder") return;
+  if (chains.length === 0) return out;
+  for (let i = 0; i < parts.length; i++) {
+    const c = parts[i]!;
+    if (c.type !== "binder") continue;
     const lo = c.chainSizeRange ? tryParseSize(c.chainSizeRange[0]) : undefined;
     const hi = c.chainSizeRange ? tryParseSize(c.chainSizeRange[1]) : undefined;
-    const range = lo && hi ? ([lo, hi].sort((a, b) => chainTradeInches(a) - chainTradeInches(b)) as [ParsedSize, ParsedSize]) : undefined;
-    if (c.chainSizeRange && !range) return; // unreadable: the schema refuses it before this
+    let range: [ParsedSize, ParsedSize] | undefined;
+    let from = 0;
+    let to = 0;
+    if (lo && hi) {
+      // Smallest first; two equal sizes keep the order written.
+      const a = chainTradeInches(lo);
+      const b = chainTradeInches(hi);
+      range = b < a ? [hi, lo] : [lo, hi];
+      from = Math.min(a, b);
+      to = Math.max(a, b);
+    }
+    if (c.chainSizeRange && !range) continue; // unreadable: the schema refuses it before this
     for (const chain of chains) {
       if (!chain.size || chain.inches === undefined) continue;
-      const fits = range === undefined || (chain.inches >= chainTradeInches(range[0]) - 1e-9 && chain.inches <= chainTradeInches(range[1]) + 1e-9);
+      const fits = range === undefined || (chain.inches >= from - 1e-9 && chain.inches <= to + 1e-9);
       out.push({ binder: i, chainIndex: chain.i, chain: chain.size, range, fits });
     }
-  });
+  }
   return out;
 }
 
-function compatibility(tiedown: Tiedown, index: number, name: string, chains: readonly ChainFact[]): Finding[] {
-  const out: Finding[] = [];
+/** How many different values a list holds (the lists here have a handful of entries). */
+function distinct(values: readonly number[]): number {
+  let n = 0;
+  for (let i = 0; i < values.length; i++) if (values.indexOf(values[i]!) === i) n++;
+  return n;
+}
+
+function compatibility(tiedown: Tiedown, index: number, chains: readonly ChainFact[], out: Finding[]): void {
   const base = `tiedowns.${index}`;
   const parts = tiedown.components;
+  let material = false;
+  let anchor = false;
+  for (const c of parts) {
+    if ((TIEDOWN_MATERIALS as readonly string[]).includes(c.type)) material = true;
+    if (c.type === "anchor") anchor = true;
+  }
 
-  if (!parts.some((c) => (TIEDOWN_MATERIALS as readonly string[]).includes(c.type))) {
+  if (!material) {
     out.push({
       code: "NO_TIEDOWN_MATERIAL",
       severity: "warn",
-      ...said(name, "No chain, webbing, wire rope, rope or steel strapping is listed; the tiedown's WLL is taken from the parts listed only"),
+      ...said(tiedownName(tiedown, index), "No chain, webbing, wire rope, rope or steel strapping is listed; the tiedown's WLL is taken from the parts listed only"),
       source: SOURCES.assemblyWll,
       tiedown: index,
       path: `${base}.components`,
     });
   }
-  if (!parts.some((c) => c.type === "anchor")) {
+  if (!anchor) {
     out.push({
       code: "ANCHOR_NOT_LISTED",
       severity: "warn",
-      ...said(name, "No anchor point is listed. A tiedown's WLL is the lower of its parts and the anchor points it is attached to; add the anchor point's WLL so it is taken into account"),
+      ...said(tiedownName(tiedown, index), "No anchor point is listed. A tiedown's WLL is the lower of its parts and the anchor points it is attached to; add the anchor point's WLL so it is taken into account"),
       source: SOURCES.assemblyWll,
       tiedown: index,
       path: `${base}.components`,
     });
   }
 
-  const sizes = new Set(chains.map((c) => c.inches).filter((x) => x !== undefined));
-  const grades = new Set(chains.map((c) => c.grade).filter((x) => x !== undefined));
-  if (sizes.size > 1 || grades.size > 1) {
+  const chainSizes: number[] = [];
+  const chainGrades: number[] = [];
+  for (const x of chains) {
+    if (x.inches !== undefined) chainSizes.push(x.inches);
+    if (x.grade !== undefined) chainGrades.push(x.grade);
+  }
+  const sizes = distinct(chainSizes);
+  const grades = distinct(chainGrades);
+  if (sizes > 1 || grades > 1) {
     out.push({
       code: "MIXED_CHAIN_IN_TIEDOWN",
       severity: "warn",
-      ...said(name, `Chains of different ${sizes.size > 1 ? "sizes" : "grades"}${sizes.size > 1 && grades.size > 1 ? " and grades" : ""} are joined; the weakest one sets the tiedown's WLL, and parts are usually matched to one chain size and grade`),
+      ...said(tiedownName(tiedown, index), `Chains of different ${sizes > 1 ? "sizes" : "grades"}${sizes > 1 && grades > 1 ? " and grades" : ""} are joined; the weakest one sets the tiedown's WLL, and parts are usually matched to one chain size and grade`),
       source: SOURCES.commonPractice,
       tiedown: index,
       path: `${base}.components`,
     });
   }
 
-  parts.forEach((c, i) => {
+  if (chainGrades.length === 0) return;
+  const top = Math.max(...chainGrades);
+  for (let i = 0; i < parts.length; i++) {
+    const c = parts[i]!;
     if ((c.type === "hook" || c.type === "shackle") && c.grade !== undefined) {
       const fittingGrade = parseGrade(c.grade);
-      const chainGrades = chains.map((x) => x.grade).filter((g): g is number => g !== undefined);
-      if (fittingGrade !== undefined && chainGrades.length > 0) {
-        const top = Math.max(...chainGrades);
-        if (fittingGrade < top) {
-          out.push({
-            code: "FITTING_GRADE_BELOW_CHAIN",
-            severity: "warn",
-            ...said(`${name}, ${componentName(c, i)}`, `The grade ${fittingGrade} ${c.type} is a lower grade than the grade ${top} chain; it limits the tiedown to its own WLL, and fittings are usually matched to the chain's grade`),
-            source: SOURCES.commonPractice,
-            tiedown: index,
-            component: i,
-            path: `${base}.components.${i}.grade`,
-          });
-        }
+      if (fittingGrade !== undefined && fittingGrade < top) {
+        out.push({
+          code: "FITTING_GRADE_BELOW_CHAIN",
+          severity: "warn",
+          ...said(componentWhere(tiedown, index, c, i), `The grade ${fittingGrade} ${c.type} is a lower grade than the grade ${top} chain; it limits the tiedown to its own WLL, and fittings are usually matched to the chain's grade`),
+          source: SOURCES.commonPractice,
+          tiedown: index,
+          component: i,
+          path: `${base}.components.${i}.grade`,
+        });
       }
     }
-  });
-  return out;
+  }
 }

@@ -139,6 +139,27 @@ function securesMachine(secures: string | undefined): boolean {
   return secures === undefined || secures.toLowerCase() === "machine";
 }
 
+/**
+ * A component of the answer: its WLL rounded, with its kg twin last. Keys are copied one by
+ * one in the order of the assembly's answer (a spread of objects of many shapes is slow).
+ */
+function componentResult(c: AssembledComponent): ComponentResult {
+  const out = { index: c.index, type: c.type } as Writable<ComponentResult>;
+  if (c.label !== undefined) out.label = c.label;
+  if (c.gearId !== undefined) out.gearId = c.gearId;
+  out.description = c.description;
+  out.wllLb = lb(c.wllLb);
+  if (c.tableWllKg !== undefined) out.tableWllKg = c.tableWllKg;
+  out.basis = c.basis;
+  out.source = c.source;
+  if (c.status !== undefined) out.status = c.status;
+  if (c.error !== undefined) out.error = c.error;
+  out.wllKg = kg(c.wllLb);
+  return out;
+}
+
+type Writable<T> = { -readonly [K in keyof T]: T[K] };
+
 function plural(n: number, word: string): string {
   return `${n} ${word}${n === 1 ? "" : "s"}`;
 }
@@ -193,17 +214,23 @@ export function checkParsedRequest(request: SecurementCheckRequestInput): Secure
   const findings: Finding[] = [];
 
   // Tiedowns: assembly (393.108(a)) and what each counts (393.106(d)).
-  const assembled = tiedowns.map((t, i) => assembleTiedown(t, i));
-  const results: TiedownResult[] = tiedowns.map((t, i) => {
-    const a = assembled[i]!;
-    findings.push(...a.findings);
+  const exactWll: number[] = [];
+  const results: TiedownResult[] = [];
+  let aggregate = 0;
+  for (let i = 0; i < tiedowns.length; i++) {
+    const t = tiedowns[i]!;
+    const a = assembleTiedown(t, i);
+    for (const f of a.findings) findings.push(f);
     const counted = countedWll(a.wllLb, t.attachment);
-    const secures = t.secures ?? "machine";
-    return {
+    exactWll.push(a.wllLb);
+    aggregate += counted;
+    const components: ComponentResult[] = [];
+    for (const c of a.components) components.push(componentResult(c));
+    results.push({
       index: i,
       label: t.label ?? `tiedown ${i + 1}`,
       attachment: t.attachment,
-      secures,
+      secures: t.secures ?? "machine",
       wllLb: lb(a.wllLb),
       wllKg: kg(a.wllLb),
       countedWllLb: lb(counted),
@@ -214,14 +241,12 @@ export function checkParsedRequest(request: SecurementCheckRequestInput): Secure
       limitedByLabel: a.limitedByLabel,
       rated: a.rated,
       countsTowardMinimum: securesMachine(t.secures),
-      components: a.components.map((c) => ({ ...c, wllLb: lb(c.wllLb), wllKg: kg(c.wllLb) })),
-    };
-  });
-  const exactWll = tiedowns.map((t, i) => ({ wllLb: assembled[i]!.wllLb, attachment: t.attachment }));
+      components,
+    });
+  }
 
   // Aggregate WLL, 49 CFR 393.106(d).
   const required = requiredAggregateWll(weightLb);
-  const aggregate = exactWll.reduce((s, t) => s + countedWll(t.wllLb, t.attachment), 0);
   if (!meetsAggregate(aggregate, required)) {
     findings.push({
       code: "AGGREGATE_WLL_BELOW_REQUIRED",
@@ -260,7 +285,7 @@ export function checkParsedRequest(request: SecurementCheckRequestInput): Secure
 
   // FMCSA Driver's Handbook, ch. 10: four tiedowns of at least 5,000 lb each (guidance).
   if (heavy) {
-    const strong = onMachine.filter((t) => exactWll[t.index]!.wllLb + 1e-6 >= HANDBOOK_MIN_TIEDOWN_WLL_LB);
+    const strong = onMachine.filter((t) => exactWll[t.index]! + 1e-6 >= HANDBOOK_MIN_TIEDOWN_WLL_LB);
     if (strong.length < HEAVY_MACHINE_MIN_TIEDOWNS) {
       const weak = onMachine.filter((t) => !strong.includes(t));
       findings.push({

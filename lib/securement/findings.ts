@@ -120,7 +120,7 @@ export const SOURCES = {
   edgeProtection: "Common practice (FMCSA cargo securement rules brochure, 2002: edge protection where a tiedown could be cut or abraded)",
 } as const;
 
-const ORDER: Readonly<Record<Severity, number>> = { fail: 0, warn: 1, info: 2 };
+const SEVERITIES: readonly Severity[] = ["fail", "warn", "info"];
 
 /**
  * Sorts findings fail → warn → info, keeping the order of emission within a severity.
@@ -130,8 +130,8 @@ const ORDER: Readonly<Record<Severity, number>> = { fail: 0, warn: 1, info: 2 };
  * sortFindings([{ severity: "info", ... }, { severity: "fail", ... }]); // fail first
  */
 export function sortFindings(findings: readonly Finding[]): Finding[] {
-  return findings
-    .map((f, i) => [f, i] as const)
-    .sort((a, b) => ORDER[a[0].severity] - ORDER[b[0].severity] || a[1] - b[1])
-    .map(([f]) => f);
+  // Three passes in emission order: a stable sort by severity without sorting.
+  const out: Finding[] = [];
+  for (const severity of SEVERITIES) for (const f of findings) if (f.severity === severity) out.push(f);
+  return out;
 }

@@ -82,9 +82,27 @@ export function parseGrade(input: GradeInput): number | undefined {
   return n > 0 ? n : undefined;
 }
 
-function markDigits(input: GradeInput): string | undefined {
+function readMark(input: GradeInput): string | undefined {
   const text = String(input).trim().toLowerCase().replace(/^(?:grade|gr\.?|g)\s*/, "");
   return /^\d+$/.test(text) ? String(Number(text)) : undefined;
+}
+
+// A check reads the same grade ("70", "G70") several times per tiedown (the schema, the
+// description, the table, the fittings): each reading is kept, short texts and numbers only,
+// dropped all at once when full. Strings are immutable, so a kept answer cannot be changed.
+const MARK_CACHE_LIMIT = 500;
+const MARK_KEY_MAX = 32;
+const markCache = new Map<GradeInput, string | null>();
+
+function markDigits(input: GradeInput): string | undefined {
+  const hit = markCache.get(input);
+  if (hit !== undefined) return hit ?? undefined;
+  const mark = readMark(input);
+  if (typeof input === "number" || (typeof input === "string" && input.length <= MARK_KEY_MAX)) {
+    if (markCache.size >= MARK_CACHE_LIMIT) markCache.clear();
+    markCache.set(input, mark ?? null);
+  }
+  return mark;
 }
 
 /** Marks that are read as another grade than their own number, and why. */

@@ -119,19 +119,10 @@ function invalid(input: string): RatingError {
   );
 }
 
-/**
- * Reads a size. A number, or a string without a unit, means inches.
- *
- * @throws {RatingError} `INVALID_SIZE` when the text cannot be read or the value is not above 0.
- * @example
- * parseSize("3/8\"").label;   // "3/8"
- * parseSize("10mm").display;  // "10 mm"
- * parseSize(50).display;      // "50 in"
- * parseSize("0.375").label;   // "3/8"
- */
-export function parseSize(input: SizeInput): ParsedSize {
+/** Reads a size, or returns `null` when it cannot be read (never throws, for a string or a number). */
+function readSize(input: SizeInput): ParsedSize | null {
   if (typeof input === "number") {
-    if (!Number.isFinite(input) || input <= 0) throw invalid(String(input));
+    if (!Number.isFinite(input) || input <= 0) return null;
     const label = inchLabel(input);
     return { input: String(input), system: "inch", inches: input, mm: input * MM_PER_IN, label, display: `${label} in` };
   }
@@ -143,7 +134,7 @@ export function parseSize(input: SizeInput): ParsedSize {
   );
   text = text.replace(/\s+/g, " ").trim();
   const m = SIZE_RE.exec(text);
-  if (!m) throw invalid(original);
+  if (!m) return null;
   const [, mixedWhole, mixedNum, mixedDen, fracNum, fracDen, decimal, unitRaw] = m;
   const metric = unitRaw !== undefined && unitRaw.startsWith("m");
 
@@ -153,19 +144,19 @@ export function parseSize(input: SizeInput): ParsedSize {
     const whole = Number(mixedWhole);
     const n = Number(mixedNum);
     const d = Number(mixedDen);
-    if (d === 0 || n >= d) throw invalid(original);
+    if (d === 0 || n >= d) return null;
     value = whole + n / d;
     label = fractionLabel(whole * d + n, d);
   } else if (fracNum !== undefined) {
     const n = Number(fracNum);
     const d = Number(fracDen);
-    if (d === 0) throw invalid(original);
+    if (d === 0) return null;
     value = n / d;
     label = n === 0 ? undefined : fractionLabel(n, d);
   } else {
     value = Number(decimal);
   }
-  if (!Number.isFinite(value) || value <= 0) throw invalid(original);
+  if (!Number.isFinite(value) || value <= 0) return null;
 
   if (metric) {
     const mmLabel = `${decimalLabel(value)} mm`;
@@ -175,19 +166,54 @@ export function parseSize(input: SizeInput): ParsedSize {
   return { input: original, system: "inch", inches: value, mm: value * MM_PER_IN, label: inchText, display: `${inchText} in` };
 }
 
+// The same few sizes ("3/8 in", "5/16 in") come back in every tiedown of every check, and
+// reading one takes four regular expressions: each answer is kept, frozen so no caller can
+// change it for the next. Only short texts and numbers are kept (a schema allows 40
+// characters), and the whole cache is dropped when it is full, so odd input cannot grow it
+// without bound. It holds nothing but what the text means: no state between requests.
+const SIZE_CACHE_LIMIT = 2000;
+const SIZE_KEY_MAX = 64;
+const sizeCache = new Map<SizeInput, ParsedSize | null>();
+
+function cachedSize(input: SizeInput): ParsedSize | null {
+  const hit = sizeCache.get(input);
+  if (hit !== undefined) return hit;
+  const read = readSize(input);
+  const size = read === null ? null : Object.freeze(read);
+  if (typeof input === "number" || input.length <= SIZE_KEY_MAX) {
+    if (sizeCache.size >= SIZE_CACHE_LIMIT) sizeCache.clear();
+    sizeCache.set(input, size);
+  }
+  return size;
+}
+
 /**
- * Reads a size, or returns `undefined` when it cannot be read.
+ * Reads a size. A number, or a string without a unit, means inches. The answer is frozen
+ * (the same reading is shared by every caller that reads the same text).
+ *
+ * @throws {RatingError} `INVALID_SIZE` when the text cannot be read or the value is not above 0.
+ * @example
+ * parseSize("3/8\"").label;   // "3/8"
+ * parseSize("10mm").display;  // "10 mm"
+ * parseSize(50).display;      // "50 in"
+ * parseSize("0.375").label;   // "3/8"
+ */
+export function parseSize(input: SizeInput): ParsedSize {
+  const size = cachedSize(input);
+  if (size === null) throw invalid(typeof input === "number" ? String(input) : input.trim());
+  return size;
+}
+
+/**
+ * Reads a size, or returns `undefined` when it cannot be read (or is not a string or a number).
  *
  * @example
  * tryParseSize("3/8");   // { ..., label: "3/8" }
  * tryParseSize("large"); // undefined
  */
 export function tryParseSize(input: SizeInput): ParsedSize | undefined {
-  try {
-    return parseSize(input);
-  } catch {
-    return undefined;
-  }
+  if (typeof input !== "string" && typeof input !== "number") return undefined;
+  return cachedSize(input) ?? undefined;
 }
 
 /**
