@@ -46,3 +46,24 @@ describe("parseGrade", () => {
     expect([...CHAIN_GRADES]).toEqual([30, 43, 70, 80, 100]);
   });
 });
+
+describe("grade marks are read once", () => {
+  it("gives each mark its own grade, however often it is read", () => {
+    for (let i = 0; i < 2; i++) {
+      expect(parseGrade("4")).toBe(43);
+      expect(parseGrade("40")).toBe(43);
+      expect(parseGrade(7)).toBe(70);
+      expect(parseGrade("G8")).toBe(80);
+      expect(parseGrade(" 120 ")).toBe(120);
+      expect(parseGrade("alloy")).toBeUndefined();
+      expect(gradeMarkNote("G40")).toMatch(/^Grade mark "G40" is read as grade 43/);
+      expect(gradeMarkNote("G43")).toBeUndefined();
+    }
+  });
+
+  it("still reads right after more marks than it keeps", () => {
+    for (let n = 1001; n <= 2000; n++) expect(parseGrade(`G${n}`)).toBe(n); // 1000 and below include marks (300, 700, ...)
+    expect(parseGrade("G7")).toBe(70);
+    expect(parseGrade(`G${"0".repeat(50)}7`)).toBe(70); // too long to keep, read all the same
+  });
+});

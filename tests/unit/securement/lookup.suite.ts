@@ -66,3 +66,47 @@ describe("defaultRating", () => {
   });
 });
 
+
+describe("defaultRating keeps its answers", () => {
+  it("gives each query its own answer", () => {
+    for (let i = 0; i < 2; i++) {
+      expect(defaultRating({ material: "chain", grade: 70, size: "3/8" }).wllLb).toBe(6600);
+      expect(defaultRating({ material: "chain", grade: 80, size: "3/8" }).wllLb).toBe(7100);
+      expect(defaultRating({ material: "chain", grade: 70, size: "1/2" }).wllLb).toBe(11300);
+      expect(defaultRating({ material: "chain", size: "3/8" })).toMatchObject({ wllLb: 2650, basis: "unmarked-rule", grade: 30 });
+      expect(defaultRating({ material: "chain", grade: "G40", size: "3/8" })).toMatchObject({ grade: 43, notes: [expect.stringContaining("G40")] });
+      expect(defaultRating({ material: "chain", grade: 43, size: "3/8" }).notes).toBeUndefined();
+      expect(defaultRating({ material: "wire-rope", size: "3/8" }).wllLb).toBe(3000);
+      expect(defaultRating({ material: "rope", fibre: "manila", size: "3/8" }).wllLb).toBe(205);
+      expect(defaultRating({ material: "rope", size: "3/8" })).toMatchObject({ wllLb: 400, fibre: "polypropylene" });
+      expect(defaultRating({ material: "webbing", width: "4" }).wllLb).toBe(4000);
+      expect(defaultRating({ material: "webbing", width: "2" }).wllLb).toBe(2000);
+      expect(defaultRating({ material: "steel-strapping", width: "1 1/4", thickness: "0.029" }).wllLb).toBe(1190);
+      expect(defaultRating({ material: "steel-strapping", width: "2", thickness: "0.044" }).wllLb).toBe(2650);
+    }
+  });
+
+  it("answers a frozen rating, notes and all, that a caller cannot change for the next", () => {
+    const first = defaultRating({ material: "rope", size: "1/2" });
+    expect(Object.isFrozen(first)).toBe(true);
+    expect(Object.isFrozen(first.notes)).toBe(true);
+    expect(() => {
+      (first as { wllLb: number }).wllLb = 1;
+    }).toThrow(TypeError);
+    expect(() => (first.notes as string[]).push("changed")).toThrow(TypeError);
+    expect(defaultRating({ material: "rope", size: "1/2" })).toMatchObject({ wllLb: 625, notes: [expect.stringContaining("315 lb (150 kg)")] });
+    expect(defaultRating({ material: "rope", size: "1/2" }).notes).toHaveLength(1);
+  });
+
+  it("refuses a size not in the table every time", () => {
+    for (let i = 0; i < 2; i++) expect(ratingError(() => defaultRating({ material: "chain", grade: 70, size: "9/16" })).nearest).toEqual(["1/2 in", "5/8 in"]);
+  });
+
+  it("still answers right after more queries than it keeps, and sizes too long to keep", () => {
+    const sizes = [["1/4", 3150], ["5/16", 4700], ["3/8", 6600], ["7/16", 8750], ["1/2", 11300], ["5/8", 15800]] as const;
+    for (let pad = 0; pad < 300; pad++) {
+      for (const [size, lb] of sizes) expect(defaultRating({ material: "chain", grade: 70, size: `${size}${" ".repeat(pad)}` }).wllLb).toBe(lb);
+    }
+    expect(defaultRating({ material: "chain", grade: 70, size: "3/8" }).wllLb).toBe(6600);
+  });
+});

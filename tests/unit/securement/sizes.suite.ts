@@ -128,3 +128,51 @@ describe("matching a size to a table row", () => {
     expect(() => findRow(parseSize("13 in"), CHAIN_ROWS, TITLE)).not.toThrowError(/write/);
   });
 });
+
+describe("parseSize keeps its readings", () => {
+  it("gives each text its own reading, the same text the same one", () => {
+    const plain = parseSize("3/8");
+    const withUnit = parseSize("3/8 in");
+    const metric = parseSize("10 mm");
+    const number = parseSize(0.375);
+    expect(plain.input).toBe("3/8");
+    expect(withUnit.input).toBe("3/8 in");
+    expect(metric).toMatchObject({ system: "metric", mm: 10, display: "10 mm" });
+    expect(number).toMatchObject({ input: "0.375", system: "inch", label: "3/8" });
+    // "10" as text and 10 as a number are both inches, but not the same reading as "10 mm"
+    expect(parseSize("10").system).toBe("inch");
+    expect(parseSize(10).system).toBe("inch");
+    expect(parseSize("3/8")).toBe(plain);
+  });
+
+  it("answers a frozen reading that a caller cannot change for the next", () => {
+    const first = parseSize("1-3/4 in");
+    expect(Object.isFrozen(first)).toBe(true);
+    expect(() => {
+      (first as { inches: number }).inches = 99;
+    }).toThrow(TypeError);
+    expect(parseSize("1-3/4 in")).toMatchObject({ inches: 1.75, label: "1 3/4", display: "1 3/4 in" });
+  });
+
+  it("refuses an unreadable text every time, naming it", () => {
+    for (let i = 0; i < 2; i++) {
+      expect(() => parseSize(" 3/8 foo ")).toThrow(RatingError);
+      expect(() => parseSize(" 3/8 foo ")).toThrow('Cannot read the size "3/8 foo"');
+      expect(tryParseSize(" 3/8 foo ")).toBeUndefined();
+    }
+    expect(() => parseSize(-1)).toThrow('Cannot read the size "-1"');
+  });
+
+  it("still reads right after more texts than it keeps, and texts too long to keep", () => {
+    for (let n = 1; n <= 5000; n++) expect(parseSize(`${n}/64 in`).inches).toBe(n / 64);
+    expect(parseSize("1/64 in").inches).toBe(1 / 64);
+    const long = `${" ".repeat(100)}5/16${" ".repeat(100)}`;
+    expect(parseSize(long)).toMatchObject({ input: "5/16", inches: 0.3125 });
+    expect(parseSize(long)).toMatchObject({ input: "5/16", inches: 0.3125 });
+  });
+
+  it("tryParseSize answers undefined for what is not a string or a number", () => {
+    expect(tryParseSize(null as unknown as string)).toBeUndefined();
+    expect(tryParseSize({} as unknown as string)).toBeUndefined();
+  });
+});
