@@ -1,5 +1,5 @@
 import { TZDate } from "@date-fns/tz";
-import { addDays as addCalendarDays, addMonths as addCalendarMonths, differenceInCalendarDays, format, startOfWeek } from "date-fns";
+import { addMonths as addCalendarMonths, differenceInCalendarDays, format, startOfWeek } from "date-fns";
 
 // One "today", and every date and time shown to a person, in the organisation's time zone
 // (an IANA name such as "America/Chicago"). Calendar dates (inspection due, in service since)
@@ -59,7 +59,10 @@ export function todayIn(zone: string, now: Date = new Date()): string {
  * @example addDays("2026-01-31", 30) // "2026-03-02"
  */
 export function addDays(day: string, days: number): string {
-  return format(addCalendarDays(calendarDay(day), days), "yyyy-MM-dd");
+  // Plain UTC arithmetic: a calendar date has no zone, UTC has no clock changes, and a Date is
+  // some 50 times quicker than a TZDate and format (an import adds days for every new item).
+  const [y, m, d] = day.split("-").map(Number);
+  return new Date(Date.UTC(y, m - 1, d + days)).toISOString().slice(0, 10);
 }
 
 /**
