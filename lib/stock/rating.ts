@@ -42,12 +42,32 @@ export function itemComponent(item: RatableItem): Component {
   }
 }
 
+// A rating depends on a few values only, and a stock list repeats the same few kinds, grades
+// and sizes thousands of times (an import rates each row twice: in the item schema and for
+// the stored fields), so answers are kept by those values. Bounded: past the limit the
+// memory starts over. Answers are frozen, as they are shared.
+const MEMO_LIMIT = 2000;
+const memo = new Map<string, ItemRating>();
+
 /**
  * The effective WLL of an item: its marking, or the published default for unmarked
  * material (49 CFR 393.108(b)–(e)), with the engine's warnings.
  * @example itemRating({ kind: "chain", grade: 70, gradeMarked: true, size: "3/8", markedWllLb: null }).wllLb // 6600
  */
 export function itemRating(item: RatableItem): ItemRating {
+  const range = item.details?.chainSizeRange;
+  const key = `${item.kind}|${item.grade}|${item.gradeMarked}|${item.size}|${item.markedWllLb}|${range ? `${range[0]}|${range[1]}` : ""}`;
+  let rating = memo.get(key);
+  if (!rating) {
+    if (memo.size >= MEMO_LIMIT) memo.clear();
+    rating = Object.freeze(rateItem(item));
+    Object.freeze(rating.warnings);
+    memo.set(key, rating);
+  }
+  return rating;
+}
+
+function rateItem(item: RatableItem): ItemRating {
   let rating: ReturnType<typeof componentWll>;
   try {
     rating = componentWll(itemComponent(item));
