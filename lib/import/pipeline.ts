@@ -1,6 +1,7 @@
 // The import of one file, row by row in chunks, with the organisation's stock reached only
 // through an ImportStore (the database in the app, a Map in the tests). Memory holds one
-// chunk of rows, the first errors (capped) and a few preview rows, whatever the file's size.
+// chunk of rows, the first errors (capped), a few preview rows and the keys (serials, tag
+// codes, items) seen so far with their line.
 import { gradeMarkNote } from "@/lib/securement";
 import type { ItemInput } from "@/lib/stock/schemas";
 import { describeItem } from "@/lib/stock/describe";
@@ -43,6 +44,24 @@ export interface ImportStore {
   rejected?(fields: readonly string[], messages: string[]): Promise<void>;
   /** Rows read so far, for the progress shown while a large file goes in. */
   progress?(rows: number): Promise<void>;
+}
+
+/**
+ * The keys of a file seen so far, in memory: for a file at the size limit (some 500,000
+ * rows) a few tens of MB, against a round trip to the database for every chunk.
+ * @example const firstSeen = keysSeenInMemory(); await firstSeen([{ key: "s:A1", line: 2 }]); await firstSeen([{ key: "s:A1", line: 9 }]) // Map { "s:A1" => 2 }
+ */
+export function keysSeenInMemory(): ImportStore["firstSeen"] {
+  const seen = new Map<string, number>();
+  return async (entries) => {
+    const earlier = new Map<string, number>();
+    for (const { key, line } of entries) {
+      const first = seen.get(key);
+      if (first === undefined) seen.set(key, line);
+      else earlier.set(key, first);
+    }
+    return earlier;
+  };
 }
 
 export interface ImportOptions {
@@ -159,27 +178,29 @@ export async function runImport(records: AsyncIterable<CsvRecord | CsvFatal>, op
     if (!chunk.length) return;
     const rows = chunk;
     chunk = [];
+    // The row's problems start with what its cells say (its own array, added to below).
     const read = rows.map((r): ReadRow & { problems: RowError[] } => {
-      const rr = reader.read(r.line, r.fields);
-      const problems = [...rr.errors];
+      const rr = reader.read(r.line, r.fields) as ReadRow & { problems: RowError[] };
+      const problems = rr.errors;
       if (r.quoteProblem) problems.unshift({ line: r.line, column: null, message: r.quoteProblem });
-      const extra = r.fields.slice(headers.length);
-      if (extra.some((f) => f.trim() !== "")) {
+      if (r.fields.length > headers.length && r.fields.slice(headers.length).some((f) => f.trim() !== "")) {
         problems.unshift({ line: r.line, column: null, message: `This row has ${r.fields.length} values but the header names ${headers.length} columns. A value that holds the delimiter must be in quotes.` });
       }
-      return { ...rr, problems };
+      rr.problems = problems;
+      return rr;
     });
+    const serialsOf = read.map(rowSerials);
 
-    const serials = [...new Set(read.flatMap(rowSerials))];
+    const serials = [...new Set(serialsOf.flat())];
     const tagCodes = [...new Set(read.flatMap((r) => (r.tagCode ? [r.tagCode] : [])))];
     const found = serials.length || tagCodes.length ? await store.findExisting({ serials, tagCodes }) : [];
     const bySerial = new Map(found.filter((f) => f.serial).map((f) => [f.serial!, f]));
     const byTag = new Map(found.map((f) => [f.tagCode, f]));
 
     // Which stored item each row updates, if any. A row with a quantity only makes new items.
-    const matched = read.map((r) => {
+    const matched = read.map((r, i) => {
       if (r.quantity > 1) {
-        const serialsOfRow = rowSerials(r);
+        const serialsOfRow = serialsOf[i];
         const taken = serialsOfRow.map((s) => bySerial.get(s)).find(Boolean);
         if (taken) {
           r.problems.push({ line: r.line, column: reader.column("serial"), message: `Serial ${taken.serial} is already item ${taken.tagCode} in your stock. A row with a quantity makes new items, numbering the serial for each (${serialsOfRow[0]} …): give this row a serial of its own.` });
@@ -203,34 +224,38 @@ export async function runImport(records: AsyncIterable<CsvRecord | CsvFatal>, op
       return r.serial ? bySerial.get(r.serial) : undefined;
     });
 
-    // Each serial, tag code and stored item once per file.
-    const keyed = read.map((r, i) => {
-      const keys: { key: string; column: string; message: (line: number) => string }[] = [];
-      for (const serial of rowSerials(r)) {
-        keys.push({ key: `s:${serial}`, column: reader.column("serial"), message: (l) => `Serial ${serial} is already on line ${l}; each serial may appear once in the file${r.quantity > 1 ? " (a row with a quantity numbers its serial for each item)" : ""}.` });
-      }
-      if (r.tagCode) keys.push({ key: `t:${r.tagCode}`, column: reader.column("tagCode"), message: (l) => `Tag code ${r.tagCode} is already on line ${l}; each item may appear once in the file.` });
-      const item = matched[i];
-      if (item) keys.push({ key: `i:${item.id}`, column: r.tagCode ? reader.column("tagCode") : reader.column("serial"), message: (l) => `Line ${l} already updates item ${item.tagCode}; each item may appear once in the file.` });
+    // Each serial, tag code and stored item once per file. Keys are "s:serial", "t:tag code"
+    // and "i:item id", in that order; a row's message is made only when a key repeats.
+    const keysOf = read.map((r, i) => {
+      const keys = serialsOf[i].map((serial) => `s:${serial}`);
+      if (r.tagCode) keys.push(`t:${r.tagCode}`);
+      if (matched[i]) keys.push(`i:${matched[i]!.id}`);
       return keys;
     });
+    const duplicate = (r: ReadRow, item: ExistingItem | undefined, key: string, line: number): RowError => {
+      const value = key.slice(2);
+      if (key.startsWith("s:")) {
+        return { line: r.line, column: reader.column("serial"), message: `Serial ${value} is already on line ${line}; each serial may appear once in the file${r.quantity > 1 ? " (a row with a quantity numbers its serial for each item)" : ""}.` };
+      }
+      if (key.startsWith("t:")) return { line: r.line, column: reader.column("tagCode"), message: `Tag code ${value} is already on line ${line}; each item may appear once in the file.` };
+      return { line: r.line, column: r.tagCode ? reader.column("tagCode") : reader.column("serial"), message: `Line ${line} already updates item ${item!.tagCode}; each item may appear once in the file.` };
+    };
     const inChunk = new Map<string, number>();
     const toStore: { key: string; line: number }[] = [];
     read.forEach((r, i) => {
-      for (const k of keyed[i]) {
-        if (inChunk.has(k.key)) continue;
-        inChunk.set(k.key, r.line);
-        toStore.push({ key: k.key, line: r.line });
+      for (const key of keysOf[i]) {
+        if (inChunk.has(key)) continue;
+        inChunk.set(key, r.line);
+        toStore.push({ key, line: r.line });
       }
     });
     const earlier = toStore.length ? await store.firstSeen(toStore) : new Map<string, number>();
     read.forEach((r, i) => {
-      let reported = false;
-      for (const k of keyed[i]) {
-        const firstLine = earlier.get(k.key) ?? (inChunk.get(k.key) !== r.line ? inChunk.get(k.key) : undefined);
-        if (firstLine !== undefined && !reported) {
-          r.problems.push({ line: r.line, column: k.column, message: k.message(firstLine) });
-          reported = true; // one duplicate message per row is enough
+      for (const key of keysOf[i]) {
+        const firstLine = earlier.get(key) ?? (inChunk.get(key) !== r.line ? inChunk.get(key) : undefined);
+        if (firstLine !== undefined) {
+          r.problems.push(duplicate(r, matched[i], key, firstLine));
+          break; // one duplicate message per row is enough
         }
       }
     });
@@ -240,10 +265,13 @@ export async function runImport(records: AsyncIterable<CsvRecord | CsvFatal>, op
     for (let i = 0; i < read.length; i++) {
       const r = read[i];
       const existing = matched[i];
-      const unreadable = new Set(r.problems.map((p) => p.column));
-      const kindProblem = r.problems.some((p) => p.column === reader.column("kind"));
+      const kindProblem = r.problems.length > 0 && r.problems.some((p) => p.column === reader.column("kind"));
       const checked = kindProblem ? { errors: [] } : reader.validate(r, existing);
-      const problems = "errors" in checked ? [...r.problems, ...checked.errors.filter((e) => !unreadable.has(e.column))] : r.problems;
+      let problems = r.problems;
+      if ("errors" in checked && checked.errors.length) {
+        const unreadable = new Set(r.problems.map((p) => p.column));
+        problems = [...r.problems, ...checked.errors.filter((e) => !unreadable.has(e.column))];
+      }
       if (problems.length || !("input" in checked)) {
         summary.rejected++;
         problems.forEach(addError);
@@ -266,10 +294,12 @@ export async function runImport(records: AsyncIterable<CsvRecord | CsvFatal>, op
         }
       } else {
         const serials = r.quantity > 1 ? quantitySerials(checked.input.serial, r.quantity) : [checked.input.serial];
-        for (const serial of serials) {
-          const input = { ...checked.input, serial };
-          creates.push({ line: r.line, input, row: serial === checked.input.serial ? row : storedFields(input) });
-        }
+        if (r.quantity > 1) {
+          for (const serial of serials) {
+            const input = { ...checked.input, serial };
+            creates.push({ line: r.line, input, row: serial === checked.input.serial ? row : storedFields(input) });
+          }
+        } else creates.push({ line: r.line, input: checked.input, row });
         summary.created += serials.length;
         preview(r.line, "create", r.quantity > 1 ? { ...row, serial: serials[0] ? `${serials[0]} … ${serials.at(-1)}` : null } : row, null, undefined, r.quantity);
       }
