@@ -5,8 +5,9 @@ const root = path.dirname(fileURLToPath(import.meta.url));
 
 /** @type {import('next').NextConfig} */
 const nextConfig = {
-  // knex loads optional dialect drivers at run time; argon2 is a native addon.
-  serverExternalPackages: ["knex", "pg", "@node-rs/argon2"],
+  // knex loads optional dialect drivers at run time; argon2 is a native addon; COPY streams
+  // ride on pg's connections, so they load beside pg.
+  serverExternalPackages: ["knex", "pg", "pg-copy-streams", "@node-rs/argon2"],
   poweredByHeader: false,
   turbopack: { root },
   experimental: {

@@ -1,7 +1,9 @@
+import { randomUUID } from "node:crypto";
 import type { Knex } from "knex";
 import { db } from "./index";
 import type { ItemKind } from "@/lib/stock/labels";
-import { fieldColumns, fieldsFromColumns, type ItemFields } from "./items";
+import { copyRows } from "./copy";
+import { fieldColumns, fieldsFromColumns, ITEM_FIELD_COLUMNS, type ItemFields } from "./items";
 
 // CSV import batches, the values an import replaced, saved column mappings, and the bulk
 // writes of an import. Every function takes the organisation id and filters on it.
@@ -141,42 +143,100 @@ export async function laterEvent(organisationId: string, batchId: string, lastEv
     .first("e.type", "i.tag_code as tagCode");
 }
 
-// Reading stock for an import (the items themselves: db/items.ts findItemsByKeys)
-
-/** A table of the keys (serials, tag codes, items) seen so far in the file, dropped with the transaction. */
-export async function createSeenTable(trx: Knex): Promise<void> {
-  await trx.raw("CREATE TEMP TABLE import_seen (key text PRIMARY KEY, line integer NOT NULL) ON COMMIT DROP");
-}
-
-/** Notes keys as seen; answers the earlier line of each key that was seen before. */
-export async function firstSeen(trx: Knex, entries: { key: string; line: number }[]): Promise<Map<string, number>> {
-  // Every part of one statement sees the table as it was before the statement, so the
-  // select finds exactly the keys that earlier chunks put there.
-  const { rows } = await trx.raw(
-    `WITH input AS (SELECT * FROM unnest(?::text[], ?::int[]) AS t(key, line)),
-          ins AS (INSERT INTO import_seen (key, line) SELECT key, line FROM input ON CONFLICT (key) DO NOTHING)
-     SELECT s.key, s.line FROM import_seen s JOIN input USING (key)`,
-    [entries.map((e) => e.key), entries.map((e) => e.line)],
-  );
-  return new Map(rows.map((r: { key: string; line: number }) => [r.key, Number(r.line)]));
-}
-
 /** Serializes imports of one organisation: a second import waits for the first to finish. */
 export async function lockOrganisationImports(trx: Knex, organisationId: string): Promise<void> {
   await trx.raw("SELECT pg_advisory_xact_lock(hashtext(?))", [`linkyard-import:${organisationId}`]);
 }
 
-/** What an import replaced on an item it updated, and what it wrote, so that undo can put the item back. */
-export async function insertUpdates(trx: Knex, rows: { batchId: string; itemId: string; before: Partial<ItemFields>; after: Partial<ItemFields> }[]): Promise<void> {
-  if (!rows.length) return;
-  await trx("import_updates").insert(
-    rows.map((r) => ({
-      batch_id: r.batchId,
-      item_id: r.itemId,
-      before: JSON.stringify(fieldColumns(r.before, "object")),
-      after: JSON.stringify(fieldColumns(r.after, "object")),
-    })),
+// The writes of a commit, a chunk at a time, with COPY (db/copy.ts) inside the import's
+// transaction: the new items and their history entries go straight into their tables (their
+// ids are made here, so no round trip is needed to learn them); the changed items go through
+// a temporary table and one UPDATE.
+
+/** Who writes an import, and which. */
+export interface ImportWriter {
+  organisationId: string;
+  batchId: string;
+  actorId: string;
+}
+
+/** A new item an import adds: its fields, its tag code, its first inspection date and the note of its 'imported' entry. */
+export interface ImportedItem extends ItemFields {
+  tagCode: string;
+  nextInspectionDue: string | null;
+  note: string;
+}
+
+/** A stored item an import changes: the fields it writes (all but the kind), what they replace, and its 'edited' entry. */
+export interface ImportedUpdate {
+  itemId: string;
+  fields: Omit<ItemFields, "kind">;
+  before: Partial<ItemFields>;
+  changes: Record<string, [unknown, unknown]>;
+  note: string;
+}
+
+const CHANGED_FIELDS = ITEM_FIELD_COLUMNS.filter(([key]) => key !== "kind");
+
+/** The temporary table a commit's updates go through, dropped with the transaction. */
+export async function createImportWriteTable(trx: Knex): Promise<void> {
+  await trx.raw(
+    `CREATE TEMP TABLE import_changed_items (seq integer NOT NULL, item_id uuid NOT NULL, grade integer, grade_marked boolean, size text,
+       length_mm integer, marked_wll_lb integer, serial text, yard_id uuid, in_service_on date, cost_cents integer, details jsonb,
+       wll_lb integer, wll_source text, before jsonb NOT NULL, after jsonb NOT NULL, changes jsonb NOT NULL, note text NOT NULL)
+     ON COMMIT DROP`,
   );
+}
+
+/** The id of the last history entry this transaction's connection wrote (its own sequence value, not another's). */
+async function lastEventId(trx: Knex): Promise<number> {
+  const { rows } = await trx.raw("SELECT currval(pg_get_serial_sequence('item_events', 'id')) AS id");
+  return Number(rows[0].id);
+}
+
+/** Adds new items of an import with their 'imported' history entries; answers the id of the last entry. */
+export async function copyImportedItems(trx: Knex, w: ImportWriter, items: readonly ImportedItem[]): Promise<number | null> {
+  if (!items.length) return null;
+  const ids = items.map(() => randomUUID());
+  await copyRows(
+    trx, "items",
+    ["id", "organisation_id", "tag_code", "status", "next_inspection_due", "import_batch_id", ...ITEM_FIELD_COLUMNS.map(([, column]) => column)],
+    items.map((item, i) => [ids[i], w.organisationId, item.tagCode, "in_service", item.nextInspectionDue, w.batchId, ...ITEM_FIELD_COLUMNS.map(([key]) => item[key])]),
+  );
+  await copyRows(
+    trx, "item_events", ["organisation_id", "item_id", "type", "note", "actor_id"],
+    items.map((item, i) => [w.organisationId, ids[i], "imported", item.note, w.actorId]),
+  );
+  return lastEventId(trx);
+}
+
+/**
+ * Changes stored items of the organisation as an import's rows say, keeps what each change
+ * replaced (for undo) and writes an 'edited' history entry for each; answers the id of the
+ * last entry. An id that is not an item of the organisation changes nothing and is not recorded.
+ */
+export async function copyImportedUpdates(trx: Knex, w: ImportWriter, updates: readonly ImportedUpdate[]): Promise<number | null> {
+  if (!updates.length) return null;
+  const columns = CHANGED_FIELDS.map(([, column]) => column);
+  await copyRows(
+    trx, "import_changed_items", ["seq", "item_id", ...columns, "before", "after", "changes", "note"],
+    updates.map((u, i) => [
+      i, u.itemId, ...CHANGED_FIELDS.map(([key]) => u.fields[key as keyof typeof u.fields]),
+      fieldColumns(u.before, "object"), fieldColumns(u.fields, "object"), u.changes, u.note,
+    ]),
+  );
+  const { rows } = await trx.raw(
+    `WITH upd AS (UPDATE items i SET ${columns.map((c) => `${c} = s.${c}`).join(", ")}, updated_at = now()
+                  FROM import_changed_items s WHERE i.organisation_id = ? AND i.id = s.item_id RETURNING i.id),
+          done AS (SELECT s.* FROM import_changed_items s JOIN upd ON upd.id = s.item_id),
+          kept AS (INSERT INTO import_updates (batch_id, item_id, before, after) SELECT ?, item_id, before, after FROM done),
+          ev AS (INSERT INTO item_events (organisation_id, item_id, type, note, changes, actor_id)
+                 SELECT ?, item_id, 'edited', note, changes, ? FROM done ORDER BY seq RETURNING id)
+     SELECT max(id) AS last FROM ev`,
+    [w.organisationId, w.batchId, w.organisationId, w.actorId],
+  );
+  await trx.raw("TRUNCATE import_changed_items");
+  return rows[0].last == null ? null : Number(rows[0].last);
 }
 
 export async function updatesOf(trx: Knex, batchId: string): Promise<{ itemId: string; before: Partial<ItemFields>; after: Partial<ItemFields> }[]> {

@@ -59,16 +59,6 @@ export function inTransaction<T>(work: (tx: Tx) => Promise<T>): Promise<T> {
   return db.transaction(work);
 }
 
-/** Runs work in a transaction that is always rolled back: reads that may use temporary tables, writing nothing. */
-export async function rolledBack<T>(work: (tx: Knex.Transaction) => Promise<T>): Promise<T> {
-  const tx = await db.transaction();
-  try {
-    return await work(tx);
-  } finally {
-    await tx.rollback();
-  }
-}
-
 /** Whether the database answers (the health check). */
 export async function ping(): Promise<void> {
   await db.raw("select 1");

@@ -61,6 +61,9 @@ const FIELD_COLUMN = {
   wllSource: "wll_source",
 } as const satisfies Record<keyof ItemFields, string>;
 
+/** Every item field with its column, in one fixed order (the columns of a bulk load). */
+export const ITEM_FIELD_COLUMNS = Object.entries(FIELD_COLUMN) as [keyof ItemFields, string][];
+
 /**
  * Item fields as columns (snake case): what an insert or an update writes (details as JSON
  * text), or what an import's undo record keeps inside its own JSON (details as an object).
@@ -207,18 +210,16 @@ export async function serialTaken(organisationId: string, serial: string, except
 
 /** Items of the organisation with any of these serials or tag codes (an import matches its rows with them). */
 export async function findItemsByKeys(organisationId: string, serials: string[], tagCodes: string[], trx: Knex = db): Promise<ItemRecord[]> {
+  // Two arrays as two parameters, not a parameter per key: a chunk of an import asks for a thousand.
   return base(trx)
     .where("i.organisation_id", organisationId)
-    .where((w) => {
-      if (serials.length) w.orWhereIn("i.serial", serials);
-      if (tagCodes.length) w.orWhereIn("i.tag_code", tagCodes);
-    })
+    .where((w) => w.whereRaw("i.serial = ANY(?::text[])", [serials]).orWhereRaw("i.tag_code = ANY(?::text[])", [tagCodes]))
     .select(ITEM_COLUMNS);
 }
 
 /** Which of these tag codes an item already has, in any organisation (codes are unique). */
 export async function existingTagCodes(codes: string[], trx: Knex = db): Promise<Set<string>> {
-  return new Set(await trx("items").whereIn("tag_code", codes).pluck("tag_code"));
+  return new Set(await trx("items").whereRaw("tag_code = ANY(?::text[])", [codes]).pluck("tag_code"));
 }
 
 /** A new item: its fields, its tag code, its first status and inspection date. */

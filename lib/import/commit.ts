@@ -5,10 +5,10 @@ import { rm, stat } from "node:fs/promises";
 import { tmpdir } from "node:os";
 import path from "node:path";
 import { finished } from "node:stream/promises";
-import { rolledBack, type Tx } from "@/db";
+import type { Tx } from "@/db";
 import { audited } from "@/db/audit";
 import * as imports from "@/db/imports";
-import { findItemsByKeys, insertEvents, insertItems, listYards, updateItem } from "@/db/items";
+import { findItemsByKeys, listYards } from "@/db/items";
 import type { Principal } from "@/lib/auth/session";
 import { can } from "@/lib/auth/roles";
 import { AppError, conflict, forbidden } from "@/lib/http/errors";
@@ -21,7 +21,7 @@ import { removeStored, storeFromDisk } from "@/lib/storage/files";
 import { emptySummary, importBody, type ImportBody } from "./answers";
 import { csvLine } from "./csv-write";
 import { detectFileEncoding, ENCODING_WORDS, fileRefusal, MAX_IMPORT_BYTES } from "./file-check";
-import { commitRefusal, runImport, type ImportStore, type PreparedCreate, type PreparedUpdate } from "./pipeline";
+import { commitRefusal, keysSeenInMemory, runImport, type ImportStore, type ImportSummary, type PreparedCreate, type PreparedUpdate } from "./pipeline";
 import { openCsv } from "./source";
 
 // The CSV import of stock, from the uploaded file to the database and the file store (the
@@ -29,8 +29,9 @@ import { openCsv } from "./source";
 // transaction: every row goes in, or, when the owner chose "only the valid rows", every
 // valid row goes in and the rejected rows are kept as a file to fix and upload again; on
 // any refusal or failure nothing of the file is left behind.
-// The upload is read from disk as a stream and written in chunks of 1,000 rows, so memory
-// holds a chunk, the first 1,000 errors and the ids of the batch, whatever the file's size.
+// The upload is read from disk as a stream and written in chunks of 1,000 rows (with COPY,
+// db/imports.ts), so memory holds a chunk or two, the first 1,000 errors and the keys seen
+// (serials, tag codes, items: a few MB for 100,000 rows).
 
 export interface ImportRequest {
   file: SpooledFile;
@@ -80,20 +81,20 @@ export async function importStock(actor: Principal, request: ImportRequest): Pro
   const withDelimiter = { ...common, delimiter: csv.delimiterName };
 
   if (request.dryRun) {
-    const summary = await rolledBack(async (tx) => {
-      await imports.createSeenTable(tx);
-      return runImport(csv.records, options, readingStore(tx, actor.organisationId));
-    });
+    const summary = await runImport(csv.records, options, readingStore(actor.organisationId));
     return { status: 200, body: importBody(summary, withDelimiter) };
   }
   return commit(actor, request, csv.records, options, withDelimiter, read);
 }
 
 /** The store of a dry run: it reads stock and notes duplicates, and writes nothing. */
-function readingStore(trx: Tx, organisationId: string): ImportStore {
+function readingStore(organisationId: string): ImportStore {
   return {
-    findExisting: ({ serials, tagCodes }) => findItemsByKeys(organisationId, serials, tagCodes, trx),
-    firstSeen: (entries) => imports.firstSeen(trx, entries),
+    // Stock as committed, read on a connection of its own: a commit's transaction is then
+    // free to write the chunk before while the next is checked. (An item this file adds
+    // cannot be matched by a later row anyway: its serial is a duplicate in the file.)
+    findExisting: ({ serials, tagCodes }) => findItemsByKeys(organisationId, serials, tagCodes),
+    firstSeen: keysSeenInMemory(),
   };
 }
 
@@ -126,16 +127,26 @@ async function commit(
   try {
     const { summary, storedRejected } = await audited(actor, async (trx, audit) => {
       await imports.lockOrganisationImports(trx, org);
-      await imports.createSeenTable(trx);
+      await imports.createImportWriteTable(trx);
+      const writer = { organisationId: org, batchId, actorId: actor.userId };
       let lastEventId: number | null = null;
       let headers: string[] = [];
       const note = (line: number) => `Imported from ${request.file.name}, line ${line}`;
 
+      // A chunk is written behind the reading: while PostgreSQL writes one chunk on the
+      // transaction's connection, the next is read and checked. One chunk at a time is in
+      // flight, and its failure stops the import at the next chunk or at the end.
+      let writing: Promise<void> = Promise.resolve();
+      const writeChunk = async (creates: PreparedCreate[], updates: PreparedUpdate[]) => {
+        const last = [await writeCreates(trx, writer, creates, { intervals, today }, note), await writeUpdates(trx, writer, updates, note)];
+        for (const id of last) if (id !== null) lastEventId = Math.max(lastEventId ?? 0, id);
+      };
       const store: ImportStore = {
-        ...readingStore(trx, org),
+        ...readingStore(org),
         async write(creates, updates) {
-          if (creates.length) lastEventId = Math.max(lastEventId ?? 0, await writeCreates(trx, actor, batchId, creates, { intervals, today }, note));
-          if (updates.length) lastEventId = Math.max(lastEventId ?? 0, await writeUpdates(trx, actor, batchId, updates, note));
+          await writing;
+          writing = writeChunk(creates, updates);
+          writing.catch(() => undefined); // handled where it is awaited
         },
         async progress(rows) {
           await imports.recordProgress(batchId, rows, read.bytes);
@@ -161,7 +172,13 @@ async function commit(
         }
       })();
 
-      const summary = await runImport(withHeaders, options, store);
+      let summary: ImportSummary;
+      try {
+        summary = await runImport(withHeaders, options, store);
+      } finally {
+        await writing.catch(() => undefined); // nothing may run on the transaction once it ends
+      }
+      await writing;
       const refusal = commitRefusal(summary, request.validOnly);
       // Thrown, so that the transaction rolls back; answered below as a 422.
       if (refusal) throw new Refused({ status: 422, body: importBody(summary, { ...common, error: refusal }) });
@@ -218,44 +235,28 @@ class Refused {
 }
 
 async function writeCreates(
-  trx: Tx, actor: Principal, batchId: string, creates: PreparedCreate[], due: { intervals: Record<ItemKind, number>; today: string }, note: (line: number) => string,
-): Promise<number> {
+  trx: Tx, writer: imports.ImportWriter, creates: PreparedCreate[], due: { intervals: Record<ItemKind, number>; today: string }, note: (line: number) => string,
+): Promise<number | null> {
   const codes = await freshTagCodes(creates.length, trx);
-  const ids = await insertItems(
+  return imports.copyImportedItems(
+    trx, writer,
     creates.map((c, i) => ({
       ...c.row,
-      organisationId: actor.organisationId,
       tagCode: codes[i],
-      status: "in_service",
       nextInspectionDue: nextDue(c.input.inServiceOn ?? due.today, due.intervals[c.input.kind]),
-      importBatchId: batchId,
+      note: note(c.line),
     })),
-    trx,
   );
-  const events = await insertEvents(
-    ids.map((id, i) => ({ organisationId: actor.organisationId, itemId: id, type: "imported", note: note(creates[i].line), actorId: actor.userId })),
-    trx,
-  );
-  return Math.max(...events);
 }
 
-async function writeUpdates(trx: Tx, actor: Principal, batchId: string, updates: PreparedUpdate[], note: (line: number) => string): Promise<number> {
-  // The kind of an item never changes; everything else the row decides is written.
-  const written = updates.map((u) => {
-    const { kind: _kind, ...fields } = u.row;
-    return fields;
-  });
-  for (const [i, u] of updates.entries()) await updateItem(actor.organisationId, u.existing.id, written[i], trx);
-  await imports.insertUpdates(
-    trx,
-    updates.map((u, i) => {
-      const { id: _id, tagCode: _tagCode, kind: _kind, ...before } = u.existing;
-      return { batchId, itemId: u.existing.id, before: { ...before, details: before.details ?? {} }, after: written[i] };
+function writeUpdates(trx: Tx, writer: imports.ImportWriter, updates: PreparedUpdate[], note: (line: number) => string): Promise<number | null> {
+  return imports.copyImportedUpdates(
+    trx, writer,
+    updates.map((u) => {
+      // The kind of an item never changes; everything else the row decides is written.
+      const { kind: _kind, ...fields } = u.row;
+      const { id: _id, tagCode: _tagCode, kind: _was, ...before } = u.existing;
+      return { itemId: u.existing.id, fields, before: { ...before, details: before.details ?? {} }, changes: u.changes, note: note(u.line) };
     }),
   );
-  const events = await insertEvents(
-    updates.map((u) => ({ organisationId: actor.organisationId, itemId: u.existing.id, type: "edited", note: note(u.line), changes: u.changes, actorId: actor.userId })),
-    trx,
-  );
-  return Math.max(...events);
 }
