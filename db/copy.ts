@@ -21,12 +21,10 @@ function copyValue(value: unknown): string {
 
 /** The rows as COPY text: one line a row, columns separated by tabs. */
 export function copyText(rows: readonly (readonly unknown[])[]): string {
-  let out = "";
-  for (const row of rows) {
-    for (let i = 0; i < row.length; i++) out += (i ? "\t" : "") + copyValue(row[i]);
-    out += "\n";
-  }
-  return out;
+  const lines: string[] = new Array(rows.length + 1);
+  for (let r = 0; r < rows.length; r++) lines[r] = rows[r].map(copyValue).join("\t");
+  lines[rows.length] = "";
+  return lines.join("\n");
 }
 
 /**

@@ -161,7 +161,8 @@ export interface ImportWriter {
 }
 
 /** A new item an import adds: its fields, its tag code, its first inspection date and the note of its 'imported' entry. */
-export interface ImportedItem extends ItemFields {
+export interface ImportedItem {
+  fields: ItemFields;
   tagCode: string;
   nextInspectionDue: string | null;
   note: string;
@@ -201,7 +202,11 @@ export async function copyImportedItems(trx: Knex, w: ImportWriter, items: reado
   await copyRows(
     trx, "items",
     ["id", "organisation_id", "tag_code", "status", "next_inspection_due", "import_batch_id", ...ITEM_FIELD_COLUMNS.map(([, column]) => column)],
-    items.map((item, i) => [ids[i], w.organisationId, item.tagCode, "in_service", item.nextInspectionDue, w.batchId, ...ITEM_FIELD_COLUMNS.map(([key]) => item[key])]),
+    items.map((item, i) => {
+      const row: unknown[] = [ids[i], w.organisationId, item.tagCode, "in_service", item.nextInspectionDue, w.batchId];
+      for (const [key] of ITEM_FIELD_COLUMNS) row.push(item.fields[key]);
+      return row;
+    }),
   );
   await copyRows(
     trx, "item_events", ["organisation_id", "item_id", "type", "note", "actor_id"],

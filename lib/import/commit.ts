@@ -132,20 +132,37 @@ async function commit(
       let lastEventId: number | null = null;
       let headers: string[] = [];
       const note = (line: number) => `Imported from ${request.file.name}, line ${line}`;
+      // A file has few in-service dates: each date and kind's first inspection is worked out once.
+      const dueDates = new Map<string, string>();
+      const nextInspection = (inServiceOn: string | undefined, kind: ItemKind) => {
+        const key = `${inServiceOn ?? today}|${kind}`;
+        let due = dueDates.get(key);
+        if (due === undefined) {
+          due = nextDue(inServiceOn ?? today, intervals[kind]);
+          if (dueDates.size < 10_000) dueDates.set(key, due);
+        }
+        return due;
+      };
 
       // A chunk is written behind the reading: while PostgreSQL writes one chunk on the
       // transaction's connection, the next is read and checked. One chunk at a time is in
       // flight, and its failure stops the import at the next chunk or at the end.
       let writing: Promise<void> = Promise.resolve();
-      const writeChunk = async (creates: PreparedCreate[], updates: PreparedUpdate[]) => {
-        const last = [await writeCreates(trx, writer, creates, { intervals, today }, note), await writeUpdates(trx, writer, updates, note)];
+      const writeChunk = async (creates: PreparedCreate[], codes: string[], updates: PreparedUpdate[]) => {
+        const last = [await writeCreates(trx, writer, creates, codes, { next: nextInspection }, note), await writeUpdates(trx, writer, updates, note)];
         for (const id of last) if (id !== null) lastEventId = Math.max(lastEventId ?? 0, id);
       };
+      // The new items' tag codes are drawn and checked on another connection too, while the
+      // chunk before is written; the codes of this import's earlier chunks, not yet visible
+      // there, are kept here.
+      const codesOfImport = new Set<string>();
       const store: ImportStore = {
         ...readingStore(org),
         async write(creates, updates) {
+          const codes = await freshTagCodes(creates.length, undefined, codesOfImport);
+          for (const code of codes) codesOfImport.add(code);
           await writing;
-          writing = writeChunk(creates, updates);
+          writing = writeChunk(creates, codes, updates);
           writing.catch(() => undefined); // handled where it is awaited
         },
         async progress(rows) {
@@ -235,17 +252,11 @@ class Refused {
 }
 
 async function writeCreates(
-  trx: Tx, writer: imports.ImportWriter, creates: PreparedCreate[], due: { intervals: Record<ItemKind, number>; today: string }, note: (line: number) => string,
+  trx: Tx, writer: imports.ImportWriter, creates: PreparedCreate[], codes: string[], due: { next: (inServiceOn: string | undefined, kind: ItemKind) => string }, note: (line: number) => string,
 ): Promise<number | null> {
-  const codes = await freshTagCodes(creates.length, trx);
   return imports.copyImportedItems(
     trx, writer,
-    creates.map((c, i) => ({
-      ...c.row,
-      tagCode: codes[i],
-      nextInspectionDue: nextDue(c.input.inServiceOn ?? due.today, due.intervals[c.input.kind]),
-      note: note(c.line),
-    })),
+    creates.map((c, i) => ({ fields: c.row, tagCode: codes[i], nextInspectionDue: due.next(c.input.inServiceOn, c.input.kind), note: note(c.line) })),
   );
 }
 

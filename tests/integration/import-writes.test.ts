@@ -20,7 +20,7 @@ const fields = (over: Partial<ItemFields> = {}): ItemFields => ({
   inServiceOn: "2026-01-15", costCents: 11900, details: { ends: "grab hook\tboth ends \\ \"sewn\"\nline two" }, wllLb: 6600, wllSource: "49 CFR 393.108", ...over,
 });
 const newItems = (n: number, prefix: string): ImportedItem[] =>
-  Array.from({ length: n }, (_, i) => ({ ...fields({ serial: `${prefix}-${i}` }), tagCode: newTagCode(), nextInspectionDue: "2027-01-15", note: `Imported from w.csv, line ${i + 2}` }));
+  Array.from({ length: n }, (_, i) => ({ fields: fields({ serial: `${prefix}-${i}` }), tagCode: newTagCode(), nextInspectionDue: "2027-01-15", note: `Imported from w.csv, line ${i + 2}` }));
 
 async function newBatch(organisationId: string, userId: string) {
   const id = randomUUID();
@@ -47,8 +47,8 @@ describe("copyImportedItems", () => {
     expect(stored).toHaveLength(3);
     expect(stored[0]).toMatchObject({
       organisation_id: writer.organisationId, import_batch_id: writer.batchId, status: "in_service", kind: "chain", grade: 70, grade_marked: true,
-      size: "3/8", length_mm: 6096, marked_wll_lb: null, serial: items[0].serial, yard_id: null, cost_cents: 11900, wll_lb: 6600,
-      wll_source: "49 CFR 393.108", details: items[0].details,
+      size: "3/8", length_mm: 6096, marked_wll_lb: null, serial: items[0].fields.serial, yard_id: null, cost_cents: 11900, wll_lb: 6600,
+      wll_source: "49 CFR 393.108", details: items[0].fields.details,
     });
     const events = await testDb("item_events").whereIn("item_id", stored.map((s) => s.id)).orderBy("id");
     expect(events.map((e) => [e.type, e.note, e.actor_id, e.organisation_id])).toEqual(
@@ -61,7 +61,7 @@ describe("copyImportedItems", () => {
     const before = { items: await countRows("items", { organisation_id: writer.organisationId }), events: await countRows("item_events", { organisation_id: writer.organisationId }) };
     const prefix = `CF-${randomUUID().slice(0, 8)}`;
     const bad = newItems(3, `${prefix}-b`);
-    bad[1].serial = "has a \u0000 byte"; // PostgreSQL refuses a NUL in text: the COPY fails on this row
+    bad[1].fields.serial = "has a \u0000 byte"; // PostgreSQL refuses a NUL in text: the COPY fails on this row
     await expect(
       db.transaction(async (trx) => {
         await copyImportedItems(trx, writer, newItems(5, `${prefix}-a`));
@@ -88,11 +88,11 @@ describe("copyImportedUpdates", () => {
     await db.transaction((trx) => copyImportedItems(trx, { organisationId: other.organisationId, actorId: other.userId, batchId: theirBatch }, [theirs]));
     const { id: theirId } = await testDb("items").where({ tag_code: theirs.tagCode }).first("id");
 
-    const { kind: _kind, ...changed } = fields({ grade: 80, wllLb: 7100, serial: mine.serial, costCents: 12500, details: { ends: "clevis" } });
+    const { kind: _kind, ...changed } = fields({ grade: 80, wllLb: 7100, serial: mine.fields.serial, costCents: 12500, details: { ends: "clevis" } });
     const last = await db.transaction(async (trx) => {
       await createImportWriteTable(trx);
       return copyImportedUpdates(trx, writer, [
-        { itemId: myId, fields: changed, before: fields({ serial: mine.serial }), changes: { grade: [70, 80] }, note: "Imported from w.csv, line 2" },
+        { itemId: myId, fields: changed, before: fields({ serial: mine.fields.serial }), changes: { grade: [70, 80] }, note: "Imported from w.csv, line 2" },
         // another organisation's item, named by a caller gone wrong: not changed
         { itemId: theirId, fields: changed, before: fields(), changes: { grade: [70, 80] }, note: "Imported from w.csv, line 3" },
       ]);
