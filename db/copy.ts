@@ -19,25 +19,37 @@ function copyValue(value: unknown): string {
   return SPECIAL.test(text) ? text.replace(/[\\\t\n\r]/g, (c) => ESCAPES[c]) : text;
 }
 
+/** Rows as COPY text, in pieces of some KB (a string or a Buffer of 100 KB or more would stay in memory until a full collection). */
+export interface CopyText {
+  pieces: string[];
+}
+
+const LINES_A_PIECE = 64;
+
 /** The rows as COPY text: one line a row, columns separated by tabs. */
-export function copyText(rows: readonly (readonly unknown[])[]): string {
-  const lines: string[] = new Array(rows.length + 1);
-  for (let r = 0; r < rows.length; r++) lines[r] = rows[r].map(copyValue).join("\t");
-  lines[rows.length] = "";
-  return lines.join("\n");
+export function copyText(rows: readonly (readonly unknown[])[]): CopyText {
+  const pieces: string[] = [];
+  for (let start = 0; start < rows.length; start += LINES_A_PIECE) {
+    const lines = rows.slice(start, start + LINES_A_PIECE).map((row) => row.map(copyValue).join("\t"));
+    lines.push("");
+    pieces.push(lines.join("\n"));
+  }
+  return { pieces };
 }
 
 /**
- * Loads rows into a table (typically a temporary one) with COPY FROM STDIN, inside the
- * transaction: a failure (a value the column refuses) fails the transaction, so nothing of
- * the change is left written.
+ * Loads rows into a table with COPY FROM STDIN, inside the transaction: a failure (a value
+ * the column refuses) fails the transaction, so nothing of the change is left written.
+ * The rows may come as their text made beforehand with {@link copyText}, so that a caller
+ * writing several tables lets go of its rows before the first one is sent.
  */
-export async function copyRows(trx: Knex, table: string, columns: readonly string[], rows: readonly (readonly unknown[])[]): Promise<void> {
-  if (!rows.length) return;
+export async function copyRows(trx: Knex, table: string, columns: readonly string[], rows: readonly (readonly unknown[])[] | CopyText): Promise<void> {
+  const { pieces } = "pieces" in rows ? rows : copyText(rows);
+  if (!pieces.length) return;
   if (!trx.isTransaction) throw new Error("copyRows runs inside a transaction");
   // A transaction's client hands out the one connection the transaction holds (and never releases it early).
   const connection = (await trx.client.acquireConnection()) as PoolClient;
   const quoted = (name: string) => `"${name.replace(/"/g, '""')}"`;
   const sink = connection.query(copyFrom(`COPY ${quoted(table)} (${columns.map(quoted).join(", ")}) FROM STDIN`));
-  await pipeline(Readable.from([copyText(rows)]), sink);
+  await pipeline(Readable.from(pieces), sink);
 }

@@ -2,7 +2,7 @@ import { randomUUID } from "node:crypto";
 import type { Knex } from "knex";
 import { db } from "./index";
 import type { ItemKind } from "@/lib/stock/labels";
-import { copyRows } from "./copy";
+import { copyRows, copyText } from "./copy";
 import { fieldColumns, fieldsFromColumns, ITEM_FIELD_COLUMNS, type ItemFields } from "./items";
 
 // CSV import batches, the values an import replaced, saved column mappings, and the bulk
@@ -178,6 +178,7 @@ export interface ImportedUpdate {
 }
 
 const CHANGED_FIELDS = ITEM_FIELD_COLUMNS.filter(([key]) => key !== "kind");
+const NEW_ITEM_COLUMNS = ["id", "organisation_id", "tag_code", "status", "next_inspection_due", "import_batch_id", ...ITEM_FIELD_COLUMNS.map(([, column]) => column)];
 
 /** The temporary table a commit's updates go through, dropped with the transaction. */
 export async function createImportWriteTable(trx: Knex): Promise<void> {
@@ -198,20 +199,18 @@ async function lastEventId(trx: Knex): Promise<number> {
 /** Adds new items of an import with their 'imported' history entries; answers the id of the last entry. */
 export async function copyImportedItems(trx: Knex, w: ImportWriter, items: readonly ImportedItem[]): Promise<number | null> {
   if (!items.length) return null;
+  // Both texts first: the items can then be let go while PostgreSQL writes (an import reads on meanwhile).
   const ids = items.map(() => randomUUID());
-  await copyRows(
-    trx, "items",
-    ["id", "organisation_id", "tag_code", "status", "next_inspection_due", "import_batch_id", ...ITEM_FIELD_COLUMNS.map(([, column]) => column)],
+  const itemRows = copyText(
     items.map((item, i) => {
       const row: unknown[] = [ids[i], w.organisationId, item.tagCode, "in_service", item.nextInspectionDue, w.batchId];
       for (const [key] of ITEM_FIELD_COLUMNS) row.push(item.fields[key]);
       return row;
     }),
   );
-  await copyRows(
-    trx, "item_events", ["organisation_id", "item_id", "type", "note", "actor_id"],
-    items.map((item, i) => [w.organisationId, ids[i], "imported", item.note, w.actorId]),
-  );
+  const eventRows = copyText(items.map((item, i) => [w.organisationId, ids[i], "imported", item.note, w.actorId]));
+  await copyRows(trx, "items", NEW_ITEM_COLUMNS, itemRows);
+  await copyRows(trx, "item_events", ["organisation_id", "item_id", "type", "note", "actor_id"], eventRows);
   return lastEventId(trx);
 }
 

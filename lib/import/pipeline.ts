@@ -265,6 +265,10 @@ export async function runImport(records: AsyncIterable<CsvRecord | CsvFatal>, op
     for (let i = 0; i < read.length; i++) {
       const r = read[i];
       const existing = matched[i];
+      // Each row is let go once checked, and a check that writes nothing keeps no items:
+      // what lives for a whole chunk is what outlasts the runtime's young collections.
+      (read as unknown[])[i] = undefined;
+      const keep = Boolean(store.write) && writing;
       const kindProblem = r.problems.length > 0 && r.problems.some((p) => p.column === reader.column("kind"));
       const checked = kindProblem ? { errors: [] } : reader.validate(r, existing);
       let problems = r.problems;
@@ -289,12 +293,14 @@ export async function runImport(records: AsyncIterable<CsvRecord | CsvFatal>, op
           preview(r.line, "unchanged", row, existing.tagCode);
         } else {
           summary.updated++;
-          updates.push({ line: r.line, existing, row, changes });
+          if (keep) updates.push({ line: r.line, existing, row, changes });
           preview(r.line, "update", row, existing.tagCode, changes);
         }
       } else {
         const serials = r.quantity > 1 ? quantitySerials(checked.input.serial, r.quantity) : [checked.input.serial];
-        if (r.quantity > 1) {
+        if (!keep) {
+          // counted and previewed only
+        } else if (r.quantity > 1) {
           for (const serial of serials) {
             const input = { ...checked.input, serial };
             creates.push({ line: r.line, input, row: serial === checked.input.serial ? row : storedFields(input) });
