@@ -9,27 +9,14 @@ import { itemRating } from "./rating";
 
 const blank = (v: unknown) => (v === "" || v === null ? undefined : v);
 
-// A stock list names the same few sizes thousands of times: each size's label is read once
-// (bounded; past the limit the memory starts over).
-const sizeLabels = new Map<string | number, string | null>();
-function sizeLabel(v: string | number): string | null {
-  let label = sizeLabels.get(v);
-  if (label === undefined) {
-    label = tryParseSize(v)?.label ?? null;
-    if (sizeLabels.size >= 2000) sizeLabels.clear();
-    sizeLabels.set(v, label);
-  }
-  return label;
-}
-
 const sizeValue = (what: string) =>
   z.union([z.string(), z.number()], { error: `Enter the ${what}.` }).transform((v, ctx) => {
-    const label = sizeLabel(v);
-    if (label === null) {
+    const parsed = tryParseSize(v);
+    if (!parsed) {
       ctx.addIssue({ code: "custom", message: `Write the ${what} as the trade does: 3/8, 3/8 in, 10 mm or 0.375.` });
       return z.NEVER;
     }
-    return label;
+    return parsed.label;
   });
 
 const sizeText = (what: string) => z.preprocess(blank, sizeValue(what).optional());
