@@ -86,10 +86,11 @@ export function CameraScanner({
   return (
     <section aria-labelledby="camera-heading" className="flex flex-col gap-3">
       <h2 id="camera-heading" className="sr-only">Camera</h2>
-      {/* One fixed height whatever the camera does (starting, showing, off, missing), with its
-          words inside: the typed code's field below never moves under a finger about to tap it. */}
-      <div className="relative h-64 overflow-hidden rounded-xl border-2 border-ink bg-ink">
-        <div id={REGION_ID} className="h-full w-full [&_video]:block [&_video]:!h-full [&_video]:!w-full [&_video]:object-cover" data-camera={camera.on} />
+      {/* The box keeps its place whatever the camera does (starting, off, missing), with its words
+          inside: the typed code's field below does not jump under a finger about to tap it. */}
+      <div className="relative min-h-64 overflow-hidden rounded-xl border-2 border-ink bg-ink">
+        {/* The video keeps its own shape: html5-qrcode maps its scan box from the shown size. */}
+        <div id={REGION_ID} className="min-h-64 w-full [&_video]:block [&_video]:w-full" data-camera={camera.on} />
         <p
           id="camera-status"
           role="status"
