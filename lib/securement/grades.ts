@@ -11,6 +11,7 @@
  *
  * @module
  */
+import { boundedMemo, shortKey } from "../memo";
 
 /**
  * The grades that are columns of the 49 CFR 393.108 chain table.
@@ -88,22 +89,8 @@ function readMark(input: GradeInput): string | undefined {
 }
 
 // A check reads the same grade ("70", "G70") several times per tiedown (the schema, the
-// description, the table, the fittings): each reading is kept, short texts and numbers only,
-// dropped all at once when full. Strings are immutable, so a kept answer cannot be changed.
-const MARK_CACHE_LIMIT = 500;
-const MARK_KEY_MAX = 32;
-const markCache = new Map<GradeInput, string | null>();
-
-function markDigits(input: GradeInput): string | undefined {
-  const hit = markCache.get(input);
-  if (hit !== undefined) return hit ?? undefined;
-  const mark = readMark(input);
-  if (typeof input === "number" || (typeof input === "string" && input.length <= MARK_KEY_MAX)) {
-    if (markCache.size >= MARK_CACHE_LIMIT) markCache.clear();
-    markCache.set(input, mark ?? null);
-  }
-  return mark;
-}
+// description, the table, the fittings): each reading is kept (a text, which nothing can change).
+const markDigits = boundedMemo(readMark, { limit: 500, key: (input: GradeInput) => shortKey(input, 32) });
 
 /** Marks that are read as another grade than their own number, and why. */
 const READ_AS: Readonly<Record<string, string>> = {

@@ -10,6 +10,7 @@
  *
  * @module
  */
+import { boundedMemo } from "../memo";
 import { RatingError } from "./errors";
 import { SOURCES } from "./findings";
 import { formatNumber } from "./format";
@@ -207,54 +208,29 @@ function rateStrapping(widthInput: SizeInput | undefined, thicknessInput: SizeIn
 }
 
 // The tables are constant and a plan names the same few sizes in every tiedown: each answer
-// is kept by its query (frozen, so no caller can change it for the next), in one map per
-// field of the query, so a lookup builds no key. Only numbers and short texts are kept, and
-// the whole cache is dropped when it is full. A refused query is worked out again each time
-// (its RatingError is thrown fresh).
-const RATING_CACHE_LIMIT = 1000;
-const RATING_KEY_MAX = 64;
+// is kept by its query, frozen so no caller can change it for the next. Only numbers and
+// short texts are kept. A refused query is worked out again each time (its RatingError is
+// thrown fresh).
 const QUERY_FIELDS = ["material", "grade", "size", "width", "thickness", "fibre"] as const;
-type CacheLevel = Map<unknown, unknown>;
-let ratingCache: CacheLevel = new Map();
-let ratingsKept = 0;
 
-function keepable(value: unknown): boolean {
-  return value === undefined || typeof value === "number" || (typeof value === "string" && value.length <= RATING_KEY_MAX);
-}
-
-function cachedRating(query: RatingQuery): DefaultRating | undefined {
-  let level: unknown = ratingCache;
+function queryKey(query: RatingQuery): string | null {
+  let key = "";
   for (const field of QUERY_FIELDS) {
-    level = (level as CacheLevel).get(query[field]);
-    if (level === undefined) return undefined;
+    const value = query[field];
+    if (value === undefined) key += "\u0001";
+    else if (typeof value === "number") key += `\u0001#${value}`;
+    else if (typeof value === "string" && value.length <= 64) key += `\u0001'${value}`;
+    else return null;
   }
-  return level as DefaultRating;
-}
-
-function keepRating(query: RatingQuery, rating: DefaultRating): void {
-  for (const field of QUERY_FIELDS) if (!keepable(query[field])) return;
-  if (ratingsKept >= RATING_CACHE_LIMIT) {
-    ratingCache = new Map();
-    ratingsKept = 0;
-  }
-  let level = ratingCache;
-  for (let i = 0; i < QUERY_FIELDS.length - 1; i++) {
-    const key = query[QUERY_FIELDS[i]!];
-    let next = level.get(key) as CacheLevel | undefined;
-    if (!next) {
-      next = new Map();
-      level.set(key, next);
-    }
-    level = next;
-  }
-  level.set(query.fibre, rating);
-  ratingsKept++;
+  return key;
 }
 
 function frozen(rating: DefaultRating): DefaultRating {
   if (rating.notes) Object.freeze(rating.notes);
   return Object.freeze(rating);
 }
+
+const keptRating = boundedMemo((query: RatingQuery) => frozen(rate(query)), { limit: 1000, key: queryKey });
 
 /**
  * Looks up the default WLL of tiedown material in the 49 CFR 393.108 tables. The answer is
@@ -271,11 +247,7 @@ function frozen(rating: DefaultRating): DefaultRating {
  * defaultRating({ material: "steel-strapping", width: "1 1/4", thickness: "0.029" }).wllLb; // 1190
  */
 export function defaultRating(query: RatingQuery): DefaultRating {
-  const hit = cachedRating(query);
-  if (hit) return hit;
-  const rating = frozen(rate(query));
-  keepRating(query, rating);
-  return rating;
+  return keptRating(query);
 }
 
 function rate(query: RatingQuery): DefaultRating {

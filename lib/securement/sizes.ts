@@ -12,6 +12,7 @@
  *
  * @module
  */
+import { boundedMemo, shortKey } from "../memo";
 import { RatingError } from "./errors";
 import { MM_PER_IN } from "./units";
 
@@ -171,21 +172,13 @@ function readSize(input: SizeInput): ParsedSize | null {
 // change it for the next. Only short texts and numbers are kept (a schema allows 40
 // characters), and the whole cache is dropped when it is full, so odd input cannot grow it
 // without bound. It holds nothing but what the text means: no state between requests.
-const SIZE_CACHE_LIMIT = 2000;
-const SIZE_KEY_MAX = 64;
-const sizeCache = new Map<SizeInput, ParsedSize | null>();
-
-function cachedSize(input: SizeInput): ParsedSize | null {
-  const hit = sizeCache.get(input);
-  if (hit !== undefined) return hit;
-  const read = readSize(input);
-  const size = read === null ? null : Object.freeze(read);
-  if (typeof input === "number" || input.length <= SIZE_KEY_MAX) {
-    if (sizeCache.size >= SIZE_CACHE_LIMIT) sizeCache.clear();
-    sizeCache.set(input, size);
-  }
-  return size;
-}
+const cachedSize = boundedMemo(
+  (input: SizeInput): ParsedSize | null => {
+    const size = readSize(input);
+    return size === null ? null : Object.freeze(size);
+  },
+  { limit: 2000, key: (input: SizeInput) => shortKey(input, 64) },
+);
 
 /**
  * Reads a size. A number, or a string without a unit, means inches. The answer is frozen

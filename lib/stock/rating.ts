@@ -1,3 +1,4 @@
+import { boundedMemo } from "@/lib/memo";
 import { componentWll, RatingError, type Component } from "@/lib/securement";
 import type { ItemKind } from "./labels";
 
@@ -46,8 +47,20 @@ export function itemComponent(item: RatableItem): Component {
 // and sizes thousands of times (an import rates each row twice: in the item schema and for
 // the stored fields), so answers are kept by those values. Bounded: past the limit the
 // memory starts over. Answers are frozen, as they are shared.
-const MEMO_LIMIT = 2000;
-const memo = new Map<string, ItemRating>();
+const keptRating = boundedMemo(
+  (item: RatableItem) => {
+    const rating = Object.freeze(rateItem(item));
+    Object.freeze(rating.warnings);
+    return rating;
+  },
+  {
+    limit: 2000,
+    key: (item: RatableItem) => {
+      const range = item.details?.chainSizeRange;
+      return `${item.kind}|${item.grade}|${item.gradeMarked}|${item.size}|${item.markedWllLb}|${range ? `${range[0]}|${range[1]}` : ""}`;
+    },
+  },
+);
 
 /**
  * The effective WLL of an item: its marking, or the published default for unmarked
@@ -55,16 +68,7 @@ const memo = new Map<string, ItemRating>();
  * @example itemRating({ kind: "chain", grade: 70, gradeMarked: true, size: "3/8", markedWllLb: null }).wllLb // 6600
  */
 export function itemRating(item: RatableItem): ItemRating {
-  const range = item.details?.chainSizeRange;
-  const key = `${item.kind}|${item.grade}|${item.gradeMarked}|${item.size}|${item.markedWllLb}|${range ? `${range[0]}|${range[1]}` : ""}`;
-  let rating = memo.get(key);
-  if (!rating) {
-    if (memo.size >= MEMO_LIMIT) memo.clear();
-    rating = Object.freeze(rateItem(item));
-    Object.freeze(rating.warnings);
-    memo.set(key, rating);
-  }
-  return rating;
+  return keptRating(item);
 }
 
 function rateItem(item: RatableItem): ItemRating {
