@@ -44,22 +44,10 @@ export function latestInServiceDate(now = new Date()): string {
   return new Date(now.getTime() + IN_SERVICE_DAYS_AHEAD * 86_400_000).toISOString().slice(0, 10);
 }
 
-// Today's latest date, worked out once per UTC day rather than once per item (an import
-// checks 100,000 of them).
-let latestToday = { from: 0, until: 0, date: "" };
-function latestInServiceDateNow(): string {
-  const now = Date.now();
-  if (now < latestToday.from || now >= latestToday.until) {
-    const from = Math.floor(now / 86_400_000) * 86_400_000;
-    latestToday = { from, until: from + 86_400_000, date: latestInServiceDate(new Date(now)) };
-  }
-  return latestToday.date;
-}
-
 const inServiceDate = z
   .iso.date("Enter the date as YYYY-MM-DD.")
   .refine((d) => d >= "1950-01-01", "The in-service date cannot be before 1950.")
-  .refine((d) => d <= latestInServiceDateNow(), { error: () => `The in-service date cannot be after ${latestInServiceDateNow()}, a year from today.` });
+  .refine((d) => d <= latestInServiceDate(), { error: () => `The in-service date cannot be after ${latestInServiceDate()}, a year from today.` });
 
 export const itemInputSchema = z
   .object({
