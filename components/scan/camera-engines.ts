@@ -97,7 +97,9 @@ async function startLibrary(region: HTMLElement, onText: (text: string) => void,
     }
   };
   try {
-    await scanner.start({ facingMode: "environment" }, { fps: 10, qrbox: 250 }, (text) => onText(text), () => {});
+    // disableFlip: the rear camera never shows a tag mirrored, and without it the library
+    // decodes every frame that holds no code twice (once more to try it mirrored).
+    await scanner.start({ facingMode: "environment" }, { fps: 10, qrbox: 250, disableFlip: true }, (text) => onText(text), () => {});
   } catch (error) {
     await stop();
     throw error;
