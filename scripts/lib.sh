@@ -144,16 +144,20 @@ mail_running() { our_process "$DATA/maildev.pid" maildev && http_get "http://127
 
 start_mail() {
   if mail_running; then return; fi
-  for port in "$SMTP_PORT" "$MAIL_WEB_PORT"; do
-    if port_taken "$port"; then
-      say "port $port is taken by a program that is not this project's mail fake; set LINKYARD_SMTP_PORT and LINKYARD_MAIL_WEB_PORT to free ports"
-      exit 1
-    fi
-  done
-  say "starting the local mail fake (SMTP 127.0.0.1:$SMTP_PORT, inbox http://127.0.0.1:$MAIL_WEB_PORT)"
-  (cd "$ROOT"; nohup node_modules/.bin/maildev --ip 127.0.0.1 --smtp "$SMTP_PORT" \
-     --web "$MAIL_WEB_PORT" --web-ip 127.0.0.1 >"$DATA/maildev.log" 2>&1 & echo $! >"$DATA/maildev.pid")
-  for _ in $(seq 1 50); do mail_running && return; sleep 0.2; done
+  # A fake of ours that is still starting (on a loaded machine it can take over 10 s) holds
+  # its ports already: wait for it rather than start another.
+  if ! our_process "$DATA/maildev.pid" maildev; then
+    for port in "$SMTP_PORT" "$MAIL_WEB_PORT"; do
+      if port_taken "$port"; then
+        say "port $port is taken by a program that is not this project's mail fake; set LINKYARD_SMTP_PORT and LINKYARD_MAIL_WEB_PORT to free ports"
+        exit 1
+      fi
+    done
+    say "starting the local mail fake (SMTP 127.0.0.1:$SMTP_PORT, inbox http://127.0.0.1:$MAIL_WEB_PORT)"
+    (cd "$ROOT"; nohup node_modules/.bin/maildev --ip 127.0.0.1 --smtp "$SMTP_PORT" \
+       --web "$MAIL_WEB_PORT" --web-ip 127.0.0.1 >"$DATA/maildev.log" 2>&1 & echo $! >"$DATA/maildev.pid")
+  fi
+  for _ in $(seq 1 150); do mail_running && return; sleep 0.2; done
   start_failed "The mail fake" "$DATA/maildev.log"
 }
 
@@ -161,8 +165,8 @@ start_mail() {
 # stop and start it to prove that queued e-mail waits for it).
 stop_mail() {
   stop_pid_file "$DATA/maildev.pid" maildev
-  for _ in $(seq 1 50); do port_taken "$SMTP_PORT" || return 0; sleep 0.1; done
-  say "the mail fake still holds port $SMTP_PORT"
+  for _ in $(seq 1 50); do port_taken "$SMTP_PORT" || port_taken "$MAIL_WEB_PORT" || return 0; sleep 0.1; done
+  say "the mail fake still holds port $SMTP_PORT or $MAIL_WEB_PORT"
   return 1
 }
 
@@ -212,15 +216,17 @@ port_taken() { (exec 3<>"/dev/tcp/127.0.0.1/$1") 2>/dev/null; }
 # AWS SDK exactly as it would to a hosted bucket.
 start_s3() {
   if s3_running; then return; fi
-  if port_taken "$S3_PORT"; then
-    say "port $S3_PORT is taken by a program that is not this project's file-storage fake; set LINKYARD_S3_PORT to a free port"
-    exit 1
+  if ! our_process "$DATA/s3rver.pid" s3rver; then # else ours, still starting: wait for it
+    if port_taken "$S3_PORT"; then
+      say "port $S3_PORT is taken by a program that is not this project's file-storage fake; set LINKYARD_S3_PORT to a free port"
+      exit 1
+    fi
+    say "starting the local file-storage fake (S3 API on 127.0.0.1:$S3_PORT)"
+    mkdir -p "$DATA/s3"
+    (cd "$ROOT"; nohup node_modules/.bin/s3rver -d "$DATA/s3" -a 127.0.0.1 -p "$S3_PORT" --silent \
+       --configure-bucket "$S3_BUCKET" >"$DATA/s3rver.log" 2>&1 & echo $! >"$DATA/s3rver.pid")
   fi
-  say "starting the local file-storage fake (S3 API on 127.0.0.1:$S3_PORT)"
-  mkdir -p "$DATA/s3"
-  (cd "$ROOT"; nohup node_modules/.bin/s3rver -d "$DATA/s3" -a 127.0.0.1 -p "$S3_PORT" --silent \
-     --configure-bucket "$S3_BUCKET" >"$DATA/s3rver.log" 2>&1 & echo $! >"$DATA/s3rver.pid")
-  for _ in $(seq 1 50); do s3_running && return; sleep 0.2; done
+  for _ in $(seq 1 150); do s3_running && return; sleep 0.2; done
   start_failed "The file-storage fake" "$DATA/s3rver.log"
 }
 
@@ -252,8 +258,13 @@ stop_pid_file() { # $1 = pid file, $2 = a word of the command line it should nam
     local pid
     pid="$(cat "$1")"
     kill "$pid" 2>/dev/null || true
-    # Wait until it is gone (and its port free), so that a start right after does not collide.
+    # Wait until it is gone (and its port free), so that a start right after does not collide;
+    # one that does not end within 5 s is killed.
     for _ in $(seq 1 50); do [ -e "/proc/$pid" ] || break; sleep 0.1; done
+    if [ -e "/proc/$pid" ]; then
+      kill -9 "$pid" 2>/dev/null || true
+      for _ in $(seq 1 20); do [ -e "/proc/$pid" ] || break; sleep 0.1; done
+    fi
   elif [ -r "/proc/$(cat "$1")/cmdline" ]; then
     say "$(basename "$1") names process $(cat "$1"), which is not ours: left running"
   fi

@@ -11,7 +11,13 @@ import { testDb } from "./db";
 const ROOT = path.resolve(__dirname, "../..");
 
 function lib(command: string): void {
-  execFileSync("bash", ["-c", `source scripts/lib.sh && ${command}`], { cwd: ROOT, env: process.env, stdio: "pipe", timeout: 90_000 });
+  try {
+    execFileSync("bash", ["-c", `source scripts/lib.sh && ${command}`], { cwd: ROOT, env: process.env, stdio: "pipe", timeout: 90_000 });
+  } catch (error) {
+    // What the script said (which port, which log) belongs in the test's failure.
+    const { stdout, stderr } = error as { stdout?: Buffer; stderr?: Buffer };
+    throw new Error(`${command} failed: ${[stdout, stderr].map((b) => b?.toString().trim()).filter(Boolean).join("\n") || "no output"}`, { cause: error });
+  }
 }
 
 export const stopMail = () => lib("stop_mail");
