@@ -5,7 +5,7 @@ import path from "node:path";
 import type { Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { openBrowser, SCREENSHOT_DIR, type OpenBrowser } from "./support/browser";
-import { writeQrVideo } from "./support/fake-camera";
+import { cameraReport, countDecoderFrames, writeQrVideo } from "./support/fake-camera";
 import { BASE_URL } from "../support/http";
 import { testDb } from "../support/db";
 import { itemUsability } from "@/lib/stock/usability";
@@ -187,6 +187,7 @@ describe("adding an item by scanning its tag", () => {
     const camera = await openBrowser({ phone: true, extraArgs: ["--use-fake-ui-for-media-stream", "--use-fake-device-for-media-stream", `--use-file-for-fake-video-capture=${video}`] });
     try {
       const p = await camera.context.newPage();
+      await countDecoderFrames(p);
       await signIn(p, "pete");
       await p.goto(`${BASE_URL}/kits/${failing.id}`);
       // The missing corner: front right, on R1.
@@ -196,7 +197,13 @@ describe("adding an item by scanning its tag", () => {
       await form.getByRole("button", { name: "Add the tiedown, then its items" }).click();
       const card = p.getByTestId("tiedown-card").filter({ hasText: "front right" });
       await expect.poll(() => card.count(), { timeout: 15_000 }).toBe(1);
-      await expect.poll(() => p.getByTestId("scan-note").textContent(), { timeout: 30_000 }).toContain(`Added ${chain.tag_code}`);
+      try {
+        await expect.poll(() => p.getByTestId("scan-note").textContent(), { timeout: 30_000 }).toContain(`Added ${chain.tag_code}`);
+      } catch (error) {
+        await shoot(p, "kit-scan-failed");
+        const note = await p.getByTestId("scan-note").textContent();
+        throw new Error(`The camera did not add ${chain.tag_code} within 30 s: ${await cameraReport(p, SCREENSHOT_DIR, "kit-scan-failed")}; note: ${note}`, { cause: error });
+      }
       expect(await card.textContent()).toContain(chain.tag_code);
       const rows = await testDb("kit_items").where({ kit_id: failing.id, item_id: chain.id }).count<{ count: string }[]>("id as count");
       expect(Number(rows[0]!.count)).toBe(1);

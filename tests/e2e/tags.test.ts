@@ -1,4 +1,4 @@
-import { mkdirSync, mkdtempSync, rmSync, writeFileSync } from "node:fs";
+import { mkdirSync, mkdtempSync, rmSync } from "node:fs";
 import { tmpdir } from "node:os";
 import path from "node:path";
 import jsQR from "jsqr";
@@ -6,7 +6,7 @@ import { PNG } from "pngjs";
 import type { Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { openBrowser, SCREENSHOT_DIR, type OpenBrowser } from "./support/browser";
-import { writeQrVideo } from "./support/fake-camera";
+import { cameraReport, countDecoderFrames, writeQrVideo } from "./support/fake-camera";
 import { BASE_URL } from "../support/http";
 import { testDb } from "../support/db";
 import { cellBox, labelsPerSheet, sheetLayout } from "@/lib/tags/sheet";
@@ -192,17 +192,7 @@ describe("scanning with the phone's camera", () => {
       const logs: string[] = [];
       page.on("console", (m) => logs.push(`${m.type()}: ${m.text()}`));
       page.on("pageerror", (e) => logs.push(`pageerror: ${e.message}`));
-      // Counts the frames drawn for the decoder, so that a failure tells a stalled scan loop
-      // from a loop that runs and does not read the code.
-      await page.addInitScript(() => {
-        const w = window as unknown as { __framesDrawn: number };
-        w.__framesDrawn = 0;
-        const draw = CanvasRenderingContext2D.prototype.drawImage as (...args: unknown[]) => void;
-        CanvasRenderingContext2D.prototype.drawImage = function (this: CanvasRenderingContext2D, ...args: unknown[]) {
-          w.__framesDrawn++;
-          return draw.apply(this, args);
-        } as typeof CanvasRenderingContext2D.prototype.drawImage;
-      });
+      await countDecoderFrames(page);
       await signIn(page, "yara");
       const opened = Date.now();
       await page.goto(`${BASE_URL}/scan`);
@@ -211,27 +201,9 @@ describe("scanning with the phone's camera", () => {
         await page.waitForURL(`${BASE_URL}/items/${item.id}`, { timeout: 30_000 }); // slow only on a loaded machine
       } catch (error) {
         await page.screenshot({ path: `${SCREENSHOT_DIR}/scan-camera-failed-phone.png` });
-        const framesDrawn = () => page.evaluate(() => (window as unknown as { __framesDrawn: number }).__framesDrawn);
-        const drawnThen = await framesDrawn();
-        await page.waitForTimeout(1000);
-        const state = await page.evaluate(() => ({
-          framesDrawnInOneSecond: 0,
-          camera: document.querySelector("#camera-status")?.textContent,
-          result: document.querySelector("#scan-result")?.textContent ?? null,
-          videos: [...document.querySelectorAll("video")].map((v) => ({ w: v.videoWidth, h: v.videoHeight, cw: v.clientWidth, ch: v.clientHeight, ready: v.readyState, paused: v.paused })),
-          canvases: [...document.querySelectorAll("#tag-camera canvas")].map((c) => {
-            const canvas = c as HTMLCanvasElement;
-            const t = canvas.getContext("2d")!.getTransform();
-            return { w: canvas.width, h: canvas.height, transform: [t.a, t.b, t.c, t.d, t.e, t.f], png: canvas.toDataURL("image/png") };
-          }),
-        }));
-        state.framesDrawnInOneSecond = (await framesDrawn()) - drawnThen;
-        // What the decoder was last given, kept beside the screenshot.
-        for (const [i, c] of state.canvases.entries()) {
-          writeFileSync(`${SCREENSHOT_DIR}/scan-camera-failed-canvas-${i}.png`, Buffer.from(c.png.split(",")[1]!, "base64"));
-        }
-        const summary = JSON.stringify({ ...state, canvases: state.canvases.map(({ png: _png, ...c }) => c) });
-        throw new Error(`The camera scan did not open the item within 30 s: ${summary}; browser: ${logs.join(" | ") || "nothing logged"}`, { cause: error });
+        const report = await cameraReport(page, SCREENSHOT_DIR, "scan-camera-failed");
+        const result = await page.locator("#scan-result").textContent({ timeout: 1000 }).catch(() => null);
+        throw new Error(`The camera scan did not open the item within 30 s: ${report}; scan result: ${result}; browser: ${logs.join(" | ") || "nothing logged"}`, { cause: error });
       }
       const done = Date.now();
       const on = await cameraOn;
