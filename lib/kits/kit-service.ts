@@ -37,12 +37,17 @@ async function modelsOf(organisationId: string, rows: kits.KitRecord[], trx?: Tx
   if (!rows.length) return [];
   const machineIds = [...new Set(rows.map((r) => r.machineId))];
   const trailerIds = [...new Set(rows.map((r) => r.trailerId))];
-  const [machines, trailers, anchors, tiedowns] = await Promise.all([
-    fleet.getMachinesByIds(organisationId, machineIds, trx),
-    fleet.getTrailersByIds(organisationId, trailerIds, trx),
-    fleet.listAnchorPoints(organisationId, trailerIds, { withRetired: true }, trx),
-    kits.listTiedowns(organisationId, rows.map((r) => r.id), trx),
-  ]);
+  const reads = [
+    () => fleet.getMachinesByIds(organisationId, machineIds, trx),
+    () => fleet.getTrailersByIds(organisationId, trailerIds, trx),
+    () => fleet.listAnchorPoints(organisationId, trailerIds, { withRetired: true }, trx),
+    () => kits.listTiedowns(organisationId, rows.map((r) => r.id), trx),
+  ] as const;
+  // Side by side on the pool; in turn on a transaction, whose one connection runs a query at
+  // a time anyway (pg queues the rest, and says that it will refuse to from pg 9).
+  const [machines, trailers, anchors, tiedowns] = trx
+    ? [await reads[0](), await reads[1](), await reads[2](), await reads[3]()]
+    : await Promise.all([reads[0](), reads[1](), reads[2](), reads[3]()]);
   return rows.map((row) => {
     const machine = machines.find((m) => m.id === row.machineId)!;
     const trailer = trailers.find((t) => t.id === row.trailerId)!;
