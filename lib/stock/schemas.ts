@@ -36,18 +36,37 @@ const length = z.object({
 /** How far ahead an in-service date may be: gear bought for next season, not a typing slip. */
 export const IN_SERVICE_DAYS_AHEAD = 366;
 
+const DAY_MS = 86_400_000;
+const EARLIEST_IN_SERVICE = Date.parse("1950-01-01");
+
+/** The latest in-service date accepted at `now` (ms), as the time of its UTC midnight. */
+function latestInServiceTime(now: number): number {
+  return Math.floor((now + IN_SERVICE_DAYS_AHEAD * DAY_MS) / DAY_MS) * DAY_MS;
+}
+
 /**
  * The latest in-service date accepted on a day (UTC; a day's slack either side of any zone).
  * @example latestInServiceDate(new Date("2026-12-01T12:00:00Z")) // "2027-12-02"
  */
 export function latestInServiceDate(now = new Date()): string {
-  return new Date(now.getTime() + IN_SERVICE_DAYS_AHEAD * 86_400_000).toISOString().slice(0, 10);
+  return new Date(latestInServiceTime(now.getTime())).toISOString().slice(0, 10);
 }
 
+// The bounds compare times, not texts: no date text is made for each row of an import, and a
+// text that is no date at all (NaN) gets the format's words alone, not "cannot be after" too.
 const inServiceDate = z
   .iso.date("Enter the date as YYYY-MM-DD.")
-  .refine((d) => d >= "1950-01-01", "The in-service date cannot be before 1950.")
-  .refine((d) => d <= latestInServiceDate(), { error: () => `The in-service date cannot be after ${latestInServiceDate()}, a year from today.` });
+  .refine((d) => !(Date.parse(d) < EARLIEST_IN_SERVICE), "The in-service date cannot be before 1950.")
+  .refine((d) => !(Date.parse(d) > latestInServiceTime(Date.now())), {
+    error: () => `The in-service date cannot be after ${latestInServiceDate()}, a year from today.`,
+  });
+
+// Kept once, not made again for every item checked (an import checks 100,000).
+const ITEM_GRADES = new Set([30, 43, 70, 80, 100]);
+const GRADE_STAMPED = new Set<ItemKind>(["chain", "hook"]);
+const SIZED = new Set<ItemKind>(["chain", "web-strap", "wire-rope", "hook", "shackle"]);
+/** Kinds with no size table: without a marked WLL, it is the marking that is missing. */
+const RATED_BY_MARKING = new Set<ItemKind>(["binder", "shackle", "rated-item", "hook"]);
 
 export const itemInputSchema = z
   .object({
@@ -60,7 +79,7 @@ export const itemInputSchema = z
         .union([z.string(), z.number()])
         .transform((v, ctx) => {
           const g = parseGrade(v);
-          if (g === undefined || ![30, 43, 70, 80, 100].includes(g)) {
+          if (g === undefined || !ITEM_GRADES.has(g)) {
             ctx.addIssue({ code: "custom", message: "Grade is one of 30, 43, 70, 80 or 100 (as stamped: 3, 4, 7, 8, 10 are read too)." });
             return z.NEVER;
           }
@@ -85,8 +104,8 @@ export const itemInputSchema = z
     const needs = (path: string, message: string) => ctx.addIssue({ code: "custom", path: [path], message });
     if (v.marking === "wll" && !v.markedWll) needs("markedWll", "Enter the WLL marked on the item.");
     if (v.marking !== "wll" && v.markedWll) needs("marking", "A WLL was entered: set the marking to 'WLL marked'.");
-    if (["chain", "hook"].includes(v.kind) && v.marking === "grade" && !v.grade) needs("grade", "Enter the grade stamped on the item.");
-    if (["chain", "web-strap", "wire-rope", "hook", "shackle"].includes(v.kind) && !v.size) {
+    if (GRADE_STAMPED.has(v.kind) && v.marking === "grade" && !v.grade) needs("grade", "Enter the grade stamped on the item.");
+    if (SIZED.has(v.kind) && !v.size) {
       needs("size", v.kind === "web-strap" ? "Enter the webbing width, e.g. 2 or 4 (inches)." : "Enter the size, e.g. 3/8 or 10 mm.");
     }
     if (v.kind === "binder" && !v.chainSizeRange) needs("chainSizeRange", "Enter the chain sizes the binder takes, e.g. 5/16 to 3/8.");
@@ -95,7 +114,7 @@ export const itemInputSchema = z
     // The rated-limit engine decides whether the item can be rated at all (49 CFR 393.108).
     const rating = itemRating(toRatable(v));
     if (rating.wllLb === null) {
-      const field = v.marking === "wll" ? "markedWll" : ["binder", "shackle", "rated-item", "hook"].includes(v.kind) ? "marking" : "size";
+      const field = v.marking === "wll" ? "markedWll" : RATED_BY_MARKING.has(v.kind) ? "marking" : "size";
       needs(field, rating.warnings[0] ?? "This item cannot be rated: enter its marked WLL.");
     }
   });

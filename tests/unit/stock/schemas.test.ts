@@ -66,6 +66,24 @@ describe("issue 11.8: JSON input is taken as typed (item input)", () => {
     expect(issues({ ...wll, inServiceOn: "1899-01-01" })).toEqual(["inServiceOn: The in-service date cannot be before 1950."]);
     expect(issues({ ...wll, inServiceOn: "2026-01-20" })).toEqual([]);
     expect(latestInServiceDate(new Date("2026-12-01T12:00:00Z"))).toBe("2027-12-02");
+    expect(latestInServiceDate(new Date("2026-12-01T23:59:59Z"))).toBe("2027-12-02");
+    expect(latestInServiceDate(new Date("2026-12-02T00:00:00Z"))).toBe("2027-12-03");
+  });
+
+  it("takes the latest in-service date itself and refuses the day after it", () => {
+    const wll = { ...chain, markedWll: { value: 5000, unit: "lb" } };
+    const latest = latestInServiceDate();
+    const dayAfter = new Date(Date.parse(latest) + 86_400_000).toISOString().slice(0, 10);
+    expect(issues({ ...wll, inServiceOn: latest })).toEqual([]);
+    expect(issues({ ...wll, inServiceOn: dayAfter })).toEqual([`inServiceOn: The in-service date cannot be after ${latest}, a year from today.`]);
+    expect(issues({ ...wll, inServiceOn: "1950-01-01" })).toEqual([]);
+  });
+
+  it("says only how to write a date when the text is no date", () => {
+    const wll = { ...chain, markedWll: { value: 5000, unit: "lb" } };
+    for (const text of ["abc", "31/12/2026", "2026-13-45"]) {
+      expect(issues({ ...wll, inServiceOn: text })).toEqual(["inServiceOn: Enter the date as YYYY-MM-DD."]);
+    }
   });
 });
 
