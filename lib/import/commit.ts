@@ -17,6 +17,7 @@ import { inspectionIntervals, organisationClock } from "@/lib/organisations/serv
 import { nextDue } from "@/lib/stock/intervals";
 import type { ItemKind } from "@/lib/stock/labels";
 import { freshTagCodes } from "@/lib/stock/tag-codes";
+import { boundedMemo } from "@/lib/memo";
 import { removeStored, storeFromDisk } from "@/lib/storage/files";
 import { emptySummary, importBody, type ImportBody } from "./answers";
 import { csvLine } from "./csv-write";
@@ -132,24 +133,19 @@ async function commit(
       let lastEventId: number | null = null;
       let headers: string[] = [];
       const note = (line: number) => `Imported from ${request.file.name}, line ${line}`;
-      // A file has few in-service dates: each date and kind's first inspection is worked out once.
-      const dueDates = new Map<string, string>();
-      const nextInspection = (inServiceOn: string | undefined, kind: ItemKind) => {
-        const key = `${inServiceOn ?? today}|${kind}`;
-        let due = dueDates.get(key);
-        if (due === undefined) {
-          due = nextDue(inServiceOn ?? today, intervals[kind]);
-          if (dueDates.size < 10_000) dueDates.set(key, due);
-        }
-        return due;
-      };
+      // A file has few in-service dates: each date and kind's first inspection is worked out
+      // once (2 µs a call, 0.2 s of 100,000 rows otherwise).
+      const firstInspection = boundedMemo((d: { day: string; kind: ItemKind }) => nextDue(d.day, intervals[d.kind]), {
+        limit: 10_000,
+        key: (d) => `${d.day}|${d.kind}`,
+      });
 
       // A chunk is written behind the reading: while PostgreSQL writes one chunk on the
       // transaction's connection, the next is read and checked. One chunk at a time is in
       // flight, and its failure stops the import at the next chunk or at the end.
       let writing: Promise<void> = Promise.resolve();
       const writeChunk = async (creates: PreparedCreate[], codes: string[], updates: PreparedUpdate[]) => {
-        const last = [await writeCreates(trx, writer, creates, codes, { next: nextInspection }, note), await writeUpdates(trx, writer, updates, note)];
+        const last = [await writeCreates(trx, writer, creates, codes, (c) => firstInspection({ day: c.input.inServiceOn ?? today, kind: c.input.kind }), note), await writeUpdates(trx, writer, updates, note)];
         for (const id of last) if (id !== null) lastEventId = Math.max(lastEventId ?? 0, id);
       };
       // The new items' tag codes are drawn and checked on another connection too, while the
@@ -252,11 +248,11 @@ class Refused {
 }
 
 async function writeCreates(
-  trx: Tx, writer: imports.ImportWriter, creates: PreparedCreate[], codes: string[], due: { next: (inServiceOn: string | undefined, kind: ItemKind) => string }, note: (line: number) => string,
+  trx: Tx, writer: imports.ImportWriter, creates: PreparedCreate[], codes: string[], dueOf: (create: PreparedCreate) => string, note: (line: number) => string,
 ): Promise<number | null> {
   return imports.copyImportedItems(
     trx, writer,
-    creates.map((c, i) => ({ fields: c.row, tagCode: codes[i], nextInspectionDue: due.next(c.input.inServiceOn, c.input.kind), note: note(c.line) })),
+    creates.map((c, i) => ({ fields: c.row, tagCode: codes[i], nextInspectionDue: dueOf(c), note: note(c.line) })),
   );
 }
 

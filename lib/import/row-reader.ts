@@ -3,6 +3,7 @@
 // as the add-item form and the API, including the rated-limit engine. Every problem comes
 // back as { column, message } with the column as the file names it.
 import { z } from "zod";
+import { boundedMemo } from "@/lib/memo";
 import type { ItemFields, ItemRecord } from "@/db/items";
 import { toFeet } from "@/lib/securement/units";
 import { itemChanges, type ItemChanges } from "@/lib/stock/changes";
@@ -63,8 +64,8 @@ export class RowReader {
   readonly columns: { index: number; header: string; field: ImportField; unit?: string }[];
   private readonly columnOf = new Map<InputKey | RowKey, string>();
   // A stock list repeats the same kinds, grades, sizes, yards and dates thousands of times:
-  // each column remembers what its first distinct cells read as (frozen, as rows share them).
-  private readonly remembered: Map<string, Read<unknown>>[];
+  // each column remembers what its cells read as (bounded, frozen, as rows share them).
+  private readonly remembered: ((cell: string) => Read<unknown>)[];
   // Every row provides the inputs the file has columns for (a blank cell provides "nothing"),
   // plus the mechanism when its kind names one: two sets, shared by the rows and never changed.
   private readonly provided: ReadonlySet<InputKey>;
@@ -87,7 +88,9 @@ export class RowReader {
       return [{ index, header, field, unit }];
     });
     for (const c of this.columns) this.columnOf.set(c.field === "tagCode" || c.field === "quantity" ? c.field : INPUT_OF[c.field], c.header);
-    this.remembered = this.columns.map(() => new Map());
+    this.remembered = this.columns.map((c) =>
+      boundedMemo((cell: string) => frozen(this.readCell(c.field as Exclude<ImportField, RowKey>, cell, c.unit)), { limit: REMEMBERED_CELLS, key: (cell) => cell }),
+    );
     const inputs = this.columns.flatMap((c) => (c.field === "tagCode" || c.field === "quantity" ? [] : [INPUT_OF[c.field]]));
     this.provided = new Set(inputs);
     this.providedWithMechanism = new Set([...inputs, "mechanism"]);
@@ -129,16 +132,8 @@ export class RowReader {
       }
       const key = INPUT_OF[c.field];
       if (!cell) continue;
-      let r: Read<unknown> | undefined;
-      if (c.field === "serial" || c.field === "ends") r = { value: cell }; // as written, and rarely repeated
-      else {
-        const memory = this.remembered[i];
-        r = memory.get(cell);
-        if (!r) {
-          r = frozen(this.readCell(c.field, cell, c.unit));
-          if (memory.size < REMEMBERED_CELLS) memory.set(cell, r);
-        }
-      }
+      // Serials and end fittings as written (rarely repeated); the rest remembered per column.
+      const r: Read<unknown> = c.field === "serial" || c.field === "ends" ? { value: cell } : this.remembered[i](cell);
       if ("error" in r) {
         errors.push({ line, column: c.header, message: r.error });
         continue;

@@ -14,7 +14,7 @@ const words = (s: string) => s.toLowerCase().replace(/[-_/.,]+/g, " ").replace(/
  * @example unneutralise("'-A12") // "-A12"
  */
 export function unneutralise(cell: string): string {
-  return cell.charCodeAt(0) === 39 && /^'[=+\-@\t\r]/.test(cell) ? cell.slice(1) : cell;
+  return cell.startsWith("'") && /^'[=+\-@\t\r]/.test(cell) ? cell.slice(1) : cell;
 }
 
 const KIND_WORDS: [ItemKind, string[], ("ratchet" | "lever")?][] = [
