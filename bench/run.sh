@@ -52,7 +52,7 @@ serve() {
     exit 1
   fi
   say "serving the build on $APP_URL for the benchmarks"
-  (cd "$ROOT"; nohup node --import tsx server.mts -H 127.0.0.1 -p "$BENCH_PORT" >>"$DATA/bench-app.log" 2>&1 & echo $! >"$DATA/bench-app.pid")
+  (cd "$ROOT"; nohup "${APP_SERVER[@]}" -H 127.0.0.1 -p "$BENCH_PORT" >>"$DATA/bench-app.log" 2>&1 & echo $! >"$DATA/bench-app.pid")
   wait_for_http "$APP_URL/api/health" "$DATA/bench-app.log"
 }
 : >"$DATA/bench-app.log"

@@ -23,4 +23,4 @@ cat <<MSG
 MSG
 cd "$ROOT"
 echo $$ >"$DATA/app.pid"
-exec node --import tsx server.mts -H 127.0.0.1 -p "$PORT"
+exec "${APP_SERVER[@]}" -H 127.0.0.1 -p "$PORT"

@@ -58,7 +58,7 @@ build_if_stale
 export TRUSTED_PROXIES="127.0.0.1"
 say "serving the build on $APP_URL for the tests"
 stop_pid_file "$DATA/test-app.pid" server.mts
-(cd "$ROOT"; nohup node --import tsx server.mts -H 127.0.0.1 -p "$TEST_PORT" >"$DATA/test-app.log" 2>&1 & echo $! >"$DATA/test-app.pid")
+(cd "$ROOT"; nohup "${APP_SERVER[@]}" -H 127.0.0.1 -p "$TEST_PORT" >"$DATA/test-app.log" 2>&1 & echo $! >"$DATA/test-app.pid")
 start_worker test-worker
 wait_for_http "$APP_URL/api/health" "$DATA/test-app.log"
 

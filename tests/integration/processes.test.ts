@@ -1,26 +1,25 @@
 import { randomUUID } from "node:crypto";
-import { spawn, type ChildProcess } from "node:child_process";
-import path from "node:path";
+import { readFileSync } from "node:fs";
+import type { ChildProcess } from "node:child_process";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { newTagCode } from "@/lib/tags/code";
 import { Client, mailsTo, latestMailTo, newOrganisation, TEST_PASSWORD, uniqueEmail } from "../support/http";
 import { testDb } from "../support/db";
-import { sleep, startWorker, stopWorker } from "../support/services";
+import { sleep, spawnAppServer, startWorker, stopWorker } from "../support/services";
 
 // Several app processes behind a load balancer, against one PostgreSQL: two more servers of
-// the same build (as the scripts start them: node --import tsx server.mts), on ports of their
+// the same build (as the scripts start them), on ports of their
 // own, with the test server's environment. Whatever one process knows, the other must know
 // too, because it lives in the database: sessions, the sign-in and tag-lookup limits, an
 // import's progress; and two job workers send each queued e-mail once.
 
-const ROOT = path.resolve(__dirname, "../..");
 const PORTS = [10, 11].map((n) => Number(process.env.LINKYARD_TEST_PORT ?? 3100) + n);
 const [A, B] = PORTS.map((p) => `http://127.0.0.1:${p}`) as [string, string];
 const servers: ChildProcess[] = [];
 const SECOND_WORKER = "test-worker-processes";
 
 async function startServer(port: number): Promise<void> {
-  const child = spawn(process.execPath, ["--import", "tsx", "server.mts", "-H", "127.0.0.1", "-p", String(port)], { cwd: ROOT, env: process.env, stdio: "ignore" });
+  const child = spawnAppServer(port);
   servers.push(child);
   for (let i = 0; i < 160; i++) {
     try {
@@ -56,6 +55,16 @@ function through(client: Client, base: string): Client {
 }
 
 describe("two app processes against one database", () => {
+  it("each runs with the heap budget the scripts give every web process", () => {
+    // Without it V8 sizes the heap from the machine's memory, and the footprint with it.
+    for (const child of servers) {
+      const argv = readFileSync(`/proc/${child.pid}/cmdline`, "utf8").split("\0");
+      expect(argv).toContain(`--max-old-space-size=${process.env.LINKYARD_HEAP_MB}`);
+      expect(argv).toContain("server.mts");
+    }
+    expect(Number(process.env.LINKYARD_HEAP_MB)).toBeGreaterThan(0);
+  });
+
   it("a session made on one works on the other, and ends on both", async () => {
     const { email } = await newOrganisation("Two Process Co");
     const person = new Client(undefined, A);

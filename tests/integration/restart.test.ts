@@ -1,22 +1,17 @@
-import { spawn, type ChildProcess } from "node:child_process";
-import path from "node:path";
+import type { ChildProcess } from "node:child_process";
 import { afterAll, describe, expect, it } from "vitest";
 import { newOrganisation, TEST_PASSWORD } from "../support/http";
+import { spawnAppServer } from "../support/services";
 
 // Sessions live in PostgreSQL, so a person stays signed in when the app restarts. This test
 // runs a second server of the same build on its own port, signs in, restarts it, and asks again.
 
-const ROOT = path.resolve(__dirname, "../..");
 const PORT = Number(process.env.LINKYARD_TEST_PORT ?? 3100) + 77;
 const BASE = `http://127.0.0.1:${PORT}`;
 let server: ChildProcess | undefined;
 
 async function startServer(): Promise<void> {
-  server = spawn(process.execPath, ["--import", "tsx", "server.mts", "-H", "127.0.0.1", "-p", String(PORT)], {
-    cwd: ROOT,
-    env: { ...process.env, APP_URL: BASE },
-    stdio: "ignore",
-  });
+  server = spawnAppServer(PORT, { ...process.env, APP_URL: BASE });
   for (let i = 0; i < 120; i++) {
     try {
       if ((await fetch(`${BASE}/api/health`)).ok) return;

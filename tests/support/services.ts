@@ -1,4 +1,4 @@
-import { execFileSync } from "node:child_process";
+import { execFileSync, spawn, type ChildProcess } from "node:child_process";
 import path from "node:path";
 import { QUEUES, sendJob, type QueueName } from "../../db/jobs";
 import { testDb } from "./db";
@@ -18,6 +18,12 @@ function lib(command: string): void {
     const { stdout, stderr } = error as { stdout?: Buffer; stderr?: Buffer };
     throw new Error(`${command} failed: ${[stdout, stderr].map((b) => b?.toString().trim()).filter(Boolean).join("\n") || "no output"}`, { cause: error });
   }
+}
+
+/** One more web process of the same build, started as the scripts start theirs (APP_SERVER). */
+export function spawnAppServer(port: number, env: NodeJS.ProcessEnv = process.env): ChildProcess {
+  // exec: the child is node itself, so that signals reach it.
+  return spawn("bash", ["-c", `source scripts/lib.sh && exec "\${APP_SERVER[@]}" -H 127.0.0.1 -p ${port}`], { cwd: ROOT, env, stdio: "ignore" });
 }
 
 export const stopMail = () => lib("stop_mail");
