@@ -1,3 +1,6 @@
+import { TZDate } from "@date-fns/tz";
+import { format } from "date-fns";
+import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { addDays, addMonths, canonicalTimeZone, clockTimeIn, dayLabel, daysBetween, formatDateTime, formatDay, isIsoDate, isTimeZone, timeZones, todayIn, monthOf, monthWords, shortDate, startOfDayIn, weekday, weekStart, writtenDate } from "@/lib/time";
 
@@ -27,6 +30,52 @@ describe("formatDay and formatDateTime", () => {
     expect(formatDay(at, "America/Chicago")).toBe("2026-12-01");
     expect(formatDateTime(at.toISOString(), "America/New_York")).toBe("2026-12-01 20:04");
     expect(formatDateTime(new Date("2026-07-01T12:00:00Z"), "America/Chicago")).toBe("2026-07-01 07:00"); // CDT
+  });
+});
+
+describe("wall clock of an instant, against @date-fns/tz as the reference", () => {
+  // lib/time reads an instant's wall clock through Intl; date-fns with @date-fns/tz (a
+  // general-purpose library, tested on its own) must agree to the minute, in zones with
+  // daylight saving, half- and quarter-hour offsets and a date-line jump.
+  const zones = ["UTC", "America/Chicago", "America/St_Johns", "Europe/London", "Australia/Lord_Howe", "Asia/Kathmandu", "Pacific/Chatham", "Pacific/Apia", "America/Santiago"];
+  it("agrees on date, hour and minute at any instant from 1971 to 2099", () => {
+    fc.assert(
+      fc.property(fc.integer({ min: Date.UTC(1971, 0, 1), max: Date.UTC(2099, 11, 31) }), fc.constantFrom(...zones), (ms, zone) => {
+        const reference = format(new TZDate(ms, zone), "yyyy-MM-dd HH:mm");
+        expect(formatDateTime(new Date(ms), zone)).toBe(reference);
+        expect(formatDay(new Date(ms).toISOString(), zone)).toBe(reference.slice(0, 10));
+        expect(todayIn(zone, new Date(ms))).toBe(reference.slice(0, 10));
+        expect(clockTimeIn(zone, new Date(ms))).toBe(reference.slice(11));
+      }),
+      { numRuns: 2000 },
+    );
+  });
+
+  it("answers each minute anew, the same within a minute and after another zone's question", () => {
+    const before = new Date("2026-12-02T05:59:59.999Z"); // 23:59 in Chicago
+    const turn = new Date("2026-12-02T06:00:00Z"); // 00:00
+    expect(todayIn("America/Chicago", before)).toBe("2026-12-01");
+    expect(todayIn("America/Chicago", new Date(before.getTime() - 59_000))).toBe("2026-12-01");
+    expect(todayIn("America/Chicago", turn)).toBe("2026-12-02");
+    expect(todayIn("UTC", turn)).toBe("2026-12-02");
+    expect(todayIn("America/Chicago", before)).toBe("2026-12-01"); // back in time too
+    expect(todayIn("Pacific/Auckland", before)).toBe("2026-12-02");
+    expect(todayIn("America/Chicago", turn)).toBe("2026-12-02");
+  });
+
+  it("reads odd historical offsets (Liberia's −0:44:30 until 1972) to the minute", () => {
+    // 12:00:00 − 0:44:30 = 11:15:30; 40 s later it is 11:16:10 (within the same UTC minute).
+    expect(formatDateTime(new Date("1971-06-01T12:00:00Z"), "Africa/Monrovia")).toBe("1971-06-01 11:15");
+    expect(formatDateTime(new Date("1971-06-01T12:00:40Z"), "Africa/Monrovia")).toBe("1971-06-01 11:16");
+  });
+
+  it("midnight is 00:00, never 24:00", () => {
+    expect(formatDateTime(new Date("2026-12-02T06:00:00Z"), "America/Chicago")).toBe("2026-12-02 00:00");
+  });
+
+  it("refuses an unknown zone and an invalid time, as date-fns does", () => {
+    expect(() => todayIn("Mars/Olympus")).toThrow(RangeError);
+    expect(() => formatDateTime("not a time", "UTC")).toThrow(RangeError);
   });
 });
 
