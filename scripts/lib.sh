@@ -17,8 +17,8 @@ mkdir -p "$DATA"
 # (LINKYARD_HEAP_MB, default 1024 MB of old space) instead of V8's default of a quarter of the
 # machine's memory up to 4 GB: V8 lets garbage grow to a larger multiple of the live heap the
 # larger that limit is, so on a 24 GB machine a 100,000-row import took the process from
-# 185 MB to about 410 MB; with 1,024 MB about 330 MB (bench/RESULTS.md). A budget of
-# one's own also tells how many processes fit on one machine.
+# 185 MB to about 410 MB; with 1,024 MB to 300-330 MB (bench/RESULTS.md). A budget of its
+# own also makes a process's footprint the same on every machine.
 export LINKYARD_HEAP_MB="${LINKYARD_HEAP_MB:-1024}"
 APP_SERVER=(node --max-old-space-size="$LINKYARD_HEAP_MB" --import tsx server.mts)
 

@@ -8,10 +8,10 @@ import { testDb } from "../support/db";
 import { sleep, spawnAppServer, startWorker, stopWorker } from "../support/services";
 
 // Several app processes behind a load balancer, against one PostgreSQL: two more servers of
-// the same build (as the scripts start them), on ports of their
-// own, with the test server's environment. Whatever one process knows, the other must know
-// too, because it lives in the database: sessions, the sign-in and tag-lookup limits, an
-// import's progress; and two job workers send each queued e-mail once.
+// the same build, started as the scripts start theirs, on ports of their own, with the test
+// server's environment. Whatever one process knows, the other must know too, because it
+// lives in the database: sessions, the sign-in and tag-lookup limits, an import's progress;
+// and two job workers send each queued e-mail once.
 
 const PORTS = [10, 11].map((n) => Number(process.env.LINKYARD_TEST_PORT ?? 3100) + n);
 const [A, B] = PORTS.map((p) => `http://127.0.0.1:${p}`) as [string, string];
