@@ -1,7 +1,7 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { MachineClassForm } from "@/components/fleet/machine-class-form";
-import { buttonClass } from "@/components/ui/button-class";
+import { FleetListHead } from "@/components/fleet/page-heads";
 import { getUnits, listMachineClasses } from "@/db/fleet";
 import { can } from "@/lib/auth/roles";
 import { requirePage } from "@/lib/auth/session";
@@ -19,14 +19,7 @@ export default async function MachinesPage() {
   const classes = owner ? await listMachineClasses(principal.organisationId) : [];
   return (
     <div className="flex max-w-3xl flex-col gap-5">
-      <div className="flex flex-wrap items-center justify-between gap-3">
-        <h1 className="text-3xl font-bold">Machines</h1>
-        {can(principal, "fleet.manage") && (
-          <Link href="/machines/new" className={buttonClass("primary")}>
-            Add a machine
-          </Link>
-        )}
-      </div>
+      <FleetListHead title="Machines" addHref="/machines/new" addLabel="Add a machine" mayAdd={can(principal, "fleet.manage")} />
       {machines.length === 0 ? (
         <p className="text-lg">No machines yet.</p>
       ) : (

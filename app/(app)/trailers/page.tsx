@@ -1,6 +1,6 @@
 import type { Metadata } from "next";
 import Link from "next/link";
-import { buttonClass } from "@/components/ui/button-class";
+import { FleetListHead } from "@/components/fleet/page-heads";
 import { getUnits } from "@/db/fleet";
 import { can } from "@/lib/auth/roles";
 import { requirePage } from "@/lib/auth/session";
@@ -18,14 +18,7 @@ export default async function TrailersPage() {
   const trailers = await listTrailers(principal.organisationId, today);
   return (
     <div className="flex max-w-3xl flex-col gap-5">
-      <div className="flex flex-wrap items-center justify-between gap-3">
-        <h1 className="text-3xl font-bold">Trailers</h1>
-        {can(principal, "fleet.manage") && (
-          <Link href="/trailers/new" className={buttonClass("primary")}>
-            Add a trailer
-          </Link>
-        )}
-      </div>
+      <FleetListHead title="Trailers" addHref="/trailers/new" addLabel="Add a trailer" mayAdd={can(principal, "fleet.manage")} />
       {trailers.length === 0 ? (
         <p className="text-lg">No trailers yet.</p>
       ) : (

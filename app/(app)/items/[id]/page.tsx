@@ -5,6 +5,7 @@ import { CertificateForm, ReasonForm, TagOutForm } from "@/components/items/item
 import { OpensAtTop } from "@/components/items/opens-at-top";
 import { VerdictBlock } from "@/components/items/verdict";
 import { buttonClass } from "@/components/ui/button-class";
+import { Fact } from "@/components/ui/fact";
 import { listEvents } from "@/db/items";
 import { can } from "@/lib/auth/roles";
 import { toFeet, toKg } from "@/lib/securement/units";
@@ -29,15 +30,6 @@ const BASIS_WORDS: Record<ItemRating["basis"], string> = {
   none: "No figure can be given for it.",
 };
 const kg = (n: number) => `${Math.round(toKg({ value: n, unit: "lb" }).value).toLocaleString("en-US")} kg`;
-
-function Fact({ label, children }: { label: string; children: React.ReactNode }) {
-  return (
-    <div className="flex flex-col">
-      <dt className="text-base text-ink-soft">{label}</dt>
-      <dd className="text-lg font-bold">{children}</dd>
-    </div>
-  );
-}
 
 /** The mark of a folded section: down when closed, up when open. */
 function Chevron() {

@@ -1,6 +1,6 @@
 import type { Metadata } from "next";
-import Link from "next/link";
 import { notFound } from "next/navigation";
+import { FleetRecordHead } from "@/components/fleet/page-heads";
 import { MachineForm } from "@/components/fleet/machine-form";
 import { Fact } from "@/components/ui/fact";
 import { getMachine, getUnits } from "@/db/fleet";
@@ -26,9 +26,7 @@ export default async function MachinePage({ params, searchParams }: { params: Pr
   const saved = (await searchParams).saved === "1";
   return (
     <div className="flex max-w-3xl flex-col gap-5">
-      <Link href="/machines" className="flex min-h-tap items-center text-lg font-bold underline">← All machines</Link>
-      <h1 className="text-3xl font-bold">{m.name}</h1>
-      {saved && <p role="status" className="rounded-lg border-2 border-ok bg-ok-bg p-3 text-lg font-bold text-ok">Saved.</p>}
+      <FleetRecordHead backHref="/machines" backLabel="All machines" name={m.name} saved={saved} />
       <dl className="grid grid-cols-2 gap-3">
         <Fact label="Class">{m.classLabel}</Fact>
         <Fact label="Shipping weight">{formatWeight(m.weight.value, units)}</Fact>

@@ -1,6 +1,7 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
+import { FleetRecordHead } from "@/components/fleet/page-heads";
 import { AnchorActions } from "@/components/fleet/anchor-actions";
 import { TrailerForm } from "@/components/fleet/trailer-form";
 import { UsableBadge } from "@/components/kits/state-badge";
@@ -43,9 +44,7 @@ export default async function TrailerPage({ params, searchParams }: { params: Pr
   const saved = (await searchParams).saved === "1";
   return (
     <div className="flex max-w-3xl flex-col gap-5">
-      <Link href="/trailers" className="flex min-h-tap items-center text-lg font-bold underline">← All trailers</Link>
-      <h1 className="text-3xl font-bold">{t.name}</h1>
-      {saved && <p role="status" className="rounded-lg border-2 border-ok bg-ok-bg p-3 text-lg font-bold text-ok">Saved.</p>}
+      <FleetRecordHead backHref="/trailers" backLabel="All trailers" name={t.name} saved={saved} />
       <dl className="grid grid-cols-2 gap-3">
         <Fact label="Type">{t.typeLabel}</Fact>
         <Fact label="Coupling">{COUPLING_LABELS[t.coupling]}</Fact>
