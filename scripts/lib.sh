@@ -14,9 +14,9 @@ export NEXT_TELEMETRY_DISABLED=1
 mkdir -p "$DATA"
 
 # How every script serves the app. Each web process gets a fixed V8 heap budget
-# (LINKYARD_HEAP_MB, default 1024 MB of old space) instead of V8's default of a quarter of the
-# machine's memory up to 4 GB: V8 lets garbage grow to a larger multiple of the live heap the
-# larger that limit is, so on a 24 GB machine a 100,000-row import took the process from
+# (LINKYARD_HEAP_MB, default 1024 MB of old space) instead of V8's default, which V8 sizes
+# from the machine's memory (4,144 MB on a 24 GB machine). The larger that limit, the more
+# garbage V8 lets pile up over the live heap: a 100,000-row import took the process from
 # 185 MB to about 410 MB; with 1,024 MB to 300-330 MB (bench/RESULTS.md). A budget of its
 # own also makes a process's footprint the same on every machine.
 export LINKYARD_HEAP_MB="${LINKYARD_HEAP_MB:-1024}"
