@@ -5,7 +5,7 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { newTagCode } from "@/lib/tags/code";
 import { Client, mailsTo, latestMailTo, newOrganisation, TEST_PASSWORD, uniqueEmail } from "../support/http";
 import { testDb } from "../support/db";
-import { sleep, spawnAppServer, startWorker, stopWorker } from "../support/services";
+import { sleep, startAppServer, startWorker, stopAppServer, stopWorker } from "../support/services";
 
 // Several app processes behind a load balancer, against one PostgreSQL: two more servers of
 // the same build, started as the scripts start theirs, on ports of their own, with the test
@@ -18,35 +18,11 @@ const [A, B] = PORTS.map((p) => `http://127.0.0.1:${p}`) as [string, string];
 const servers: ChildProcess[] = [];
 const SECOND_WORKER = "test-worker-processes";
 
-async function startServer(port: number): Promise<void> {
-  const child = spawnAppServer(port);
-  servers.push(child);
-  for (let i = 0; i < 160; i++) {
-    try {
-      if ((await fetch(`http://127.0.0.1:${port}/api/health`)).ok) return;
-    } catch {
-      /* not up yet */
-    }
-    if (child.exitCode !== null) throw new Error(`the server on port ${port} exited (${child.exitCode})`);
-    await sleep(250);
-  }
-  throw new Error(`the server on port ${port} did not start`);
-}
-
-async function stopServers(): Promise<void> {
-  await Promise.all(
-    servers.filter((s) => s.exitCode === null).map((s) => {
-      const exited = new Promise((r) => s.once("exit", r));
-      s.kill("SIGTERM");
-      return exited;
-    }),
-  );
-}
-
 beforeAll(async () => {
-  await Promise.all(PORTS.map(startServer));
+  // Each server is kept as soon as it is up, so that afterAll stops it even if the other fails.
+  await Promise.all(PORTS.map(async (port) => servers.push(await startAppServer(port))));
 }, 90_000);
-afterAll(stopServers);
+afterAll(() => Promise.all(servers.map(stopAppServer)));
 
 /** One caller (one client address) reaching the app through either process. */
 function through(client: Client, base: string): Client {

@@ -1,7 +1,7 @@
 import type { ChildProcess } from "node:child_process";
 import { afterAll, describe, expect, it } from "vitest";
 import { newOrganisation, TEST_PASSWORD } from "../support/http";
-import { spawnAppServer } from "../support/services";
+import { startAppServer, stopAppServer } from "../support/services";
 
 // Sessions live in PostgreSQL, so a person stays signed in when the app restarts. This test
 // runs a second server of the same build on its own port, signs in, restarts it, and asks again.
@@ -11,23 +11,11 @@ const BASE = `http://127.0.0.1:${PORT}`;
 let server: ChildProcess | undefined;
 
 async function startServer(): Promise<void> {
-  server = spawnAppServer(PORT, { ...process.env, APP_URL: BASE });
-  for (let i = 0; i < 120; i++) {
-    try {
-      if ((await fetch(`${BASE}/api/health`)).ok) return;
-    } catch {
-      /* not up yet */
-    }
-    await new Promise((r) => setTimeout(r, 250));
-  }
-  throw new Error("the second server did not start");
+  server = await startAppServer(PORT, { ...process.env, APP_URL: BASE });
 }
 
 async function stopServer(): Promise<void> {
-  if (!server || server.exitCode !== null) return;
-  const exited = new Promise((r) => server!.once("exit", r));
-  server.kill("SIGTERM");
-  await exited;
+  if (server) await stopAppServer(server);
 }
 
 afterAll(stopServer);

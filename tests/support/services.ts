@@ -20,10 +20,35 @@ function lib(command: string): void {
   }
 }
 
-/** One more web process of the same build, started as the scripts start theirs (APP_SERVER). */
-export function spawnAppServer(port: number, env: NodeJS.ProcessEnv = process.env): ChildProcess {
+const ended = (child: ChildProcess) => child.exitCode !== null || child.signalCode !== null;
+
+/**
+ * One more web process of the same build, started as the scripts start theirs (APP_SERVER),
+ * answered once its health check answers. A server that exits or is not up in 40 s is a
+ * failure (and is stopped).
+ */
+export async function startAppServer(port: number, env: NodeJS.ProcessEnv = process.env): Promise<ChildProcess> {
   // exec: the child is node itself, so that signals reach it.
-  return spawn("bash", ["-c", `source scripts/lib.sh && exec "\${APP_SERVER[@]}" -H 127.0.0.1 -p ${port}`], { cwd: ROOT, env, stdio: "ignore" });
+  const child = spawn("bash", ["-c", `source scripts/lib.sh && exec "\${APP_SERVER[@]}" -H 127.0.0.1 -p ${port}`], { cwd: ROOT, env, stdio: "ignore" });
+  for (let i = 0; i < 160; i++) {
+    try {
+      if ((await fetch(`http://127.0.0.1:${port}/api/health`)).ok) return child;
+    } catch {
+      /* not up yet */
+    }
+    if (ended(child)) throw new Error(`the server on port ${port} exited (${child.exitCode ?? child.signalCode})`);
+    await sleep(250);
+  }
+  await stopAppServer(child);
+  throw new Error(`the server on port ${port} did not start within 40 s`);
+}
+
+/** Stops a server of startAppServer and waits until it has exited. */
+export async function stopAppServer(child: ChildProcess): Promise<void> {
+  if (ended(child)) return;
+  const exited = new Promise((r) => child.once("exit", r));
+  child.kill("SIGTERM");
+  await exited;
 }
 
 export const stopMail = () => lib("stop_mail");
