@@ -298,12 +298,13 @@ export async function runImport(records: AsyncIterable<CsvRecord | CsvFatal>, op
         }
       } else {
         const serials = r.quantity > 1 ? quantitySerials(checked.input.serial, r.quantity) : [checked.input.serial];
+        if (keep && r.quantity === 1) creates.push({ line: r.line, input: checked.input, row });
         if (keep && r.quantity > 1) {
           for (const serial of serials) {
             const input = { ...checked.input, serial };
             creates.push({ line: r.line, input, row: serial === checked.input.serial ? row : storedFields(input) });
           }
-        } else if (keep) creates.push({ line: r.line, input: checked.input, row });
+        }
         summary.created += serials.length;
         preview(r.line, "create", r.quantity > 1 ? { ...row, serial: serials[0] ? `${serials[0]} … ${serials.at(-1)}` : null } : row, null, undefined, r.quantity);
       }
